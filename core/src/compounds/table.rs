@@ -1,0 +1,827 @@
+//! The compound library, as data: one row per compound, every number with its source.
+//!
+//! Conventions used throughout:
+//! - Molar masses are from IUPAC atomic weights (computed with chemicals 1.5.2), in kg/mol.
+//! - "CRC" means CRC Handbook of Chemistry and Physics, *Physical Constants of Organic
+//!   Compounds*, as tabulated in chemicals 1.5.2. That table stores a density together with its
+//!   measurement temperature; the decoded value and temperature are given here.
+//! - Vapour-pressure coefficients are copied exactly from the published set named in
+//!   `vapour_pressure_source` (as stored in chemicals 1.5.2; NIST WebBook sets converted back to
+//!   the WebBook's own form log10(p/bar) = A - B/(T/K + C) by A = A'/ln 10 - 5, B = B'/ln 10).
+//!   `t_min_k`..`t_max_k` is the range the authors fitted.
+//! - `relative_uncertainty` of a measured set used inside its range is 0.02-0.05: that figure is
+//!   common practice, no source. Larger figures are explained in the row.
+//! - Compounds with no published correlation get a two-point Antoine in the form
+//!   ln(p/Pa) = A - B/(T/K + C) with an assumed C = -43 K (a value typical of the published
+//!   terpenoid sets above: cineole -43.6, geraniol -42.4, estragole -41.9). The two points, C and
+//!   the resulting A and B are written beside each such row; the fitted range is the span
+//!   between the two points.
+//! - Water solubilities marked "from memory" were not checked against a source; they carry a
+//!   relative uncertainty of 0.5.
+
+use super::*;
+
+/// Every compound of the library.
+pub static COMPOUNDS: &[Compound] = &[
+    // ---------------------------------------------------------------- monoterpene hydrocarbons
+    Compound {
+        id: "alpha-pinene",
+        name: "α-Pinene",
+        cas: "80-56-8",
+        class: CompoundClass::MonoterpeneHydrocarbon,
+        molar_mass_kg_per_mol: 0.136234,
+        liquid_density_kg_per_m3: 853.9,
+        density_temperature_c: 25.0,
+        normal_boiling_point_k: 429.45,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 430 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 3.92161, b: 1411.868995, c: -68.817 },
+            t_min_k: 292.59,
+            t_max_k: 428.91,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 292.59-428.91 K (as stored in chemicals 1.5.2, converted to log10 bar)",
+        water_solubility_kg_per_m3: 0.0025,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 2.5 mg/L near 25 °C, from memory; within the 5-30 mg/L measured for terpene hydrocarbons by Fichan, Larroche & Gros, J. Chem. Eng. Data 44 (1999) 56-62",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8539 g/cm³ at 25 °C",
+    },
+    Compound {
+        id: "beta-pinene",
+        name: "β-Pinene",
+        cas: "127-91-3",
+        class: CompoundClass::MonoterpeneHydrocarbon,
+        molar_mass_kg_per_mol: 0.136234,
+        liquid_density_kg_per_m3: 860.0,
+        density_temperature_c: 25.0,
+        normal_boiling_point_k: 438.95,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2)",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 3.94631, b: 1465.028984, c: -67.626 },
+            t_min_k: 291.86,
+            t_max_k: 439.06,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 291.86-439.06 K (as stored in chemicals 1.5.2, converted to log10 bar)",
+        water_solubility_kg_per_m3: 0.0049,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 4.9 mg/L near 25 °C, from memory; within the 5-30 mg/L measured for terpene hydrocarbons by Fichan, Larroche & Gros, J. Chem. Eng. Data 44 (1999) 56-62",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.860 g/cm³ at 25 °C",
+    },
+    Compound {
+        id: "d-limonene",
+        name: "d-Limonene",
+        cas: "5989-27-5",
+        class: CompoundClass::MonoterpeneHydrocarbon,
+        molar_mass_kg_per_mol: 0.136234,
+        liquid_density_kg_per_m3: 841.1,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 450.75,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 450 ± 2 K. The enantiomers and the racemate (dipentene) share these values",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 22.471987, b: 4697.952852, c: -19.639 },
+            t_min_k: 290.0,
+            t_max_k: 450.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 290-450 K (as stored in chemicals 1.5.2); agrees with the 200 Pa at 298 K measured by Espinosa Díaz et al., Fluid Phase Equilib. (1999)",
+        water_solubility_kg_per_m3: 0.0138,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 13.8 mg/L at 25 °C (measured by Massaldi & King, 1973; the number itself from memory)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8411 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "myrcene",
+        name: "Myrcene",
+        cas: "123-35-3",
+        class: CompoundClass::MonoterpeneHydrocarbon,
+        molar_mass_kg_per_mol: 0.136234,
+        liquid_density_kg_per_m3: 801.3,
+        density_temperature_c: 15.0,
+        normal_boiling_point_k: 444.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 440.2 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 4.56112, b: 1849.102, c: -38.899 },
+            t_min_k: 287.7,
+            t_max_k: 444.7,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 287.7-444.7 K (as stored in chemicals 1.5.2, converted to log10 bar)",
+        water_solubility_kg_per_m3: 0.005,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 4-6 mg/L near 25 °C, from memory (5 mg/L taken)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8013 g/cm³ at 15 °C",
+    },
+    Compound {
+        id: "p-cymene",
+        name: "p-Cymene",
+        cas: "99-87-6",
+        class: CompoundClass::MonoterpeneHydrocarbon,
+        molar_mass_kg_per_mol: 0.134218,
+        liquid_density_kg_per_m3: 857.3,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 450.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 450 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Pa { a: 9.17215, b: 1606.89, c: -64.58 },
+            t_min_k: 338.28,
+            t_max_k: 479.6,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Poling, Prausnitz & O'Connell, The Properties of Gases and Liquids, 5th ed., Antoine, 338.28-479.6 K (as stored in chemicals 1.5.2); the same curve as the Landolt-Börnstein IV/20 set",
+        water_solubility_kg_per_m3: 0.023,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 23 mg/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8573 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "gamma-terpinene",
+        name: "γ-Terpinene",
+        cas: "99-85-4",
+        class: CompoundClass::MonoterpeneHydrocarbon,
+        molar_mass_kg_per_mol: 0.136234,
+        liquid_density_kg_per_m3: 849.2,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 456.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 456.2 K",
+        // No published correlation. Two-point Antoine, C = -43 K, through
+        //   (456.15 K, 101325 Pa)  normal boiling point (CRC) and
+        //   (373.15 K, 7470 Pa)    Lee-Kesler corresponding-states estimate (computed with
+        //                          chemicals 1.5.2: Tc 661.0 K, Pc 28.00 bar, omega 0.373 fitted
+        //                          so that the estimate boils at Tb).
+        //   B = ln(101325/7470)/(1/330.15 - 1/413.15) = 4285.0410, A = ln 7470 + B/330.15 = 21.897724.
+        // The same Lee-Kesler procedure is within 4 % of the measured α-pinene set at 100 °C, so
+        // 0.1 for this hydrocarbon (judgement from that one check, no source).
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 21.897724, b: 4285.0410, c: -43.0 },
+            t_min_k: 373.15,
+            t_max_k: 456.15,
+            relative_uncertainty: 0.1,
+            confidence: Confidence::Estimated,
+        },
+        vapour_pressure_source: "Estimate: two-point Antoine (C = -43 K) through Tb 456.15 K (CRC Handbook) and the Lee-Kesler estimate 7470 Pa at 373.15 K (computed with chemicals 1.5.2, Tc/Pc from its tables); no measured correlation found",
+        water_solubility_kg_per_m3: 0.009,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 9 mg/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.849 g/cm³ at 20 °C",
+    },
+    // ---------------------------------------------------------------- oxygenated monoterpenes
+    Compound {
+        id: "1-8-cineole",
+        name: "1,8-Cineole (eucalyptol)",
+        cas: "470-82-6",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.154249,
+        liquid_density_kg_per_m3: 926.7,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 449.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 449.5 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 21.593021, b: 4082.497185, c: -43.648 },
+            t_min_k: 288.0,
+            t_max_k: 449.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 288-449 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 3.5,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 3.5 g/L at 21 °C, from memory",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.9267 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "linalool",
+        name: "Linalool",
+        cas: "78-70-6",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.154249,
+        liquid_density_kg_per_m3: 870.0,
+        density_temperature_c: 15.0,
+        normal_boiling_point_k: 471.77,
+        boiling_point_source: "NIST Chemistry WebBook (as tabulated in chemicals 1.5.2); 198-199 °C in common handbooks",
+        // No published correlation found. Two-point Antoine, C = -43 K, through
+        //   (298.15 K, 27 Pa)      measured, Espinosa Díaz, Guetachew, Landy, Jose & Voilley,
+        //                          Fluid Phase Equilib. (1999), and
+        //   (471.77 K, 101325 Pa)  normal boiling point, NIST WebBook.
+        //   B = ln(101325/27)/(1/255.15 - 1/428.77) = 5186.0097, A = ln 27 + B/255.15 = 23.621174.
+        //   Gives 2733 Pa at 100 °C (2418 Pa with C = 0, 2895 Pa with C = -60).
+        // 0.15: about the spread between C = 0 and C = -60 at 100 °C (judgement, no source).
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 23.621174, b: 5186.0097, c: -43.0 },
+            t_min_k: 298.15,
+            t_max_k: 471.77,
+            relative_uncertainty: 0.15,
+            confidence: Confidence::FittedToPublishedPoints,
+        },
+        vapour_pressure_source: "Two-point Antoine (assumed C = -43 K) through 27 Pa at 298.15 K (Espinosa Díaz et al., Fluid Phase Equilib. 1999) and Tb 471.77 K (NIST WebBook)",
+        water_solubility_kg_per_m3: 1.59,
+        water_solubility_relative_uncertainty: 0.1,
+        water_solubility_source: "1.6 g/L at 25 °C (International Chemical Safety Card, as quoted by French Wikipedia); 1.589 g/L (English Wikipedia infobox); 1.45 g/L (ChemicalBook)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: 0.870 g/cm³ at 15 °C (Frontiers in Bioengineering and Biotechnology, 2020, Table 1); 0.87 at 25 °C (ChemicalBook)",
+    },
+    Compound {
+        id: "linalyl-acetate",
+        name: "Linalyl acetate",
+        cas: "115-95-7",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.196286,
+        liquid_density_kg_per_m3: 895.0,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 494.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 493.2 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 4.77892, b: 2093.912019, c: -54.798 },
+            t_min_k: 328.6,
+            t_max_k: 493.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 328.6-493 K (as stored in chemicals 1.5.2, converted to log10 bar); the Landolt-Börnstein IV/20 set agrees within 0.3 % at 100 °C",
+        water_solubility_kg_per_m3: 0.02,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.01-0.03 g/L, from memory (low confidence; 0.02 taken)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8950 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "camphor",
+        name: "Camphor",
+        cas: "76-22-2",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.152233,
+        liquid_density_kg_per_m3: 990.0,
+        density_temperature_c: 25.0,
+        normal_boiling_point_k: 482.3,
+        boiling_point_source: "NIST Chemistry WebBook (as tabulated in chemicals 1.5.2); CAS Common Chemistry gives 477 K",
+        // The set is for the liquid (451-506 K). Camphor melts near 175-179 °C (from memory), so
+        // at 95-100 °C it is a solid and its real (sublimation) pressure is lower than this
+        // extrapolation: 0.3 is a judgement, no source.
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 3.30967, b: 1096.290994, c: -148.579 },
+            t_min_k: 451.2,
+            t_max_k: 505.5,
+            relative_uncertainty: 0.3,
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine for the liquid, 451.2-505.5 K (as stored in chemicals 1.5.2, converted to log10 bar); extrapolated below its range near 100 °C, where camphor is solid",
+        water_solubility_kg_per_m3: 1.6,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 1.6 g/L near 25 °C, from memory",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.99 g/cm³ for the solid at 25 °C, from memory (no liquid value)",
+    },
+    Compound {
+        id: "menthol",
+        name: "Menthol (DL)",
+        cas: "89-78-1",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.156265,
+        liquid_density_kg_per_m3: 903.0,
+        density_temperature_c: 15.0,
+        normal_boiling_point_k: 487.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds, for l-menthol 2216-51-5 (as tabulated in chemicals 1.5.2); NIST WebBook gives 489.6 K and CAS Common Chemistry 485.15 K for DL-menthol",
+        // The DL (unspecified) set is used for the menthol of mint oils (l-menthol) too: it is the
+        // one whose range covers 95-100 °C (the Landolt-Börnstein l-menthol set starts at 372 K).
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 5.38347, b: 2405.946003, c: -37.853 },
+            t_min_k: 329.0,
+            t_max_k: 485.0,
+            relative_uncertainty: 0.05, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine for DL-menthol (89-78-1), 329-485 K (as stored in chemicals 1.5.2, converted to log10 bar); the Landolt-Börnstein IV/20 l-menthol set (372-487 K) is 6 % higher at 100 °C",
+        water_solubility_kg_per_m3: 0.45,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.43-0.46 g/L near 25 °C, from memory",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, l-menthol (supercooled liquid) 0.9030 g/cm³ at 15 °C, taken for the DL liquid",
+    },
+    Compound {
+        id: "menthone",
+        name: "Menthone (l-)",
+        cas: "14073-97-3",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.154249,
+        liquid_density_kg_per_m3: 895.4,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 480.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2)",
+        // No published correlation. Two-point Antoine, C = -43 K, through
+        //   (480.15 K, 101325 Pa)  normal boiling point (CRC) and
+        //   (373.15 K, 4179 Pa)    Lee-Kesler corresponding-states estimate (computed with
+        //                          chemicals 1.5.2: Tc 710.0 K, Pc 27.50 bar, omega 0.279).
+        //   B = ln(101325/4179)/(1/330.15 - 1/437.15) = 4300.4302, A = ln 4179 + B/330.15 = 21.363513.
+        // The same procedure is off by +31 % (cineole), +60 % (geraniol) and -48 % (thymol) at
+        // 100 °C against measured sets, hence 0.3 (judgement from that check, no source).
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 21.363513, b: 4300.4302, c: -43.0 },
+            t_min_k: 373.15,
+            t_max_k: 480.15,
+            relative_uncertainty: 0.3,
+            confidence: Confidence::Estimated,
+        },
+        vapour_pressure_source: "Estimate: two-point Antoine (C = -43 K) through Tb 480.15 K (CRC Handbook) and the Lee-Kesler estimate 4179 Pa at 373.15 K (computed with chemicals 1.5.2, Tc/Pc from its tables); no measured correlation found",
+        water_solubility_kg_per_m3: 0.69,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.69 g/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8954 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "citronellal",
+        name: "Citronellal",
+        cas: "106-23-0",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.154249,
+        liquid_density_kg_per_m3: 853.0,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 478.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 481 K",
+        // No published correlation. Two-point Antoine, C = -43 K, through
+        //   (478.15 K, 101325 Pa)  normal boiling point (CRC) and
+        //   (373.15 K, 3553 Pa)    Lee-Kesler corresponding-states estimate (computed with
+        //                          chemicals 1.5.2: Tc 670.0 K, Pc 22.00 bar, omega 0.432).
+        //   B = ln(101325/3553)/(1/330.15 - 1/435.15) = 4584.3304, A = ln 3553 + B/330.15 = 22.061146.
+        // 0.3: see menthone.
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 22.061146, b: 4584.3304, c: -43.0 },
+            t_min_k: 373.15,
+            t_max_k: 478.15,
+            relative_uncertainty: 0.3,
+            confidence: Confidence::Estimated,
+        },
+        vapour_pressure_source: "Estimate: two-point Antoine (C = -43 K) through Tb 478.15 K (CRC Handbook) and the Lee-Kesler estimate 3553 Pa at 373.15 K (computed with chemicals 1.5.2, Tc/Pc from its tables); no measured correlation found",
+        water_solubility_kg_per_m3: 0.1,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.04-0.2 g/L near 25 °C, from memory (low confidence; 0.1 taken)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.853 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "terpinen-4-ol",
+        name: "Terpinen-4-ol",
+        cas: "562-74-3",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.154249,
+        liquid_density_kg_per_m3: 926.2,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 482.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2)",
+        // No published correlation. Two-point Antoine, C = -43 K, through
+        //   (482.15 K, 101325 Pa)  normal boiling point (CRC) and
+        //   (373.15 K, 4966 Pa)    Lee-Kesler corresponding-states estimate (computed with
+        //                          chemicals 1.5.2: Tc 744.3 K (Joback), Pc 30.63 bar, omega 0.161).
+        //   B = ln(101325/4966)/(1/330.15 - 1/439.15) = 4011.3309, A = ln 4966 + B/330.15 = 20.660395.
+        // 0.3: see menthone; for an alcohol the estimate probably runs high.
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 20.660395, b: 4011.3309, c: -43.0 },
+            t_min_k: 373.15,
+            t_max_k: 482.15,
+            relative_uncertainty: 0.3,
+            confidence: Confidence::Estimated,
+        },
+        vapour_pressure_source: "Estimate: two-point Antoine (C = -43 K) through Tb 482.15 K (CRC Handbook) and the Lee-Kesler estimate 4966 Pa at 373.15 K (computed with chemicals 1.5.2, Tc/Pc from its tables); no measured correlation found",
+        water_solubility_kg_per_m3: 0.7,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.4-1 g/L near 25 °C, from memory (low confidence; 0.7 taken)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.926 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "carvone",
+        name: "Carvone (l-)",
+        cas: "6485-40-1",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.150218,
+        liquid_density_kg_per_m3: 959.3,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 504.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds, (R)-carvone (as tabulated in chemicals 1.5.2); NIST WebBook gives 502.8 K for unspecified carvone",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 5.02972, b: 2348.261012, c: -33.473 },
+            t_min_k: 330.6,
+            t_max_k: 500.7,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine for carvone (99-49-0, stereoisomer unspecified), 330.6-500.7 K (as stored in chemicals 1.5.2, converted to log10 bar); the Landolt-Börnstein IV/20 set agrees within 0.3 % at 100 °C. Enantiomers share the curve",
+        water_solubility_kg_per_m3: 1.3,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 1.3 g/L near 25 °C, from memory",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, (R)-carvone 0.9593 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "geranial",
+        name: "Geranial ((E)-citral)",
+        cas: "141-27-5",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.152233,
+        liquid_density_kg_per_m3: 888.8,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 502.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2)",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 23.289405, b: 5443.826939, c: -38.879 },
+            t_min_k: 334.0,
+            t_max_k: 501.0,
+            relative_uncertainty: 0.05, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for 3,7-dimethyl-2,6-octadienal, 334-501 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 0.6,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.6 g/L near 20 °C for citral, from memory",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8888 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "thymol",
+        name: "Thymol",
+        cas: "89-83-8",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.150218,
+        liquid_density_kg_per_m3: 970.0,
+        density_temperature_c: 25.0,
+        normal_boiling_point_k: 506.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 506 K; melts at 322.75 K (CRC)",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 5.29395, b: 2522.332016, c: -28.575 },
+            t_min_k: 337.5,
+            t_max_k: 505.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 337.5-505 K (as stored in chemicals 1.5.2, converted to log10 bar)",
+        water_solubility_kg_per_m3: 0.9,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.90 g/L at 20 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, supercooled liquid 0.970 g/cm³ at 25 °C",
+    },
+    Compound {
+        id: "carvacrol",
+        name: "Carvacrol",
+        cas: "499-75-2",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.150218,
+        liquid_density_kg_per_m3: 977.2,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 514.65,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 510 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 5.34179, b: 2549.856992, c: -32.705 },
+            t_min_k: 343.0,
+            t_max_k: 510.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 343-510 K (as stored in chemicals 1.5.2, converted to log10 bar)",
+        water_solubility_kg_per_m3: 1.25,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 1.25 g/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.9772 g/cm³ at 20 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
+    },
+    // ---------------------------------------------------------------- phenylpropanoids
+    Compound {
+        id: "eugenol",
+        name: "Eugenol",
+        cas: "97-53-0",
+        class: CompoundClass::Phenylpropanoid,
+        molar_mass_kg_per_mol: 0.164201,
+        liquid_density_kg_per_m3: 1065.2,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 527.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 526.4 K",
+        // The Landolt-Börnstein set (288-333 K) is a low-temperature fit that puts Tb near
+        // 507.5 K; the WebBook set below covers 95-100 °C and reproduces Tb.
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 5.08897, b: 2463.351004, c: -42.226 },
+            t_min_k: 351.6,
+            t_max_k: 526.7,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 351.6-526.7 K (as stored in chemicals 1.5.2, converted to log10 bar)",
+        water_solubility_kg_per_m3: 2.46,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 2.46 g/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0652 g/cm³ at 20 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
+    },
+    Compound {
+        id: "e-anethole",
+        name: "(E)-Anethole",
+        cas: "4180-23-8",
+        class: CompoundClass::Phenylpropanoid,
+        molar_mass_kg_per_mol: 0.148202,
+        liquid_density_kg_per_m3: 988.2,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 509.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 508.7 K; melts near 21-22 °C",
+        // The Landolt-Börnstein set filed under (E)-anethole 4180-23-8 (293-363 K) is a
+        // low-temperature fit that puts Tb near 457 K; the set for anethole 104-46-1 is used.
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 22.94533, b: 5371.491228, c: -38.144 },
+            t_min_k: 335.0,
+            t_max_k: 508.0,
+            relative_uncertainty: 0.05, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for anethole 104-46-1 (4-propenylanisole, mixed stereoisomers), 335-508 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 0.11,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.11 g/L near 25 °C, from memory",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.9882 g/cm³ at 20 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
+    },
+    Compound {
+        id: "estragole",
+        name: "Estragole (methyl chavicol)",
+        cas: "140-67-0",
+        class: CompoundClass::Phenylpropanoid,
+        molar_mass_kg_per_mol: 0.148202,
+        liquid_density_kg_per_m3: 965.0,
+        density_temperature_c: 25.0,
+        normal_boiling_point_k: 489.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 490.8 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 5.03793, b: 2246.738987, c: -41.799 },
+            t_min_k: 325.8,
+            t_max_k: 488.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 325.8-488 K (as stored in chemicals 1.5.2, converted to log10 bar)",
+        water_solubility_kg_per_m3: 0.18,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.18 g/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.965 g/cm³ at 25 °C",
+    },
+    // ---------------------------------------------------------------- sesquiterpenes
+    Compound {
+        id: "beta-caryophyllene",
+        name: "β-Caryophyllene",
+        cas: "87-44-5",
+        class: CompoundClass::Sesquiterpene,
+        molar_mass_kg_per_mol: 0.204351,
+        liquid_density_kg_per_m3: 907.5,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 535.5,
+        boiling_point_source: "About 262-264 °C, from memory (handbook-type value); the 402.65 K listed by CAS Common Chemistry is a reduced-pressure boiling point",
+        // No published correlation. Two-point Antoine, C = -43 K, through
+        //   (535.5 K, 101325 Pa)   normal boiling point (from memory) and
+        //   (373.15 K, 1589 Pa)    Lee-Kesler corresponding-states estimate (computed with
+        //                          chemicals 1.5.2: Tc 802.3 K (Joback), Pc 20.27 bar, omega 0.117).
+        //   B = ln(101325/1589)/(1/330.15 - 1/492.5) = 4161.5981, A = ln 1589 + B/330.15 = 19.976034.
+        // 0.3: see menthone; the boiling point itself is from memory.
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 19.976034, b: 4161.5981, c: -43.0 },
+            t_min_k: 373.15,
+            t_max_k: 535.5,
+            relative_uncertainty: 0.3,
+            confidence: Confidence::Estimated,
+        },
+        vapour_pressure_source: "Estimate: two-point Antoine (C = -43 K) through Tb 535.5 K (from memory) and the Lee-Kesler estimate 1589 Pa at 373.15 K (computed with chemicals 1.5.2, Tc/Pc from its tables); no measured correlation found",
+        water_solubility_kg_per_m3: 0.00003,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.01-0.05 mg/L, from memory (low confidence; 0.03 mg/L taken)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.9075 g/cm³ at 20 °C",
+    },
+    // ---------------------------------------------------------------- rose alcohols
+    Compound {
+        id: "geraniol",
+        name: "Geraniol",
+        cas: "106-24-1",
+        class: CompoundClass::RoseAlcohol,
+        molar_mass_kg_per_mol: 0.154249,
+        liquid_density_kg_per_m3: 889.4,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 502.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 503.2 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 23.847298, b: 5682.190548, c: -42.419 },
+            t_min_k: 342.0,
+            t_max_k: 503.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for 3,7-dimethyl-trans-2,6-octadien-1-ol, 342-503 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 0.69,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.69 g/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8894 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "citronellol",
+        name: "Citronellol",
+        cas: "106-22-9",
+        class: CompoundClass::RoseAlcohol,
+        molar_mass_kg_per_mol: 0.156265,
+        liquid_density_kg_per_m3: 855.0,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 495.2,
+        boiling_point_source: "NIST Chemistry WebBook (as tabulated in chemicals 1.5.2); 497.65 K in chemicals' default table",
+        // Two published sets disagree by 15 % at 100 °C (WebBook 929 Pa, Landolt-Börnstein IV/20
+        // 807 Pa, 366-499 K), hence 0.1 (judgement, no source).
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 5.79249, b: 2711.958016, c: -26.552 },
+            t_min_k: 339.6,
+            t_max_k: 494.7,
+            relative_uncertainty: 0.1,
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 339.6-494.7 K (as stored in chemicals 1.5.2, converted to log10 bar); the Landolt-Börnstein IV/20 set (366-499 K) is 13 % lower at 100 °C",
+        water_solubility_kg_per_m3: 0.2,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.2 g/L near 25 °C, from memory (measured for DL-citronellol at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.855 g/cm³ at 20 °C, from memory",
+    },
+    Compound {
+        id: "2-phenylethanol",
+        name: "2-Phenylethanol",
+        cas: "60-12-8",
+        class: CompoundClass::RoseAlcohol,
+        molar_mass_kg_per_mol: 0.122164,
+        liquid_density_kg_per_m3: 1020.2,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 493.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 491.4 K",
+        // Both published sets start near 406 K, so 95-100 °C is about 35 K below the fitted
+        // range: 0.1 for the extrapolation (judgement, no source).
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLog10Bar { a: 3.74729, b: 1318.141991, c: -139.694 },
+            t_min_k: 406.2,
+            t_max_k: 492.1,
+            relative_uncertainty: 0.1,
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 406.2-492.1 K (as stored in chemicals 1.5.2, converted to log10 bar); extrapolated about 35 K below its range at 95-100 °C",
+        water_solubility_kg_per_m3: 21.0,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 20-22 g/L near 25 °C, from memory (21 taken)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0202 g/cm³ at 20 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
+    },
+    // ---------------------------------------------------------------- other
+    Compound {
+        id: "benzyl-alcohol",
+        name: "Benzyl alcohol",
+        cas: "100-51-6",
+        class: CompoundClass::Other,
+        molar_mass_kg_per_mol: 0.108138,
+        liquid_density_kg_per_m3: 1041.9,
+        density_temperature_c: 24.0,
+        normal_boiling_point_k: 478.45,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 478 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::Wagner25 {
+                tc_k: 715.0,
+                pc_pa: 4_300_000.0,
+                a: -7.29099,
+                b: 1.17084,
+                c: -4.7167,
+                d: -5.53,
+            },
+            t_min_k: 257.85,
+            t_max_k: 715.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Poling, Prausnitz & O'Connell, The Properties of Gases and Liquids, 5th ed., Wagner 2.5,5, 257.85-715 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 42.0,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 40-43 g/L near 25 °C, from memory (42 taken)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0419 g/cm³ at 24 °C",
+    },
+];
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use std::collections::HashSet;
+
+    fn is_id(s: &str) -> bool {
+        !s.is_empty()
+            && !s.starts_with('-')
+            && !s.ends_with('-')
+            && !s.contains("--")
+            && s.bytes().all(|b| b.is_ascii_lowercase() || b.is_ascii_digit() || b == b'-')
+    }
+
+    fn coefficients(form: &CorrelationForm) -> Vec<f64> {
+        match *form {
+            CorrelationForm::AntoineLnPa { a, b, c }
+            | CorrelationForm::AntoineLog10Bar { a, b, c }
+            | CorrelationForm::AntoineLog10Pa { a, b, c }
+            | CorrelationForm::AntoineLog10MmHgCelsius { a, b, c } => vec![a, b, c],
+            CorrelationForm::Wagner25 { tc_k, pc_pa, a, b, c, d } => vec![tc_k, pc_pa, a, b, c, d],
+        }
+    }
+
+    #[test]
+    fn library_is_large_enough() {
+        assert!(COMPOUNDS.len() >= 24, "only {} compounds", COMPOUNDS.len());
+    }
+
+    #[test]
+    fn ids_are_unique_and_well_formed() {
+        let mut seen = HashSet::new();
+        for c in COMPOUNDS {
+            assert!(is_id(c.id), "badly formed id {:?}", c.id);
+            assert!(seen.insert(c.id), "duplicate id {:?}", c.id);
+        }
+    }
+
+    #[test]
+    fn cas_numbers_are_unique_and_well_formed() {
+        let mut seen = HashSet::new();
+        for c in COMPOUNDS {
+            let parts: Vec<&str> = c.cas.split('-').collect();
+            assert_eq!(parts.len(), 3, "{}: CAS {:?}", c.id, c.cas);
+            assert!(
+                parts.iter().all(|p| !p.is_empty() && p.bytes().all(|b| b.is_ascii_digit())),
+                "{}: CAS {:?}",
+                c.id,
+                c.cas
+            );
+            assert_eq!(parts[1].len(), 2, "{}: CAS {:?}", c.id, c.cas);
+            assert_eq!(parts[2].len(), 1, "{}: CAS {:?}", c.id, c.cas);
+            assert!(seen.insert(c.cas), "duplicate CAS {:?}", c.cas);
+        }
+    }
+
+    #[test]
+    fn every_text_field_is_filled() {
+        for c in COMPOUNDS {
+            for (field, text) in [
+                ("name", c.name),
+                ("boiling_point_source", c.boiling_point_source),
+                ("vapour_pressure_source", c.vapour_pressure_source),
+                ("water_solubility_source", c.water_solubility_source),
+                ("property_source", c.property_source),
+            ] {
+                assert!(!text.trim().is_empty(), "{}: empty {}", c.id, field);
+            }
+        }
+    }
+
+    #[test]
+    fn numbers_are_finite_and_positive() {
+        for c in COMPOUNDS {
+            let vp = &c.vapour_pressure;
+            for (field, x) in [
+                ("molar_mass_kg_per_mol", c.molar_mass_kg_per_mol),
+                ("liquid_density_kg_per_m3", c.liquid_density_kg_per_m3),
+                ("density_temperature_c", c.density_temperature_c),
+                ("normal_boiling_point_k", c.normal_boiling_point_k),
+                ("water_solubility_kg_per_m3", c.water_solubility_kg_per_m3),
+                ("water_solubility_relative_uncertainty", c.water_solubility_relative_uncertainty),
+                ("t_min_k", vp.t_min_k),
+                ("t_max_k", vp.t_max_k),
+                ("relative_uncertainty", vp.relative_uncertainty),
+            ] {
+                assert!(x.is_finite() && x > 0.0, "{}: {} = {}", c.id, field, x);
+            }
+            assert!(vp.t_min_k < vp.t_max_k, "{}: empty fitted range", c.id);
+            for x in coefficients(&vp.form) {
+                assert!(x.is_finite(), "{}: non-finite coefficient", c.id);
+            }
+        }
+    }
+
+    #[test]
+    fn units_are_the_stated_ones() {
+        // Guards against g/mol, g/cm³ or °C slipping into the kg/mol, kg/m³ and K fields.
+        for c in COMPOUNDS {
+            assert!((0.05..0.5).contains(&c.molar_mass_kg_per_mol), "{}", c.id);
+            assert!((500.0..1500.0).contains(&c.liquid_density_kg_per_m3), "{}", c.id);
+            assert!((-50.0..100.0).contains(&c.density_temperature_c), "{}", c.id);
+            assert!((300.0..700.0).contains(&c.normal_boiling_point_k), "{}", c.id);
+            assert!(c.vapour_pressure.relative_uncertainty < 1.0, "{}", c.id);
+            assert!(c.water_solubility_relative_uncertainty <= 1.0, "{}", c.id);
+        }
+    }
+
+    #[test]
+    fn antoine_sets_have_positive_b_and_wagner_sets_a_critical_point() {
+        for c in COMPOUNDS {
+            match c.vapour_pressure.form {
+                CorrelationForm::AntoineLnPa { b, .. }
+                | CorrelationForm::AntoineLog10Bar { b, .. }
+                | CorrelationForm::AntoineLog10Pa { b, .. }
+                | CorrelationForm::AntoineLog10MmHgCelsius { b, .. } => {
+                    assert!(b > 0.0, "{}", c.id)
+                }
+                CorrelationForm::Wagner25 { tc_k, pc_pa, .. } => {
+                    assert!(tc_k > c.normal_boiling_point_k && pc_pa > 101_325.0, "{}", c.id)
+                }
+            }
+        }
+    }
+
+    #[test]
+    fn two_point_fits_are_labelled_as_such() {
+        // A row whose Antoine C is exactly the assumed -43 K was fitted here, not measured.
+        for c in COMPOUNDS {
+            if let CorrelationForm::AntoineLnPa { c: cc, .. } = c.vapour_pressure.form {
+                if cc == -43.0 {
+                    assert_ne!(c.vapour_pressure.confidence, Confidence::Measured, "{}", c.id);
+                }
+            }
+        }
+    }
+}

@@ -1,0 +1,686 @@
+//! The crop presets, as data: one row per crop, every number with its source.
+//!
+//! Conventions used throughout:
+//! - Where a source gives a range and no typical value, "typical" is the midpoint of the range
+//!   (a choice made here, no source). A composition limit given only as "at most x %" is
+//!   entered as x/2 unless a typical value is printed.
+//! - Compositions list only compounds of the library (`crate::compounds::COMPOUNDS`); what is
+//!   left out is named in `composition_source`. The oil is renormalised over the listed ones.
+//! - Relative densities (d20/20, d25/25) are turned into kg/m³ with the density of water at the
+//!   same temperature (998.2 kg/m³ at 20 °C, 997.0 at 25 °C; IAPWS-95, computed with
+//!   iapws 1.5.5). Ranges given as "specific gravity" without a reference temperature are read
+//!   as g/cm³.
+//! - First-order constants derived from a run time use k ≈ 3 / t95 (95 % recovered at t95).
+//! - Heat capacity of the charge: 3800 J/(kg K) for fresh leafy material at about 80-85 %
+//!   water (Zhang, Kaiser, Zhang, Marcelis & Vialet-Chabrand, Plant Methods 2025,
+//!   doi:10.1186/s13007-025-01326-3: 3.2-4.0 kJ/(kg K) for fresh leaves of 13 species; the
+//!   Choi & Okos (1986) food-property model gives 3.81 at 84 % water); 3200 for wilted or
+//!   woody-leaved material at about 60 % water and 2000 for air-dried material at about 10 %
+//!   (Choi & Okos model as given in the ASHRAE Refrigeration Handbook, coefficients from
+//!   memory, dry-matter composition assumed: 3.23 and 2.02 kJ/(kg K)).
+//! - Charge (packing) densities other than the lavender one are from memory: fresh leafy herbs
+//!   loosely forked or trodden 100-250 kg/m³, dried herb 80-150, crushed seeds 350-550, wood
+//!   chips 200-300; the middle of the class is taken unless the row says otherwise.
+
+use super::*;
+
+const fn spread(low: f64, typical: f64, high: f64) -> Spread {
+    Spread { low, typical, high }
+}
+
+const WILTED_HEAT_SOURCE: &str = "Wilted or woody-leaved material at about 60 % water: 3200 J/(kg K) (Choi & Okos model, as given in the ASHRAE Refrigeration Handbook, coefficients from memory: 3.23 kJ/(kg K) at 60 %)";
+const DRIED_HEAT_SOURCE: &str = "Air-dried material at about 10 % water: 2000 J/(kg K) (Choi & Okos model, as given in the ASHRAE Refrigeration Handbook, coefficients from memory: 2.02 kJ/(kg K) at 10 %)";
+
+const WARM_CONDENSATE_SOURCE: &str = "Oils that crystallise or congeal (peppermint, aniseed, fennel, caraway, rose): keep the condenser worm at 30-40 °C (Roundell, The Still-room, 1903, p. 100); separation is faster and cleaner when warm (Bragantia, Instituto Agronômico de Campinas, 1961)";
+const COOL_CONDENSATE_SOURCE: &str = "About 30 °C: common practice, no source. Warmer condensate separates faster (Bragantia, Instituto Agronômico de Campinas, 1961)";
+
+/// Every crop preset.
+pub static CROPS: &[Crop] = &[
+    Crop {
+        id: "lavender",
+        name: "Lavender",
+        material: "Lavandula angustifolia, fresh or wilted flowering tops",
+        oil_content_percent: spread(0.6, 0.9, 1.5),
+        oil_content_source: "Low 0.6: 0.6-1.0 % (ChemicalBook lavender oil page, text apparently from Fenaroli's Handbook); typical 0.9: steam distillation (CSIR-CIMAP, W. Himalaya, ResearchGate 232957741); high 1.5: 0.5-1.5 % fresh (islandlavender.com, low weight)",
+        composition: &[
+            ("linalool", 0.315),
+            ("linalyl-acetate", 0.36),
+            ("terpinen-4-ol", 0.04),
+            ("1-8-cineole", 0.015),
+            ("camphor", 0.0075),
+            ("d-limonene", 0.005),
+        ],
+        composition_source: "ISO 3515:2002 (other origins) via PMC9148000 Table 2 (Molecules 27:3216): linalool 20-43, linalyl acetate 25-47, terpinen-4-ol ≤ 8, 1,8-cineole ≤ 3, camphor ≤ 1.5, limonene ≤ 1 %; midpoints or half-limits. Not in the library: lavandulyl acetate, cis- and trans-β-ocimene, 3-octanone, lavandulol, α-terpineol",
+        oil_density_kg_per_m3: 883.0,
+        oil_density_source: "d20/20 0.880-0.890 (Surburg & Panten, Common Fragrance and Flavor Materials, French lavender, via ChemicalBook); midpoint × 998.2 kg/m³",
+        rate_constant_per_min: spread(0.012, 0.05, 0.08),
+        rate_constant_source: "Typical 0.05: yield maximum at 60 min (Zheljazkov, Cantrell, Astatkie & Jeliazkova, J Oleo Sci 62:195-199, 2013), k ≈ 3/60; low 0.012: two points (1 % at 40 min, 2 % at 120 min; Wesołowska, Jadczak & Grzeszczuk, Herba Polonica) fitted to first order, a lower bound; high 0.08: near the exudation constant 0.072 per min measured for lavandin (Cerpa, Mato & Cocero, AIChE J 54:909-917, 2008), rounded up, judgement",
+        typical_run_min: spread(30.0, 45.0, 60.0),
+        typical_run_source: "30-40 min in traditional Provence alembics (terraroma.fr, lavandes.fr, low weight); yield maximum at 60 min (Zheljazkov et al. 2013)",
+        steam_rate_kg_per_h_per_kg: 0.3,
+        steam_rate_source: "Total distillate water:oil should not exceed 20:1 for lavender (text attributed to E.F.K. Denny in Lis-Balchin (ed.), Lavender: the genus Lavandula, 2002; attribution from memory), i.e. at most 0.13-0.3 kg steam per kg charge per run for 0.67-1.5 % oil; 0.3 kg/h per kg (range 0.2-0.6) is a judgement, no source",
+        charge_density_kg_per_m3: 165.0,
+        charge_density_source: "60 L still packed to the top with 9-11 kg of fresh lavender: 150-183 kg/m³ (ebonyhillsfarm.com.au, low weight); middle taken",
+        moisture_fraction: 0.6,
+        plant_heat_capacity_j_per_kg_k: 3200.0,
+        thermal_source: "No published moisture at harvest found; lavender is usually wilted 1-2 days before distilling (terraroma.fr, lavandes.fr, low weight); 50-65 % water at cutting from memory, 60 % taken. Heat capacity: Choi & Okos model, as given in the ASHRAE Refrigeration Handbook, coefficients from memory: 3.23 kJ/(kg K) at 60 %",
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "lavandin",
+        name: "Lavandin",
+        material: "Lavandula × intermedia ('Grosso', 'Super', 'Abrial'), fresh or wilted flowering stems",
+        oil_content_percent: spread(1.36, 2.0, 3.0),
+        oil_content_source: "Low 1.36 ± 0.14 %: 'Super', bench steam distillation (Cerpa, Mato & Cocero, AIChE J 54:909-917, 2008); typical 2.0: 50 kg lavandin per kg oil (phyto-aroma.com, low weight); high 3.0: 1.5-3 % (islandlavender.com, low weight)",
+        composition: &[
+            ("linalool", 0.305),
+            ("linalyl-acetate", 0.315),
+            ("camphor", 0.0725),
+            ("1-8-cineole", 0.06),
+            ("terpinen-4-ol", 0.0325),
+            ("d-limonene", 0.01),
+        ],
+        composition_source: "ISO 8902 (lavandin Grosso) via PMC9000678 Table 6 (Molecules 27:2152): linalool 24-37, linalyl acetate 25-38, camphor 6.5-8, 1,8-cineole 4-8, terpinen-4-ol 1.5-5, limonene 0.5-1.5 %; midpoints. Not in the library: borneol 1.5-3.5, lavandulyl acetate 1.5-3.5 %",
+        oil_density_kg_per_m3: 889.0,
+        oil_density_source: "Lavandin Abrial, ISO 3054: 0.885-0.897 (iso.org abstract; read as d20/20, from memory of ISO practice); midpoint × 998.2 kg/m³",
+        rate_constant_per_min: spread(0.04, 0.07, 0.08),
+        rate_constant_source: "Typical 0.07: exudation constant 0.072 per min, lavandin 'Super', bench steam distillation (Cerpa, Mato & Cocero, AIChE J 54:909-917, 2008); low 0.04: chopped green lavandin in caissons, 1-1.5 h per batch (terraroma.fr, low weight), k ≈ 3/75 rounded; high 0.08: judgement, no source",
+        typical_run_min: spread(30.0, 40.0, 90.0),
+        typical_run_source: "30-40 min for whole stems in traditional alembics; 60-90 min for chopped green material in mobile caissons (terraroma.fr, low weight)",
+        steam_rate_kg_per_h_per_kg: 0.4,
+        steam_rate_source: "Caissons: ≈200 L fuel oil per hour for ≈100 kg oil per caisson over 1-1.5 h (greenandzen blog, terraroma.fr, low weight) gives ≈1.9-2.2 t/h steam (35.8 MJ/L, boiler 70-80 %) and water:oil 19-33:1; 0.4 kg/h per kg for whole stems (0.6 chopped) is a judgement, no source",
+        charge_density_kg_per_m3: 165.0,
+        charge_density_source: "Taken equal to fresh lavender: 60 L still packed with 9-11 kg, 150-183 kg/m³ (ebonyhillsfarm.com.au, low weight); no lavandin value found",
+        moisture_fraction: 0.6,
+        plant_heat_capacity_j_per_kg_k: 3200.0,
+        thermal_source: "Taken equal to wilted lavender: 60 % water from memory; heat capacity 3.23 kJ/(kg K) at 60 % (Choi & Okos model, as given in the ASHRAE Refrigeration Handbook, coefficients from memory)",
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "peppermint",
+        name: "Peppermint",
+        material: "Mentha × piperita, fresh or lightly wilted herb",
+        oil_content_percent: spread(0.3, 0.5, 0.7),
+        oil_content_source: "0.3-0.7 % of fresh overground parts (ChemicalBook peppermint oil page); typical = midpoint",
+        composition: &[("menthol", 0.425), ("menthone", 0.23), ("1-8-cineole", 0.0875), ("d-limonene", 0.03)],
+        composition_source: "Ph. Eur. ranges (europeanmedical.info; whatdoesmean.net repeats them): menthol 30-55, menthone 14-32, cineole 3.5-14, limonene 1-5 %; midpoints. Menthol of mint is l-menthol; its vapour pressure is taken from the DL-menthol set. Not in the library: menthyl acetate 2.8-10, isomenthone 1.5-10, menthofuran 1-9, pulegone ≤ 4 %",
+        oil_density_kg_per_m3: 903.0,
+        oil_density_source: "US oils d20/20 0.899-0.911 (Surburg & Panten, Common Fragrance and Flavor Materials, via ChemicalBook); midpoint × 998.2 kg/m³",
+        rate_constant_per_min: spread(0.025, 0.04, 0.06),
+        rate_constant_source: "No fitted constant found for peppermint; 0.04 (0.025-0.06) matches a 60-90 min run (run times from memory), judgement",
+        typical_run_min: spread(60.0, 75.0, 90.0),
+        typical_run_source: "60-90 min after the first drop, from memory (1-1.5 h in a mint tub)",
+        steam_rate_kg_per_h_per_kg: 0.5,
+        steam_rate_source: "No published steam rate for peppermint seen; 0.5 kg/h per kg is a judgement close to the 0.54 kg/h per kg of a 300 g rosemary test (kttpmt.ntt.edu.vn, Vietnam)",
+        charge_density_kg_per_m3: 175.0,
+        charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.84,
+        plant_heat_capacity_j_per_kg_k: 3800.0,
+        thermal_source: "Fresh peppermint leaves 83.2-84.9 % water, wet basis (Pliestić, Dobričević & Filipović, hrcak.srce.hr/18199); heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025; Choi & Okos model 3.81 at 84 %)",
+        distillate_temperature_c: 40.0,
+        distillate_temperature_source: WARM_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "spearmint",
+        name: "Spearmint",
+        material: "Mentha spicata, fresh herb",
+        oil_content_percent: spread(0.25, 0.375, 0.5),
+        oil_content_source: "0.25-0.5 % (A Treatise on Beverages, 1890s, 'Oil of Spearmint'); typical = midpoint",
+        composition: &[("carvone", 0.62), ("d-limonene", 0.15), ("1-8-cineole", 0.02), ("myrcene", 0.02)],
+        composition_source: "From memory: carvone about 55-70 %, limonene 10-25 %, 1,8-cineole and myrcene about 2 % each. The carvone and limonene of spearmint are the l-enantiomers; enantiomers share vapour pressure, so the l-carvone and d-limonene rows are used",
+        oil_density_kg_per_m3: 923.0,
+        oil_density_source: "About 0.917-0.934 at 25 °C (FCC-type range), from memory; midpoint × 997.0 kg/m³",
+        rate_constant_per_min: spread(0.025, 0.04, 0.06),
+        rate_constant_source: "No fitted constant found; taken equal to peppermint (a 60-90 min run, from memory), judgement",
+        typical_run_min: spread(60.0, 75.0, 90.0),
+        typical_run_source: "1-1.5 h, from memory",
+        steam_rate_kg_per_h_per_kg: 0.5,
+        steam_rate_source: "Taken equal to peppermint, judgement, no source",
+        charge_density_kg_per_m3: 175.0,
+        charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.8,
+        plant_heat_capacity_j_per_kg_k: 3800.0,
+        thermal_source: "Mint (M. spicata) 60-88 % water (ilovetranslation copy of a drying paper, low weight), 80 % taken; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025)",
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "rosemary",
+        name: "Rosemary",
+        material: "Salvia rosmarinus (Rosmarinus officinalis), leafy tips, cineole type",
+        oil_content_percent: spread(0.5, 1.2, 2.5),
+        oil_content_source: "Leaves hold 0.5-2.5 % (ChemicalBook, text from Leung, Encyclopedia of Common Natural Ingredients); typical 1.20 % by steam distillation (Boutekedjiret et al. 1997, via Lawrence, Progress in Essential Oils, perfumerflavorist.com)",
+        composition: &[
+            ("1-8-cineole", 0.605),
+            ("alpha-pinene", 0.115),
+            ("camphor", 0.10),
+            ("beta-pinene", 0.065),
+        ],
+        composition_source: "1,8-cineole 58-63 % in the Moroccan cineole chemotype ('A Study of Moroccan Rosemary Oils', scilit); the others from memory of the ISO 1342 Tunisian/Moroccan type: α-pinene 9-14, camphor 5-15, β-pinene 4-9 %; midpoints. Not in the library: camphene",
+        oil_density_kg_per_m3: 901.0,
+        oil_density_source: "About 0.892-0.910 at 20 °C (ISO 1342-type range), from memory; midpoint",
+        rate_constant_per_min: spread(0.02, 0.03, 0.05),
+        rate_constant_source: "No fitted constant found; 0.03 (0.02-0.05) matches the 70 min run of a 300 g test (kttpmt.ntt.edu.vn, Vietnam) and 100 min runs in a steam column (sid.ir), judgement",
+        typical_run_min: spread(70.0, 90.0, 120.0),
+        typical_run_source: "70 min (kttpmt.ntt.edu.vn, Vietnam); 100 min (sid.ir research-plan abstract, Iran); 120 min upper end from memory",
+        steam_rate_kg_per_h_per_kg: 0.5,
+        steam_rate_source: "0.045 mL/s distillate from 300 g of dried, blended rosemary = 0.54 kg/h per kg, water:oil ≈ 21:1 (kttpmt.ntt.edu.vn, Vietnam); a lower steam flow gave a higher yield in a small column (sid.ir); 0.5 taken",
+        charge_density_kg_per_m3: 175.0,
+        charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.6,
+        plant_heat_capacity_j_per_kg_k: 3200.0,
+        thermal_source: WILTED_HEAT_SOURCE,
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "eucalyptus-globulus",
+        name: "Eucalyptus (blue gum)",
+        material: "Eucalyptus globulus, fresh or partly dried leaves",
+        oil_content_percent: spread(0.88, 1.0, 3.5),
+        oil_content_source: "Low 0.88: 0.96 % v/w from fresh leaves, Algeria (Boukhatem et al., Int. Lett. Chem. Phys. Astron. 36:303, 2014) × 0.915 oil density; typical 1.0: about 1 % of fresh or partly dried leaves (ChemicalBook; eucalyptusoil.com); high 3.5: commercial, fresh-leaf basis 1.5-3.5 %, from memory",
+        composition: &[("1-8-cineole", 0.65), ("alpha-pinene", 0.16), ("d-limonene", 0.06)],
+        composition_source: "Crude oil more than 60 % 1,8-cineole and 10-22 % α-pinene (Bauer, Garbe & Surburg text via ChemicalBook, CAS 8000-48-4); Indian natural oil 60-63 % cineole; limonene trace-12 % (BP, eucalyptusoil.com); cineole 0.65 and midpoints taken",
+        oil_density_kg_per_m3: 913.0,
+        oil_density_source: "Crude oil d20/20 0.905-0.925 (Surburg & Panten, Common Fragrance and Flavor Materials, via ChemicalBook); midpoint × 998.2 kg/m³",
+        rate_constant_per_min: spread(0.01, 0.02, 0.03),
+        rate_constant_source: "No fitted constant found; the leaf oil lies in internal cavities, so slower than surface-gland herbs (from memory); 0.02 (0.01-0.03) matches a 90-150 min run, judgement",
+        typical_run_min: spread(90.0, 120.0, 150.0),
+        typical_run_source: "1-2 h for fresh leaf, longer in commercial stills, from memory",
+        steam_rate_kg_per_h_per_kg: 0.4,
+        steam_rate_source: "No normalised rate found (a pilot unit ran 5.73 g/min, Armijo et al., Rev Per Quím Ing Quím 15(2):19-27, 2012, charge not given); 0.4 kg/h per kg is a judgement, no source",
+        charge_density_kg_per_m3: 175.0,
+        charge_density_source: "Leaves with twigs, loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.6,
+        plant_heat_capacity_j_per_kg_k: 3200.0,
+        thermal_source: WILTED_HEAT_SOURCE,
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "tea-tree",
+        name: "Tea tree",
+        material: "Melaleuca alternifolia, leaves and terminal branchlets, finely cut",
+        oil_content_percent: spread(1.0, 1.5, 2.3),
+        oil_content_source: "1-2 % of wet material (biologyinsights.com, low weight), typical = midpoint; high 2.30 % from needle leaves by hydrodistillation (EOPAA abstract, eopaa.com.au)",
+        composition: &[
+            ("terpinen-4-ol", 0.40),
+            ("gamma-terpinene", 0.19),
+            ("1-8-cineole", 0.075),
+            ("p-cymene", 0.0625),
+            ("alpha-pinene", 0.035),
+            ("d-limonene", 0.0225),
+        ],
+        composition_source: "ISO 4730 via PMC5516420 Table 1 and teatree.org.au: terpinen-4-ol ≥ 30 (typical 40), γ-terpinene 10-28, 1,8-cineole ≤ 15, p-cymene 0.5-12, α-pinene 1-6, limonene 0.5-4 %; typical, midpoints or half-limits. Not in the library: α-terpinene 5-13, terpinolene 1.5-5, α-terpineol 1.5-8 %",
+        oil_density_kg_per_m3: 890.0,
+        oil_density_source: "0.89 g/cm³ at 20 °C (ECHA registration dossier summary, chesar.echa.europa.eu)",
+        rate_constant_per_min: spread(0.025, 0.03, 0.04),
+        rate_constant_source: "Commercial stills 'cook' the cut biomass for up to 2 h (ATTIA, attia.org.au); k ≈ 0.025-0.03 per min if about 95 % is then recovered; high 0.04: judgement, no source",
+        typical_run_min: spread(90.0, 105.0, 120.0),
+        typical_run_source: "Up to 2 h (ATTIA, attia.org.au); 1.5-2 h per batch (ecoarts.cn, low weight)",
+        steam_rate_kg_per_h_per_kg: 0.5,
+        steam_rate_source: "No published steam rate seen; 0.5 kg/h per kg is a judgement, no source",
+        charge_density_kg_per_m3: 250.0,
+        charge_density_source: "Finely cut leaf and branchlet, packed: upper end of fresh leafy herbs (100-250 kg/m³) and middle of wood chips (200-300 kg/m³), from memory",
+        moisture_fraction: 0.6,
+        plant_heat_capacity_j_per_kg_k: 3200.0,
+        thermal_source: WILTED_HEAT_SOURCE,
+        distillate_temperature_c: 40.0,
+        distillate_temperature_source: "The condenser brings the mixture to 35-55 °C; the oil then stands 12 h in day tanks (ATTIA, attia.org.au); 40 °C taken",
+    },
+    Crop {
+        id: "clove-bud",
+        name: "Clove bud",
+        material: "Syzygium aromaticum, dried buds, comminuted",
+        oil_content_percent: spread(12.9, 16.0, 21.0),
+        oil_content_source: "Buds 12.9-18.5 % (Zachariah et al. 2005, via the book 'Volatiles from herbs and spices', issuhub.com); 15-21 % volatile oil (Merck Index / Leung text, druglead.com); typical 16 %",
+        composition: &[("eugenol", 0.75), ("beta-caryophyllene", 0.085)],
+        composition_source: "Eugenol 60-90 %, eugenyl acetate 2-27 %, β-caryophyllene 5-12 % (Merck Index text, druglead.com/cds/clove.html); midpoints. Not in the library: eugenyl acetate",
+        oil_density_kg_per_m3: 1046.0,
+        oil_density_source: "d25/25 1.038-1.060, heavier than water (Merck Index text, druglead.com); midpoint × 997.0 kg/m³",
+        rate_constant_per_min: spread(0.005, 0.008, 0.015),
+        rate_constant_source: "No fitted constant found; 0.008 (0.005-0.015) matches an 8-12 h run (from memory), judgement. Clove is limited by steam, not by rate: eugenol needs at least about 25 kg water per kg oil (ideal immiscible equilibrium, computed with thermo 0.6.1 and CoolProp 8.0.0)",
+        typical_run_min: spread(480.0, 600.0, 720.0),
+        typical_run_source: "8-12 h or more, from memory",
+        steam_rate_kg_per_h_per_kg: 0.5,
+        steam_rate_source: "0.5 kg/h per kg is a judgement, no source; the run needs at least 4-5 kg steam per kg buds in total (about 25 kg water per kg eugenol at equilibrium × 16 % oil; computed with thermo 0.6.1 and CoolProp 8.0.0)",
+        charge_density_kg_per_m3: 350.0,
+        charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; lower end taken for comminuted buds",
+        moisture_fraction: 0.1,
+        plant_heat_capacity_j_per_kg_k: 2000.0,
+        thermal_source: DRIED_HEAT_SOURCE,
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: "About 30 °C: common practice, no source. The oil sinks (d25/25 1.038-1.060, Merck Index text): use a separator that draws oil from the bottom",
+    },
+    Crop {
+        id: "coriander-seed",
+        name: "Coriander seed",
+        material: "Coriandrum sativum, crushed ripe fruit",
+        oil_content_percent: spread(0.3, 0.75, 1.7),
+        oil_content_source: "0.3-1.2 % (aho97.com crop page), typical = midpoint; high 1.4-1.7 % for Norwegian fruit (book page 'Volatiles from herbs and spices', issuhub.com); 0.5-1 % (A Treatise on Beverages)",
+        composition: &[
+            ("linalool", 0.785),
+            ("alpha-pinene", 0.05),
+            ("camphor", 0.039),
+            ("gamma-terpinene", 0.038),
+            ("d-limonene", 0.026),
+        ],
+        composition_source: "One Polish oil: linalool 78.5, α-pinene 5.0, camphor 3.9, γ-terpinene 3.8, limonene 2.6 % (Pol J Food Nutr Sci 68(3):243-249, 2018). Not in the library: geranyl acetate 2.1 %",
+        oil_density_kg_per_m3: 865.0,
+        oil_density_source: "Specific gravity 0.860-0.870 (A Treatise on Beverages, 'Oil of Coriander'); USP: 0.863-0.875; midpoint of the first",
+        rate_constant_per_min: spread(0.03, 0.05, 0.09),
+        rate_constant_source: "Hydrodistillation of crushed fruit: 1.20 % at 15 min, 1.62 % at 2 h (Pol J Food Nutr Sci 68(3):243-249, 2018) gives k ≈ 0.09 per min; steam distillation assumed slower (0.05, low 0.03), judgement",
+        typical_run_min: spread(60.0, 90.0, 120.0),
+        typical_run_source: "A 2 h laboratory run recovered 1.62 % (Pol J Food Nutr Sci 68(3), 2018); 60-120 min, judgement",
+        steam_rate_kg_per_h_per_kg: 0.4,
+        steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
+        charge_density_kg_per_m3: 450.0,
+        charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.1,
+        plant_heat_capacity_j_per_kg_k: 2000.0,
+        thermal_source: DRIED_HEAT_SOURCE,
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "thyme",
+        name: "Thyme",
+        material: "Thymus vulgaris (thymol type), flowering tops",
+        oil_content_percent: spread(1.7, 2.1, 2.5),
+        oil_content_source: "1.7-2.5 kg per 100 kg flowering tops (puressentiel.com herbarium, low weight); typical = midpoint",
+        composition: &[
+            ("thymol", 0.46),
+            ("p-cymene", 0.21),
+            ("gamma-terpinene", 0.075),
+            ("linalool", 0.0475),
+            ("carvacrol", 0.03),
+        ],
+        composition_source: "From memory (thymol-type thyme oil): thymol 37-55, p-cymene 14-28, γ-terpinene 4-11, linalool 3-6.5, carvacrol 0.5-5.5 %; midpoints",
+        oil_density_kg_per_m3: 925.0,
+        oil_density_source: "About 0.915-0.935 at 20 °C (thymol type), from memory; midpoint",
+        rate_constant_per_min: spread(0.02, 0.03, 0.05),
+        rate_constant_source: "No fitted constant found; taken equal to rosemary (a leafy Lamiaceae herb distilled 70-120 min), judgement",
+        typical_run_min: spread(90.0, 120.0, 180.0),
+        typical_run_source: "1.5-3 h, from memory",
+        steam_rate_kg_per_h_per_kg: 0.5,
+        steam_rate_source: "Taken equal to rosemary (0.54 kg/h per kg in a 300 g test, kttpmt.ntt.edu.vn, Vietnam), judgement",
+        charge_density_kg_per_m3: 175.0,
+        charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.6,
+        plant_heat_capacity_j_per_kg_k: 3200.0,
+        thermal_source: WILTED_HEAT_SOURCE,
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "oregano",
+        name: "Oregano",
+        material: "Origanum spp. (carvacrol type), dried herb",
+        oil_content_percent: spread(1.5, 2.75, 4.0),
+        oil_content_source: "1.5-4 % of dried herb, from memory; typical = midpoint",
+        composition: &[
+            ("carvacrol", 0.65),
+            ("p-cymene", 0.08),
+            ("gamma-terpinene", 0.05),
+            ("thymol", 0.02),
+            ("beta-caryophyllene", 0.02),
+        ],
+        composition_source: "From memory (carvacrol-type oregano oil): carvacrol about 60-75, p-cymene 5-10, γ-terpinene 3-7, thymol and β-caryophyllene about 2 % each",
+        oil_density_kg_per_m3: 948.0,
+        oil_density_source: "About 0.935-0.960 at 20 °C, from memory; midpoint",
+        rate_constant_per_min: spread(0.02, 0.03, 0.05),
+        rate_constant_source: "No fitted constant found; taken equal to rosemary, judgement",
+        typical_run_min: spread(120.0, 150.0, 180.0),
+        typical_run_source: "2-3 h, from memory",
+        steam_rate_kg_per_h_per_kg: 0.5,
+        steam_rate_source: "Taken equal to rosemary (0.54 kg/h per kg of dried charge in a 300 g test, kttpmt.ntt.edu.vn, Vietnam), judgement",
+        charge_density_kg_per_m3: 115.0,
+        charge_density_source: "Dried leaves or herb 80-150 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.1,
+        plant_heat_capacity_j_per_kg_k: 2000.0,
+        thermal_source: DRIED_HEAT_SOURCE,
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "clary-sage",
+        name: "Clary sage",
+        material: "Salvia sclarea, fresh inflorescences",
+        oil_content_percent: spread(0.15, 0.165, 0.18),
+        oil_content_source: "0.15-0.18 %, maximum at the end of flowering (J-STAGE abstract, journal code jsta1957, vol. 21); typical = midpoint. The '0.7-1.5 %' of Wikipedia 'Sage oil' is probably another basis",
+        composition: &[("linalyl-acetate", 0.67), ("linalool", 0.15), ("beta-caryophyllene", 0.02)],
+        composition_source: "From memory: linalyl acetate about 56-78, linalool 6.5-24, β-caryophyllene about 2 %; midpoints. Not in the library: germacrene D, α-terpineol, sclareol",
+        oil_density_kg_per_m3: 899.0,
+        oil_density_source: "About 0.890-0.908 at 20 °C, from memory; midpoint",
+        rate_constant_per_min: spread(0.012, 0.05, 0.08),
+        rate_constant_source: "No fitted constant found; taken equal to lavender (flowering tops, Zheljazkov et al., J Oleo Sci 62:195-199, 2013, k ≈ 3/60), judgement",
+        typical_run_min: spread(60.0, 90.0, 120.0),
+        typical_run_source: "1-2 h, from memory",
+        steam_rate_kg_per_h_per_kg: 0.3,
+        steam_rate_source: "Taken equal to lavender, judgement, no source",
+        charge_density_kg_per_m3: 175.0,
+        charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.8,
+        plant_heat_capacity_j_per_kg_k: 3800.0,
+        thermal_source: "Fresh inflorescences, 80 % water from memory; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025)",
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "german-chamomile",
+        name: "German chamomile",
+        material: "Matricaria chamomilla, fresh or partly dried flower heads",
+        oil_content_percent: spread(0.3, 0.65, 1.0),
+        oil_content_source: "0.3-1.0 % (Šavikin et al., Lekovite sirovine, abstract); typical = midpoint; a steam distillation reached 3.1 g oil per kg flowers after 720 min (Gawde, Cantrell, Zheljazkov, Astatkie & Schlegel, chamomile kinetics abstract)",
+        composition: &[("beta-caryophyllene", 1.0)],
+        composition_source: "The main compounds (bisabolol oxides A and B, bisabolone oxide A, chamazulene, (E)-β-farnesene, spiroethers; Gawde et al.; Šavikin et al.) are not in the library. β-Caryophyllene, a C15 sesquiterpene hydrocarbon like (E)-β-farnesene, stands in for the whole oil (fraction 1 by construction): a choice made here, no source; the real oil is less volatile",
+        oil_density_kg_per_m3: 930.0,
+        oil_density_source: "About 0.91-0.95 (blue, viscous), from memory; midpoint",
+        rate_constant_per_min: spread(0.006, 0.008, 0.012),
+        rate_constant_source: "Key constituents plateau after about 240 min, maximum 3.1 g/kg at 720 min (Gawde et al., chamomile steam-distillation kinetics abstract); t95 ≈ 240-480 min gives k ≈ 0.006-0.012 per min",
+        typical_run_min: spread(240.0, 360.0, 480.0),
+        typical_run_source: "Plateau after about 240 min (Gawde et al.); 6-13 h in practice, from memory",
+        steam_rate_kg_per_h_per_kg: 0.4,
+        steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
+        charge_density_kg_per_m3: 175.0,
+        charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.8,
+        plant_heat_capacity_j_per_kg_k: 3800.0,
+        thermal_source: "Fresh flower heads, 80 % water from memory; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025)",
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "rose",
+        name: "Damask rose",
+        material: "Rosa damascena, fresh flowers",
+        oil_content_percent: spread(0.017, 0.025, 0.067),
+        oil_content_source: "1/6000-1/3000 of flower weight, 0.017-0.033 % (Wikipedia 'Rose oil'); typical 0.025: 1 kg oil per about 4000 kg flowers (sonomascentstudio.com, low weight; phyto-aroma.com, low weight); high 0.067 % after 5 h (Sharma & Kumar, J Essent Oil Bear Plants 21:92, 2018)",
+        composition: &[("citronellol", 0.30), ("geraniol", 0.18), ("2-phenylethanol", 0.02)],
+        composition_source: "From memory (ISO 9842-type rose oil): citronellol about 20-40, geraniol 15-22, 2-phenylethanol 1-3 % (most of it stays in the rose water). Not in the library: nerol 5-12 %, the paraffin 'stearoptene' (nonadecane, heneicosane) about 15 %",
+        oil_density_kg_per_m3: 855.0,
+        oil_density_source: "About 0.848-0.861 (ISO 9842-type), from memory; midpoint. The oil congeals near 18-23 °C",
+        rate_constant_per_min: spread(0.01, 0.03, 0.05),
+        rate_constant_source: "Typical 0.03 and high 0.05: the still is fired 60-105 min for the first stage (Wikipedia 'Rose oil'), k ≈ 3/100 and 3/60; low 0.01: maximum oil content reached at 5 h (Sharma & Kumar, J Essent Oil Bear Plants 21:92, 2018), k ≈ 3/300",
+        typical_run_min: spread(60.0, 90.0, 300.0),
+        typical_run_source: "60-105 min first stage, then cohobation of the waters (Wikipedia 'Rose oil'); 5 h to the maximum (Sharma & Kumar 2018)",
+        steam_rate_kg_per_h_per_kg: 0.4,
+        steam_rate_source: "No published steam rate seen (rose is traditionally water-distilled); 0.4 kg/h per kg is a judgement, no source",
+        charge_density_kg_per_m3: 175.0,
+        charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken for fresh flowers",
+        moisture_fraction: 0.8,
+        plant_heat_capacity_j_per_kg_k: 3800.0,
+        thermal_source: "Fresh flowers, 80 % water from memory; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025)",
+        distillate_temperature_c: 40.0,
+        distillate_temperature_source: WARM_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "juniper-berry",
+        name: "Juniper berry",
+        material: "Juniperus communis, ripe or dried berries, crushed",
+        oil_content_percent: spread(0.5, 1.5, 2.6),
+        oil_content_source: "0.5-0.6 % non-fermented, 0.8-1.6 % fermented, dried Italian berries up to 2.6 % (ChemicalBook juniper berry oil, Fenaroli text); typical 1.5, from memory",
+        composition: &[("alpha-pinene", 0.311), ("myrcene", 0.163), ("terpinen-4-ol", 0.035)],
+        composition_source: "A commercial oil: α-pinene 31.1, myrcene 16.3 % (Falcão et al., Ind. Crops Prod. 124:878, 2018); terpinen-4-ol 1-6 %, the main oxygenated compound (Bauer, Garbe & Surburg via ChemicalBook CB5126800), midpoint. Not in the library: sabinene 7.5 %",
+        oil_density_kg_per_m3: 865.0,
+        oil_density_source: "d20 0.850-0.880 (Bauer, Garbe & Surburg via ChemicalBook CB5126800); midpoint, read as g/cm³",
+        rate_constant_per_min: spread(0.01, 0.015, 0.02),
+        rate_constant_source: "Washing and diffusion run at the same time in juniper berries (Marković et al., J Chem Technol Biotechnol 91:883-891, 2016), values not seen; 0.015 matches a 3-5 h run, judgement; about 30 % may come off at once from crushed berries, judgement",
+        typical_run_min: spread(180.0, 240.0, 300.0),
+        typical_run_source: "3-5 h, judgement; 4-8 h, from memory",
+        steam_rate_kg_per_h_per_kg: 0.4,
+        steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
+        charge_density_kg_per_m3: 450.0,
+        charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken for crushed berries",
+        moisture_fraction: 0.1,
+        plant_heat_capacity_j_per_kg_k: 2000.0,
+        thermal_source: DRIED_HEAT_SOURCE,
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "lemongrass",
+        name: "Lemongrass",
+        material: "Cymbopogon flexuosus / C. citratus, fresh or partly wilted leaves, cut",
+        oil_content_percent: spread(0.2, 0.265, 0.5),
+        oil_content_source: "Typical 0.265: 2.98 mL oil per kg from a 25-30 kg water-steam still, 10 mm cut, 180 min (thuvienso.quangbinhuni.edu.vn) × 0.885 oil density; 0.2-0.5 % of fresh leaves, from memory",
+        composition: &[("geranial", 0.75), ("myrcene", 0.10), ("geraniol", 0.03)],
+        composition_source: "From memory: citral (geranial + neral) 65-85 %, myrcene up to 10-20 % in C. citratus, geraniol a few %. Neral is not in the library: all citral is entered as geranial (neral boils about 17 K lower, 485.1 against 502.15 K in the tables of chemicals 1.5.2, so this underestimates the oil's volatility a little)",
+        oil_density_kg_per_m3: 882.0,
+        oil_density_source: "Specific gravity 0.8725-0.8965 at 25 °C (Nepali producer specifications, alternative.org.np, nripl.net; low weight); midpoint × 997.0 kg/m³",
+        rate_constant_per_min: spread(0.009, 0.045, 0.05),
+        rate_constant_source: "Typical 0.045: mean k 0.0451 for steam distillation of 100 g (Amenaghawon et al., IJASE 12(2):107-115, 2014; unit presumably per min); low 0.009: hydrodistillation 0.0087-0.0109 per min (Baou et al., Asian J Res Chem 15(3), 2022); high 0.05: judgement",
+        typical_run_min: spread(60.0, 90.0, 180.0),
+        typical_run_source: "Optimum 180 min in a 25-30 kg water-steam still (thuvienso.quangbinhuni.edu.vn); 60-120 min, judgement",
+        steam_rate_kg_per_h_per_kg: 0.5,
+        steam_rate_source: "No normalised rate found; looser packing and more steam raise yield in 70-1000 kg pilot stills (Koul et al., Indian J Chem Technol 11:135-139, 2004); 0.5 kg/h per kg is a judgement",
+        charge_density_kg_per_m3: 175.0,
+        charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.8,
+        plant_heat_capacity_j_per_kg_k: 3800.0,
+        thermal_source: "Fresh leaves, 80 % water from memory; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025)",
+        distillate_temperature_c: 32.0,
+        distillate_temperature_source: "For the related citronella grass the condensate should be 30-35 °C, with losses above 60 °C (haihangindustry.com, low weight); 32 °C taken",
+    },
+    Crop {
+        id: "basil",
+        name: "Sweet basil",
+        material: "Ocimum basilicum (linalool type), fresh flowering herb",
+        oil_content_percent: spread(0.21, 0.21, 0.43),
+        oil_content_source: "0.21 % by steam distillation, 0.43 % by water distillation (Özek et al. 1995, via Lawrence, Progress in Essential Oils, perfumerflavorist.com)",
+        composition: &[("linalool", 0.50), ("estragole", 0.10), ("1-8-cineole", 0.06), ("eugenol", 0.06)],
+        composition_source: "From memory (linalool-type sweet basil): linalool about 40-60, estragole 5-20, 1,8-cineole and eugenol about 3-10 % each",
+        oil_density_kg_per_m3: 910.0,
+        oil_density_source: "About 0.90-0.92 for the linalool type, from memory (the methyl-chavicol type is 0.952-0.973); midpoint",
+        rate_constant_per_min: spread(0.025, 0.04, 0.06),
+        rate_constant_source: "No fitted constant found (basil was modelled by single-plate diffusion, Cassel et al., Ind. Crops Prod. 29:171-176, 2009, values not seen); taken equal to peppermint, judgement",
+        typical_run_min: spread(60.0, 90.0, 120.0),
+        typical_run_source: "1-2 h, from memory",
+        steam_rate_kg_per_h_per_kg: 0.5,
+        steam_rate_source: "Taken equal to peppermint, judgement, no source",
+        charge_density_kg_per_m3: 175.0,
+        charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.85,
+        plant_heat_capacity_j_per_kg_k: 3800.0,
+        thermal_source: "Fresh herb, about 85 % water from memory; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025; Choi & Okos model 3.81 at 84 %)",
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "cedarwood",
+        name: "Cedarwood (juniper wood)",
+        material: "Juniperus spp. (western juniper, eastern red cedar) wood chips or sawdust",
+        oil_content_percent: spread(0.9, 1.4, 3.5),
+        oil_content_source: "Western juniper: 0.9-1.25 % of dry wood (Kurth & Lackey 1948), about 1.4 % over 32 charges (Kurth & Ross 1954), both via Oregon Forest Products Lab Report C-3 (juniper.oregonstate.edu); Virginian/Texas commercial 2.5-3.5 %, from memory. Steam distillation recovers only about half of the oil in chips (USDA-ARS news, 1999)",
+        composition: &[("beta-caryophyllene", 1.0)],
+        composition_source: "The main compounds (α-cedrene, thujopsene, cedrol; from memory) are not in the library. β-Caryophyllene, a C15H24 sesquiterpene like α-cedrene (Tb 535.65 K, CRC via chemicals 1.5.2), stands in for the whole oil (fraction 1 by construction): a choice made here, no source; cedrol is less volatile",
+        oil_density_kg_per_m3: 950.0,
+        oil_density_source: "About 0.940-0.960 (Virginian, d20), from memory; midpoint",
+        rate_constant_per_min: spread(0.001, 0.003, 0.006),
+        rate_constant_source: "No fitted constant found; k ≈ 3/t95 for runs of 8 h (0.006), 16 h (0.003) and 48 h (0.001), the run times from memory",
+        typical_run_min: spread(480.0, 960.0, 2880.0),
+        typical_run_source: "8-48 h, from memory",
+        steam_rate_kg_per_h_per_kg: 0.4,
+        steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
+        charge_density_kg_per_m3: 250.0,
+        charge_density_source: "Wood chips 200-300 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.12,
+        plant_heat_capacity_j_per_kg_k: 1940.0,
+        thermal_source: "Air-dry wood at about 12 % water, from memory; heat capacity by mass-weighted mixing (common practice, no source): 0.88 × 1630 J/(kg K) (ASHRAE woods, computed with ht 1.2.0) + 0.12 × 4180 (water) ≈ 1940",
+        distillate_temperature_c: 30.0,
+        distillate_temperature_source: COOL_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "anise-seed",
+        name: "Anise seed",
+        material: "Pimpinella anisum, crushed ripe fruit",
+        oil_content_percent: spread(1.5, 2.5, 4.0),
+        oil_content_source: "1.5-4 %, typical 2.5 %, from memory. A pilot steam distillation showed two regimes with a critical oil content of 0.011 g/g (Romdhane & Tizaoui, J Chem Technol Biotechnol 80(7):759-766, 2005)",
+        composition: &[("e-anethole", 0.90), ("estragole", 0.02)],
+        composition_source: "From memory: (E)-anethole about 87-94 %, estragole 0.5-5 %",
+        oil_density_kg_per_m3: 985.0,
+        oil_density_source: "About 0.980-0.990 at 20 °C, from memory; midpoint",
+        rate_constant_per_min: spread(0.03, 0.05, 0.09),
+        rate_constant_source: "No constant seen (Romdhane & Tizaoui 2005 report two regimes, values not seen); taken equal to coriander, judgement",
+        typical_run_min: spread(60.0, 120.0, 180.0),
+        typical_run_source: "1-3 h, from memory",
+        steam_rate_kg_per_h_per_kg: 0.4,
+        steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
+        charge_density_kg_per_m3: 450.0,
+        charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.1,
+        plant_heat_capacity_j_per_kg_k: 2000.0,
+        thermal_source: DRIED_HEAT_SOURCE,
+        distillate_temperature_c: 40.0,
+        distillate_temperature_source: WARM_CONDENSATE_SOURCE,
+    },
+    Crop {
+        id: "fennel-seed",
+        name: "Sweet fennel seed",
+        material: "Foeniculum vulgare var. dulce, crushed ripe fruit",
+        oil_content_percent: spread(2.0, 4.0, 6.0),
+        oil_content_source: "2-6 %, from memory; typical = midpoint",
+        composition: &[("e-anethole", 0.75), ("d-limonene", 0.05), ("estragole", 0.04)],
+        composition_source: "From memory (sweet fennel): (E)-anethole about 70-85 %, limonene about 5 %, estragole 2-6 %. Not in the library: fenchone (a few %), α-phellandrene",
+        oil_density_kg_per_m3: 968.0,
+        oil_density_source: "About 0.960-0.975 at 20 °C, from memory; midpoint",
+        rate_constant_per_min: spread(0.03, 0.05, 0.09),
+        rate_constant_source: "No constant seen (fennel fits simultaneous washing and diffusion in hydrodistillation, Milojević et al., Hem. Ind. 67(5):843-859, 2013, values not seen); taken equal to coriander, judgement",
+        typical_run_min: spread(60.0, 120.0, 180.0),
+        typical_run_source: "1-3 h, from memory",
+        steam_rate_kg_per_h_per_kg: 0.4,
+        steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
+        charge_density_kg_per_m3: 450.0,
+        charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken",
+        moisture_fraction: 0.1,
+        plant_heat_capacity_j_per_kg_k: 2000.0,
+        thermal_source: DRIED_HEAT_SOURCE,
+        distillate_temperature_c: 40.0,
+        distillate_temperature_source: WARM_CONDENSATE_SOURCE,
+    },
+];
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::compounds::COMPOUNDS;
+    use std::collections::HashSet;
+
+    fn is_id(s: &str) -> bool {
+        !s.is_empty()
+            && !s.starts_with('-')
+            && !s.ends_with('-')
+            && !s.contains("--")
+            && s.bytes().all(|b| b.is_ascii_lowercase() || b.is_ascii_digit() || b == b'-')
+    }
+
+    fn spreads(c: &Crop) -> [(&'static str, Spread); 3] {
+        [
+            ("oil_content_percent", c.oil_content_percent),
+            ("rate_constant_per_min", c.rate_constant_per_min),
+            ("typical_run_min", c.typical_run_min),
+        ]
+    }
+
+    #[test]
+    fn table_is_large_enough() {
+        assert!(CROPS.len() >= 16, "only {} crops", CROPS.len());
+    }
+
+    #[test]
+    fn ids_are_unique_and_well_formed() {
+        let mut seen = HashSet::new();
+        for c in CROPS {
+            assert!(is_id(c.id), "badly formed id {:?}", c.id);
+            assert!(seen.insert(c.id), "duplicate id {:?}", c.id);
+        }
+    }
+
+    #[test]
+    fn composition_ids_exist_and_fractions_are_in_unit_interval() {
+        for c in CROPS {
+            assert!(!c.composition.is_empty(), "{}: empty composition", c.id);
+            let mut seen = HashSet::new();
+            let mut total = 0.0;
+            for &(id, x) in c.composition {
+                assert!(COMPOUNDS.iter().any(|k| k.id == id), "{}: unknown compound {:?}", c.id, id);
+                assert!(seen.insert(id), "{}: {:?} listed twice", c.id, id);
+                assert!(x.is_finite() && x > 0.0 && x <= 1.0, "{}: {} fraction {}", c.id, id, x);
+                total += x;
+            }
+            assert!(total <= 1.0 + 1e-9, "{}: fractions add up to {}", c.id, total);
+        }
+    }
+
+    #[test]
+    fn spreads_are_ordered_finite_and_positive() {
+        for c in CROPS {
+            for (field, s) in spreads(c) {
+                for x in [s.low, s.typical, s.high] {
+                    assert!(x.is_finite() && x > 0.0, "{}: {} has {}", c.id, field, x);
+                }
+                assert!(
+                    s.low <= s.typical && s.typical <= s.high,
+                    "{}: {} not ordered: {:?}",
+                    c.id,
+                    field,
+                    s
+                );
+            }
+        }
+    }
+
+    #[test]
+    fn numbers_are_finite_and_positive() {
+        for c in CROPS {
+            for (field, x) in [
+                ("oil_density_kg_per_m3", c.oil_density_kg_per_m3),
+                ("steam_rate_kg_per_h_per_kg", c.steam_rate_kg_per_h_per_kg),
+                ("charge_density_kg_per_m3", c.charge_density_kg_per_m3),
+                ("moisture_fraction", c.moisture_fraction),
+                ("plant_heat_capacity_j_per_kg_k", c.plant_heat_capacity_j_per_kg_k),
+                ("distillate_temperature_c", c.distillate_temperature_c),
+            ] {
+                assert!(x.is_finite() && x > 0.0, "{}: {} = {}", c.id, field, x);
+            }
+        }
+    }
+
+    #[test]
+    fn units_are_the_stated_ones() {
+        // Guards against fractions entered as percent, g/cm³ as kg/m³, kJ as J and the like.
+        for c in CROPS {
+            assert!(c.oil_content_percent.high < 30.0, "{}", c.id);
+            assert!(c.moisture_fraction < 1.0, "{}", c.id);
+            assert!((700.0..1200.0).contains(&c.oil_density_kg_per_m3), "{}", c.id);
+            assert!((10.0..1000.0).contains(&c.charge_density_kg_per_m3), "{}", c.id);
+            assert!((500.0..4200.0).contains(&c.plant_heat_capacity_j_per_kg_k), "{}", c.id);
+            assert!(c.rate_constant_per_min.high < 1.0, "{}", c.id);
+            assert!(c.steam_rate_kg_per_h_per_kg < 5.0, "{}", c.id);
+            assert!(c.distillate_temperature_c < 100.0, "{}", c.id);
+        }
+    }
+
+    #[test]
+    fn every_text_field_is_filled() {
+        for c in CROPS {
+            for (field, text) in [
+                ("name", c.name),
+                ("material", c.material),
+                ("oil_content_source", c.oil_content_source),
+                ("composition_source", c.composition_source),
+                ("oil_density_source", c.oil_density_source),
+                ("rate_constant_source", c.rate_constant_source),
+                ("typical_run_source", c.typical_run_source),
+                ("steam_rate_source", c.steam_rate_source),
+                ("charge_density_source", c.charge_density_source),
+                ("thermal_source", c.thermal_source),
+                ("distillate_temperature_source", c.distillate_temperature_source),
+            ] {
+                assert!(!text.trim().is_empty(), "{}: empty {}", c.id, field);
+            }
+        }
+    }
+}

@@ -1,0 +1,114 @@
+//! The oil phase: a liquid mixture of compounds, ideal in the sense of Raoult's law.
+//!
+//! Inside the oil, each compound's partial pressure is p_i = x_i · p_i*(T) (Raoult's law, the
+//! ideal-solution limit; terpene mixtures are close to ideal, oxygenated compounds less so).
+//! Across the oil and the water, which do not mix, each liquid exerts its own vapour pressure in
+//! full (Dalton's law): see [`crate::codistillation`].
+
+use crate::compounds::{Compound, VapourPressure};
+use serde::{Deserialize, Serialize};
+
+/// The properties of one compound that the physics needs, owned so that a user's own compound
+/// and a library compound are handled alike.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
+pub struct Component {
+    pub id: String,
+    pub name: String,
+    pub molar_mass_kg_per_mol: f64,
+    pub liquid_density_kg_per_m3: f64,
+    pub vapour_pressure: VapourPressure,
+    pub water_solubility_kg_per_m3: f64,
+}
+
+impl From<&Compound> for Component {
+    fn from(c: &Compound) -> Self {
+        Component {
+            id: c.id.to_string(),
+            name: c.name.to_string(),
+            molar_mass_kg_per_mol: c.molar_mass_kg_per_mol,
+            liquid_density_kg_per_m3: c.liquid_density_kg_per_m3,
+            vapour_pressure: c.vapour_pressure,
+            water_solubility_kg_per_m3: c.water_solubility_kg_per_m3,
+        }
+    }
+}
+
+/// An oil: components with their amounts in moles (any consistent scale).
+#[derive(Debug, Clone, PartialEq)]
+pub struct Oil {
+    pub components: Vec<Component>,
+    pub moles: Vec<f64>,
+}
+
+impl Oil {
+    /// An oil from mass fractions (they need not sum to 1: they are renormalised).
+    /// Amounts are stored as moles per kg of oil.
+    ///
+    /// x_i = (w_i / M_i) / Σ_j (w_j / M_j).
+    ///
+    /// ```
+    /// use stillroom_core::{compounds::find, oil::{Component, Oil}};
+    /// let a = Component::from(find("alpha-pinene").unwrap());
+    /// let l = Component::from(find("linalool").unwrap());
+    /// let oil = Oil::from_mass_fractions(vec![a, l], &[0.5, 0.5]);
+    /// // Equal masses: the lighter molecule (136 vs 154 g/mol) has the larger mole fraction.
+    /// let x = oil.mole_fractions();
+    /// assert!(x[0] > 0.5 && (x[0] + x[1] - 1.0).abs() < 1e-12);
+    /// ```
+    pub fn from_mass_fractions(components: Vec<Component>, mass_fractions: &[f64]) -> Oil {
+        let total: f64 = mass_fractions.iter().sum();
+        let moles =
+            components.iter().zip(mass_fractions).map(|(c, w)| w / total / c.molar_mass_kg_per_mol).collect();
+        Oil { components, moles }
+    }
+
+    /// Mole fractions x_i = n_i / Σ n.
+    pub fn mole_fractions(&self) -> Vec<f64> {
+        let total: f64 = self.moles.iter().sum();
+        self.moles.iter().map(|n| n / total).collect()
+    }
+
+    /// Mass fractions w_i = n_i M_i / Σ n_j M_j.
+    pub fn mass_fractions(&self) -> Vec<f64> {
+        let masses: Vec<f64> =
+            self.components.iter().zip(&self.moles).map(|(c, n)| n * c.molar_mass_kg_per_mol).collect();
+        let total: f64 = masses.iter().sum();
+        masses.iter().map(|m| m / total).collect()
+    }
+
+    /// Mass of the oil, kg, for the stored mole amounts.
+    pub fn mass_kg(&self) -> f64 {
+        self.components.iter().zip(&self.moles).map(|(c, n)| n * c.molar_mass_kg_per_mol).sum()
+    }
+
+    /// Partial pressures over the oil by Raoult's law, p_i = x_i p_i*(T), Pa.
+    ///
+    /// Source: Raoult (1887); any thermodynamics text (e.g. Smith, Van Ness & Abbott,
+    /// *Introduction to Chemical Engineering Thermodynamics*, eq. 10.1). Valid for ideal
+    /// liquid mixtures; each p_i* within its correlation's range.
+    ///
+    /// ```
+    /// use stillroom_core::{compounds::find, oil::{Component, Oil}};
+    /// let c = Component::from(find("1-8-cineole").unwrap());
+    /// let oil = Oil::from_mass_fractions(vec![c.clone()], &[1.0]);
+    /// // A pure oil exerts its full vapour pressure.
+    /// let p = oil.partial_pressures_pa(373.15);
+    /// assert!((p[0] - c.vapour_pressure.pressure_pa(373.15)).abs() < 1e-9);
+    /// ```
+    pub fn partial_pressures_pa(&self, t_k: f64) -> Vec<f64> {
+        let x = self.mole_fractions();
+        self.components.iter().zip(x).map(|(c, x)| x * c.vapour_pressure.pressure_pa(t_k)).collect()
+    }
+
+    /// Total vapour pressure of the oil, Σ x_i p_i*(T), Pa.
+    pub fn vapour_pressure_pa(&self, t_k: f64) -> f64 {
+        self.partial_pressures_pa(t_k).iter().sum()
+    }
+
+    /// Volume-additive density of the oil, kg/m³: 1/ρ = Σ w_i / ρ_i.
+    pub fn ideal_density_kg_per_m3(&self) -> f64 {
+        let w = self.mass_fractions();
+        1.0 / self.components.iter().zip(w).map(|(c, w)| w / c.liquid_density_kg_per_m3).sum::<f64>()
+    }
+}

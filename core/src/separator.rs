@@ -1,0 +1,74 @@
+//! The separator (Florentine flask or essencier): oil droplets must rise (or sink) out of the
+//! distillate before the water leaves.
+//!
+//! Design basis as for gravity oil-water separators (API Publication 421, 1990): a design
+//! droplet, its Stokes velocity, a plan area of flow over velocity times a turbulence and
+//! short-circuit factor.
+
+/// Acceleration of gravity used in the separator, m/s² (standard gravity).
+pub const GRAVITY_M_PER_S2: f64 = 9.806_65;
+
+/// Terminal velocity of a small sphere by Stokes' law, m/s: v = g d² (ρ_w - ρ_o) / (18 μ).
+/// Positive when the droplet rises (oil lighter than water), negative when it sinks.
+///
+/// Source: Stokes (1851); Bird, Stewart & Lightfoot, *Transport Phenomena*, eq. 2.6-17.
+/// Valid while the droplet Reynolds number ρ_w |v| d / μ stays below about 1 (creeping flow);
+/// see [`droplet_reynolds_number`].
+///
+/// ```
+/// use stillroom_core::separator::stokes_velocity_m_per_s;
+/// // API 421 check: 150 µm, oil of 850 kg/m³ in water at 15.6 °C (ρ 998.9, μ 1.129 mPa·s):
+/// // 0.1617 cm/s.
+/// let v = stokes_velocity_m_per_s(150e-6, 850.0, 998.9, 1.129e-3);
+/// assert!((v * 100.0 - 0.1617).abs() < 0.0005);
+/// ```
+pub fn stokes_velocity_m_per_s(
+    droplet_diameter_m: f64,
+    oil_density_kg_per_m3: f64,
+    water_density_kg_per_m3: f64,
+    water_viscosity_pa_s: f64,
+) -> f64 {
+    GRAVITY_M_PER_S2 * droplet_diameter_m.powi(2) * (water_density_kg_per_m3 - oil_density_kg_per_m3)
+        / (18.0 * water_viscosity_pa_s)
+}
+
+/// Droplet Reynolds number Re = ρ_w |v| d / μ.
+///
+/// ```
+/// use stillroom_core::separator::droplet_reynolds_number;
+/// assert!((droplet_reynolds_number(0.0016, 150e-6, 998.9, 1.129e-3) - 0.2124).abs() < 1e-3);
+/// ```
+pub fn droplet_reynolds_number(
+    velocity_m_per_s: f64,
+    droplet_diameter_m: f64,
+    water_density_kg_per_m3: f64,
+    water_viscosity_pa_s: f64,
+) -> f64 {
+    water_density_kg_per_m3 * velocity_m_per_s.abs() * droplet_diameter_m / water_viscosity_pa_s
+}
+
+/// Least plan (surface) area for droplets to separate, m²: A = F Q / |v|.
+///
+/// Source: API Publication 421 (1990), A_H = F Q / V_t, with F the turbulence and
+/// short-circuit factor (about 1.2-1.7; F = 1.2 for a quiet vessel, from memory of API 421's
+/// figure). Valid for |v| > 0.
+///
+/// ```
+/// use stillroom_core::separator::plan_area_m2;
+/// // 20 L/h at 0.75 mm/s with F = 1: 74 cm².
+/// let a = plan_area_m2(20.0e-3 / 3600.0, 0.75e-3, 1.0);
+/// assert!((a * 1e4 - 74.07).abs() < 0.01);
+/// ```
+pub fn plan_area_m2(flow_m3_per_s: f64, velocity_m_per_s: f64, turbulence_factor: f64) -> f64 {
+    turbulence_factor * flow_m3_per_s / velocity_m_per_s.abs()
+}
+
+/// Diameter of a circle of the given area, m: D = (4 A / π)^0.5.
+///
+/// ```
+/// use stillroom_core::separator::diameter_for_area_m;
+/// assert!((diameter_for_area_m(std::f64::consts::PI / 4.0) - 1.0).abs() < 1e-12);
+/// ```
+pub fn diameter_for_area_m(area_m2: f64) -> f64 {
+    (4.0 * area_m2 / std::f64::consts::PI).sqrt()
+}
