@@ -114,14 +114,20 @@ impl CorrelationForm {
     /// assert!((f.pressure_pa(373.15) - 9726.0).abs() < 2.0);
     /// ```
     pub fn pressure_pa(&self, t_k: f64) -> f64 {
+        self.ln_pressure_pa(t_k).exp()
+    }
+
+    /// ln(p/Pa) at T: the correlation in its natural log-linear form, which stays finite where
+    /// the pressure itself would underflow (far below the boiling point).
+    pub fn ln_pressure_pa(&self, t_k: f64) -> f64 {
         match *self {
-            CorrelationForm::AntoineLnPa { a, b, c } => guarded(t_k + c, |d| (a - b / d).exp()),
+            CorrelationForm::AntoineLnPa { a, b, c } => guarded(t_k + c, |d| a - b / d),
             CorrelationForm::AntoineLog10Bar { a, b, c } => {
-                guarded(t_k + c, |d| PA_PER_BAR * ((a - b / d) * LN_10).exp())
+                guarded(t_k + c, |d| PA_PER_BAR.ln() + (a - b / d) * LN_10)
             }
-            CorrelationForm::AntoineLog10Pa { a, b, c } => guarded(t_k + c, |d| ((a - b / d) * LN_10).exp()),
+            CorrelationForm::AntoineLog10Pa { a, b, c } => guarded(t_k + c, |d| (a - b / d) * LN_10),
             CorrelationForm::AntoineLog10MmHgCelsius { a, b, c } => {
-                guarded(t_k - 273.15 + c, |d| PA_PER_MMHG * ((a - b / d) * LN_10).exp())
+                guarded(t_k - 273.15 + c, |d| PA_PER_MMHG.ln() + (a - b / d) * LN_10)
             }
             CorrelationForm::Wagner25 { tc_k, pc_pa, a, b, c, d } => {
                 if !(t_k > 0.0 && t_k < tc_k) {
@@ -129,7 +135,7 @@ impl CorrelationForm {
                 }
                 let tau = 1.0 - t_k / tc_k;
                 let sum = a * tau + b * tau.powf(1.5) + c * tau.powf(2.5) + d * tau.powi(5);
-                pc_pa * (tc_k / t_k * sum).exp()
+                pc_pa.ln() + tc_k / t_k * sum
             }
         }
     }
@@ -173,7 +179,7 @@ impl VapourPressure {
             CorrelationForm::Wagner25 { tc_k, .. } => tc_k - 1e-6,
             _ => 900.0,
         };
-        crate::numeric::find_root(|t| self.pressure_pa(t).ln() - p_pa.ln(), lo, hi, 1e-9).ok()
+        crate::numeric::find_root(|t| self.form.ln_pressure_pa(t) - p_pa.ln(), lo, hi, 1e-9).ok()
     }
 }
 

@@ -400,7 +400,7 @@ pub static COMPOUNDS: &[Compound] = &[
             form: CorrelationForm::AntoineLog10Bar { a: 5.02972, b: 2348.261012, c: -33.473 },
             t_min_k: 330.6,
             t_max_k: 500.7,
-            relative_uncertainty: 0.03, // common practice, no source
+            relative_uncertainty: 0.1, // its boiling point is 1.9 K under the handbook values
             confidence: Confidence::Measured,
         },
         vapour_pressure_source: "NIST Chemistry WebBook Antoine for carvone (99-49-0, stereoisomer unspecified), 330.6-500.7 K (as stored in chemicals 1.5.2, converted to log10 bar); the Landolt-Börnstein IV/20 set agrees within 0.3 % at 100 °C. Enantiomers share the curve",

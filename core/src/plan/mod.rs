@@ -369,7 +369,8 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, FieldError> {
             confidence: r.confidences[i],
         })
         .collect();
-    for c in components.iter().filter(|c| !c.correlation_in_range) {
+    // Estimates get their own, stronger warning below.
+    for c in components.iter().filter(|c| !c.correlation_in_range && c.confidence != Confidence::Estimated) {
         warn(
             &mut warnings,
             "correlation_out_of_range",

@@ -1,0 +1,114 @@
+//! The compound library against handbook boiling points and computed vapour pressures.
+
+use stillroom_core::compounds::{COMPOUNDS, Confidence, find};
+
+/// Published normal boiling points, K, as (id, lowest, highest published value, source).
+/// Where sources disagree the correlation must land within 1 K of the span they give.
+const HANDBOOK_BOILING_POINTS: &[(&str, f64, f64, &str)] = &[
+    ("alpha-pinene", 429.45, 430.0, "CRC Handbook 429.45 K; NIST WebBook 430 K"),
+    ("beta-pinene", 438.95, 438.95, "CRC Handbook"),
+    ("d-limonene", 448.0, 452.0, "NIST WebBook 450 ± 2 K (CRC Handbook 450.75 K)"),
+    ("myrcene", 440.2, 444.15, "CRC Handbook 444.15 K; NIST WebBook 440.2 K"),
+    ("p-cymene", 450.0, 450.15, "CRC Handbook 450.15 K; NIST WebBook 450 K"),
+    ("1-8-cineole", 449.15, 449.5, "CRC Handbook 449.15 K; NIST WebBook 449.5 K"),
+    ("linalyl-acetate", 493.2, 494.15, "CRC Handbook 494.15 K; NIST WebBook 493.2 K"),
+    ("camphor", 477.15, 482.3, "CAS Common Chemistry 477 K; NIST WebBook 482.3 K"),
+    ("menthol", 485.15, 489.6, "CAS Common Chemistry 485.15 K; CRC (l-) 487.15 K; NIST WebBook 489.6 K"),
+    ("carvone", 502.8, 504.15, "CRC Handbook (R)-carvone 504.15 K; NIST WebBook 502.8 K"),
+    ("geranial", 502.15, 502.15, "CRC Handbook"),
+    ("thymol", 506.0, 506.15, "CRC Handbook 506.15 K; NIST WebBook 506 K"),
+    ("carvacrol", 510.0, 514.65, "CRC Handbook 514.65 K; NIST WebBook 510 K"),
+    ("eugenol", 526.4, 527.15, "CRC Handbook 527.15 K; NIST WebBook 526.4 K"),
+    ("e-anethole", 508.7, 509.15, "CRC Handbook 509.15 K; NIST WebBook 508.7 K"),
+    ("estragole", 489.15, 490.8, "CRC Handbook 489.15 K; NIST WebBook 490.8 K"),
+    ("geraniol", 502.15, 503.2, "CRC Handbook 502.15 K; NIST WebBook 503.2 K"),
+    ("citronellol", 495.2, 497.65, "NIST WebBook 495.2 K; CRC Handbook 497.65 K"),
+    ("2-phenylethanol", 491.4, 493.15, "CRC Handbook 493.15 K; NIST WebBook 491.4 K"),
+    ("benzyl-alcohol", 478.45, 478.45, "CRC Handbook"),
+];
+
+/// Correlations known to miss the handbook value by more than 1 K, with the gap allowed and why.
+/// Each is still checked, against this wider bound.
+const KNOWN_DEVIATIONS: &[(&str, f64, &str)] = &[(
+    "carvone",
+    2.0,
+    "the NIST WebBook set was fitted up to 500.7 K only and boils at 500.9 K, 1.9 K under the \
+     502.8-504.15 K handbook values; the table carries a 10 % uncertainty for it",
+)];
+
+#[test]
+fn every_measured_correlation_reproduces_its_handbook_boiling_point() {
+    let mut checked = 0;
+    for c in COMPOUNDS.iter().filter(|c| c.vapour_pressure.confidence == Confidence::Measured) {
+        let Some(&(_, lo, hi, source)) = HANDBOOK_BOILING_POINTS.iter().find(|(id, ..)| *id == c.id) else {
+            panic!("{}: a measured correlation needs a handbook boiling point in this test", c.id);
+        };
+        let tb = c.vapour_pressure.temperature_at_k(101_325.0).expect("boiling point");
+        let allowed = KNOWN_DEVIATIONS.iter().find(|(id, ..)| *id == c.id).map_or(1.0, |d| d.1);
+        assert!(
+            tb >= lo - allowed && tb <= hi + allowed,
+            "{}: correlation boils at {tb:.2} K; {source} gives {lo}-{hi} K",
+            c.id
+        );
+        checked += 1;
+    }
+    assert!(checked >= 15, "only {checked} measured compounds");
+}
+
+#[test]
+fn fitted_and_estimated_correlations_pass_through_their_anchor_boiling_point() {
+    // Those laws were built through the handbook Tb; checking it guards the typed coefficients.
+    for c in COMPOUNDS.iter().filter(|c| c.vapour_pressure.confidence != Confidence::Measured) {
+        let tb = c.vapour_pressure.temperature_at_k(101_325.0).unwrap();
+        assert!(
+            (tb - c.normal_boiling_point_k).abs() <= 1.0,
+            "{}: {tb} vs {}",
+            c.id,
+            c.normal_boiling_point_k
+        );
+        assert!(
+            c.vapour_pressure.relative_uncertainty >= 0.1,
+            "{}: an estimate must say it is uncertain",
+            c.id
+        );
+    }
+}
+
+#[test]
+fn linalool_fit_matches_its_published_anchor_at_25_c() {
+    // Espinosa Díaz et al., Fluid Phase Equilib. (1999): d-linalool 27 Pa at 298 K.
+    let p = find("linalool").unwrap().vapour_pressure.pressure_pa(298.15);
+    assert!((p - 27.0).abs() / 27.0 <= 0.02, "{p}");
+}
+
+#[test]
+fn vapour_pressures_at_95_and_100_c_match_the_published_sets() {
+    // Each correlation evaluated with chemicals 1.5.2 (its own tables), Pa; 0.5 % tolerance.
+    let cases: &[(&str, f64, f64)] = &[
+        ("1-8-cineole", 8203.0, 9928.0),
+        ("d-limonene", 8038.0, 9726.0),
+        ("alpha-pinene", 16029.0, 19160.0),
+        ("beta-pinene", 11787.0, 14164.0),
+        ("p-cymene", 7566.0, 9217.0),
+        ("eugenol", 340.0, 442.0),
+        ("geraniol", 604.0, 786.0),
+        ("e-anethole", 787.0, 1004.0),
+    ];
+    for &(id, p95, p100) in cases {
+        let vp = find(id).unwrap().vapour_pressure;
+        for (t, want) in [(368.15, p95), (373.15, p100)] {
+            let got = vp.pressure_pa(t);
+            assert!((got - want).abs() / want <= 5e-3, "{id} at {t} K: {got} Pa, chemicals {want}");
+        }
+    }
+}
+
+#[test]
+fn at_least_twenty_compounds_across_the_families() {
+    use stillroom_core::compounds::CompoundClass::*;
+    assert!(COMPOUNDS.len() >= 20);
+    for class in [MonoterpeneHydrocarbon, OxygenatedMonoterpene, Phenylpropanoid, Sesquiterpene, RoseAlcohol]
+    {
+        assert!(COMPOUNDS.iter().any(|c| c.class == class), "{class:?} missing");
+    }
+}
