@@ -1,0 +1,323 @@
+//! The form: small components, one concern each. They read and write the state's signals and
+//! never compute physics.
+
+use crate::fields::{NumField, TextError, field};
+use crate::state::{AppState, CROP_OIL, PressureMode};
+use crate::units;
+use leptos::prelude::*;
+use stillroom_core::compounds::COMPOUNDS;
+use stillroom_core::crops::CROPS;
+use stillroom_core::heat::{Fuel, Metal};
+use stillroom_core::scenario::CondenserKind;
+
+/// The message shown beside a field: its own text first, then the core's verdict on its value.
+fn field_message(f: &NumField, state: &AppState) -> Option<String> {
+    let derived = state.scenario.get();
+    if let Some((_, e)) = derived.text_errors.iter().find(|(k, _)| *k == f.key) {
+        return Some(match e {
+            TextError::Empty => "Enter a value.".to_string(),
+            TextError::NotANumber => "Enter a number, such as 12.5.".to_string(),
+        });
+    }
+    let plan = state.plan.get();
+    let errors = plan.err()?;
+    let e = errors.errors.iter().find(|e| e.field == f.path)?;
+    let mut message = first_upper(&e.message);
+    if let (Some(min), Some(max)) = (e.min, e.max) {
+        let (a, b) = ((f.from_si)(min), (f.from_si)(max));
+        message =
+            format!("{message}. Valid: {} to {} {}.", units::sig3(a.min(b)), units::sig3(a.max(b)), f.unit);
+    } else {
+        message.push('.');
+    }
+    Some(message)
+}
+
+fn first_upper(s: &str) -> String {
+    let mut c = s.chars();
+    match c.next() {
+        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
+        None => String::new(),
+    }
+}
+
+/// What an optional field falls back to, shown as its placeholder.
+fn fallback(key: &str, state: &AppState) -> String {
+    let crop = state.crop.get().and_then(|id| CROPS.iter().find(|c| c.id == id));
+    match (key, crop) {
+        ("oil_content", Some(c)) => format!("{} (crop)", c.oil_content_percent.typical),
+        ("oil_density", Some(c)) => format!("{} (crop)", c.oil_density_kg_per_m3 / 1000.0),
+        ("rate_constant", Some(c)) => format!("{} (crop)", c.rate_constant_per_min.typical),
+        ("distillate_out", Some(c)) => format!("{} (crop)", c.distillate_temperature_c),
+        ("efficiency", _) => format!("{} (typical)", state.fuel.get().data().typical_efficiency * 100.0),
+        _ => String::new(),
+    }
+}
+
+/// One number field with its label, unit, hint and error message.
+#[component]
+pub fn NumberInput(key: &'static str) -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let f = field(key);
+    let text = state.text(key);
+    let msg_state = state.clone();
+    let message = Memo::new(move |_| field_message(f, &msg_state));
+    let ph_state = state.clone();
+    let placeholder = move || fallback(key, &ph_state);
+    let id = format!("f-{key}");
+    let err_id = format!("e-{key}");
+    view! {
+        <div class="field" class:invalid=move || message.get().is_some()>
+            <label for=id.clone()>
+                <span class="label">{f.label}</span>
+                <span class="unit">{f.unit}</span>
+            </label>
+            <input
+                id=id
+                name=key
+                type="text"
+                inputmode="decimal"
+                autocomplete="off"
+                placeholder=placeholder
+                aria-describedby=err_id.clone()
+                aria-invalid=move || if message.get().is_some() { "true" } else { "false" }
+                prop:value=move || text.get()
+                on:input=move |ev| text.set(event_target_value(&ev))
+            />
+            <p class="error" id=err_id aria-live="polite">{move || message.get()}</p>
+            <p class="hint">{f.hint}</p>
+        </div>
+    }
+}
+
+/// Picks the crop preset.
+#[component]
+pub fn CropPicker() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let crop = state.crop;
+    view! {
+        <div class="field">
+            <label for="f-crop"><span class="label">"Crop"</span></label>
+            <select id="f-crop" on:change=move |ev| {
+                let v = event_target_value(&ev);
+                crop.set(if v.is_empty() { None } else { Some(v) });
+            }>
+                <option value="" selected=move || crop.get().is_none()>"No preset"</option>
+                {CROPS.iter().map(|c| {
+                    let id = c.id;
+                    view! { <option value=id selected=move || crop.get().as_deref() == Some(id)>{c.name}</option> }
+                }).collect_view()}
+            </select>
+            <p class="hint">{move || crop.get().and_then(|id| CROPS.iter().find(|c| c.id == id)).map(|c| c.material)}</p>
+        </div>
+    }
+}
+
+/// Picks the oil: the crop's typical composition or one compound.
+#[component]
+pub fn OilPicker() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let choice = state.oil_choice;
+    let msg_state = state.clone();
+    let message = Memo::new(move |_| {
+        let plan = msg_state.plan.get();
+        plan.err()?
+            .errors
+            .iter()
+            .find(|e| e.field == "oil.composition")
+            .map(|e| first_upper(&e.message) + ".")
+    });
+    view! {
+        <div class="field" class:invalid=move || message.get().is_some()>
+            <label for="f-oil"><span class="label">"Oil"</span></label>
+            <select id="f-oil" on:change=move |ev| choice.set(event_target_value(&ev))>
+                <option value=CROP_OIL selected=move || choice.get() == CROP_OIL>"The crop's typical oil"</option>
+                {COMPOUNDS.iter().map(|c| {
+                    let id = c.id;
+                    view! { <option value=id selected=move || choice.get() == id>{c.name}</option> }
+                }).collect_view()}
+            </select>
+            <p class="error" id="e-oil" aria-live="polite">{move || message.get()}</p>
+            <p class="hint">"One compound, or the mix of main compounds typical of the crop."</p>
+        </div>
+    }
+}
+
+/// Chooses how the site's pressure is known, with the matching field.
+#[component]
+pub fn PressureInputs() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let mode = state.pressure_mode;
+    let option = move |value: PressureMode, label: &'static str, id: &'static str| {
+        view! {
+            <label class="choice" for=id>
+                <input type="radio" name="pressure-mode" id=id
+                    prop:checked=move || mode.get() == value
+                    on:change=move |_| mode.set(value) />
+                <span>{label}</span>
+            </label>
+        }
+    };
+    view! {
+        <fieldset class="choices">
+            <legend>"Air pressure from"</legend>
+            {option(PressureMode::Altitude, "Altitude (standard air)", "p-altitude")}
+            {option(PressureMode::Station, "My barometer at the still", "p-station")}
+            {option(PressureMode::SeaLevel, "The weather report", "p-sea-level")}
+        </fieldset>
+        <NumberInput key="altitude" />
+        <Show when=move || mode.get() == PressureMode::Station>
+            <NumberInput key="station_pressure" />
+        </Show>
+        <Show when=move || mode.get() == PressureMode::SeaLevel>
+            <NumberInput key="sea_level_pressure" />
+        </Show>
+    }
+}
+
+/// Picks the fuel.
+#[component]
+pub fn FuelPicker() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let fuel = state.fuel;
+    let options = [
+        (Fuel::Propane, "propane", "Propane (bottled gas)"),
+        (Fuel::NaturalGas, "natural_gas", "Natural gas"),
+        (Fuel::Firewood, "firewood", "Firewood"),
+        (Fuel::Electricity, "electricity", "Electricity"),
+    ];
+    view! {
+        <div class="field">
+            <label for="f-fuel"><span class="label">"Heat source"</span></label>
+            <select id="f-fuel" on:change=move |ev| {
+                let v = event_target_value(&ev);
+                if let Some((f, _, _)) = options.iter().find(|(_, k, _)| *k == v) { fuel.set(*f); }
+            }>
+                {options.iter().map(|(f, k, label)| {
+                    let f = *f;
+                    view! { <option value=*k selected=move || fuel.get() == f>{*label}</option> }
+                }).collect_view()}
+            </select>
+        </div>
+    }
+}
+
+/// Picks the still's metal.
+#[component]
+pub fn MetalPicker() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let metal = state.metal;
+    let options = [
+        (Metal::Copper, "copper", "Copper"),
+        (Metal::StainlessSteel, "stainless", "Stainless steel"),
+        (Metal::CarbonSteel, "carbon", "Carbon steel"),
+        (Metal::Aluminium, "aluminium", "Aluminium"),
+    ];
+    view! {
+        <div class="field">
+            <label for="f-metal"><span class="label">"Still made of"</span></label>
+            <select id="f-metal" on:change=move |ev| {
+                let v = event_target_value(&ev);
+                if let Some((m, _, _)) = options.iter().find(|(_, k, _)| *k == v) { metal.set(*m); }
+            }>
+                {options.iter().map(|(m, k, label)| {
+                    let m = *m;
+                    view! { <option value=*k selected=move || metal.get() == m>{*label}</option> }
+                }).collect_view()}
+            </select>
+        </div>
+    }
+}
+
+/// Picks the condenser's build.
+#[component]
+pub fn CondenserPicker() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let kind = state.condenser_kind;
+    view! {
+        <fieldset class="choices">
+            <legend>"Condenser"</legend>
+            <label class="choice" for="c-tub">
+                <input type="radio" name="condenser" id="c-tub"
+                    prop:checked=move || kind.get() == CondenserKind::CoilInTub
+                    on:change=move |_| kind.set(CondenserKind::CoilInTub) />
+                <span>"Coil in a tub of water"</span>
+            </label>
+            <label class="choice" for="c-jacket">
+                <input type="radio" name="condenser" id="c-jacket"
+                    prop:checked=move || kind.get() == CondenserKind::TubeInTube
+                    on:change=move |_| kind.set(CondenserKind::TubeInTube) />
+                <span>"Tube in a water jacket"</span>
+            </label>
+        </fieldset>
+    }
+}
+
+/// The first things a grower knows: crop, amount, oil, place.
+#[component]
+pub fn EssentialInputs() -> impl IntoView {
+    view! {
+        <section class="inputs" aria-labelledby="h-essentials">
+            <h2 id="h-essentials">"Your charge and site"</h2>
+            <CropPicker />
+            <NumberInput key="plant_mass" />
+            <NumberInput key="oil_content" />
+            <OilPicker />
+            <PressureInputs />
+        </section>
+    }
+}
+
+/// Everything else, folded away until needed.
+#[component]
+pub fn EquipmentInputs() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let kind = state.condenser_kind;
+    view! {
+        <section class="inputs" aria-labelledby="h-equipment">
+            <h2 id="h-equipment">"Your equipment"</h2>
+            <details open>
+                <summary>"Boiler and heat"</summary>
+                <FuelPicker />
+                <NumberInput key="heat_input" />
+                <NumberInput key="efficiency" />
+                <NumberInput key="boiler_water" />
+                <NumberInput key="steam_rate" />
+                <NumberInput key="ambient" />
+            </details>
+            <details>
+                <summary>"Still"</summary>
+                <NumberInput key="still_volume" />
+                <MetalPicker />
+                <NumberInput key="metal_mass" />
+                <NumberInput key="wall_u" />
+            </details>
+            <details>
+                <summary>"Condenser and cooling water"</summary>
+                <CondenserPicker />
+                <NumberInput key="cooling_in" />
+                <NumberInput key="cooling_out" />
+                <NumberInput key="distillate_out" />
+                <Show when=move || kind.get() == CondenserKind::CoilInTub>
+                    <NumberInput key="tub_water" />
+                </Show>
+                <NumberInput key="condensing_u" />
+                <NumberInput key="tube_od" />
+            </details>
+            <details>
+                <summary>"Separator"</summary>
+                <NumberInput key="droplet" />
+                <NumberInput key="residence" />
+            </details>
+            <details>
+                <summary>"Run, season and costs"</summary>
+                <NumberInput key="target" />
+                <NumberInput key="rate_constant" />
+                <NumberInput key="harvest" />
+                <NumberInput key="fuel_price" />
+                <NumberInput key="plant_value" />
+                <NumberInput key="labour" />
+            </details>
+        </section>
+    }
+}

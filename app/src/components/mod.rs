@@ -1,0 +1,5 @@
+//! The page's components.
+
+pub mod cautions;
+pub mod inputs;
+pub mod results;

@@ -1,0 +1,260 @@
+//! The plan, shown. Every number here comes from the core's plan through [`crate::units`].
+
+use crate::state::AppState;
+use crate::units;
+use leptos::prelude::*;
+use stillroom_core::plan::{OilLayer, RunLimit};
+use stillroom_core::scenario::CondenserKind;
+use stillroom_core::{Plan, ScenarioErrors};
+
+type PlanMemo = Memo<Result<Plan, ScenarioErrors>>;
+
+/// A text derived from the plan, or a dash while the plan cannot be made.
+fn from_plan(plan: PlanMemo, f: impl Fn(&Plan) -> String + Send + Sync + 'static) -> Signal<String> {
+    Signal::derive(move || plan.with(|r| r.as_ref().map(&f).unwrap_or_else(|_| "–".to_string())))
+}
+
+/// One labelled value; `out` names it for tests and assistive tools.
+#[component]
+fn Row(label: &'static str, out: &'static str, value: Signal<String>) -> impl IntoView {
+    view! {
+        <div class="row">
+            <dt>{label}</dt>
+            <dd data-out=out>{move || value.get()}</dd>
+        </div>
+    }
+}
+
+/// A headline figure in a large card.
+#[component]
+fn Card(
+    label: &'static str,
+    out: &'static str,
+    value: Signal<String>,
+    note: Signal<String>,
+) -> impl IntoView {
+    view! {
+        <div class="card">
+            <p class="card-label">{label}</p>
+            <p class="card-value" data-out=out>{move || value.get()}</p>
+            <p class="card-note">{move || note.get()}</p>
+        </div>
+    }
+}
+
+/// The numbers that decide the run, right under the essential inputs.
+#[component]
+pub fn Headline() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let plan = state.plan;
+    let failing = move || plan.with(|r| r.as_ref().err().map(|e| e.errors.len()));
+    view! {
+        <section class="headline" aria-labelledby="h-headline" aria-live="polite">
+            <h2 id="h-headline">"The run at a glance"</h2>
+            <Show when=move || failing().is_some()>
+                <p class="notice" data-out="plan_blocked">
+                    {move || format!("Fix the {} marked field(s) to see the plan.", failing().unwrap_or(0))}
+                </p>
+            </Show>
+            <div class="cards">
+                <Card label="Air pressure at the still" out="pressure"
+                    value=from_plan(plan, |p| units::kpa(p.site.pressure_pa))
+                    note=from_plan(plan, |p| match p.site.pressure_from {
+                        stillroom_core::plan::PressureFrom::StandardAtmosphere => "standard air at this altitude".into(),
+                        stillroom_core::plan::PressureFrom::StationBarometer => "from your barometer".into(),
+                        stillroom_core::plan::PressureFrom::SeaLevelBarometer => "weather report, brought to your altitude".into(),
+                    }) />
+                <Card label="Water boils at" out="water_boiling_point"
+                    value=from_plan(plan, |p| units::celsius(p.site.water_boiling_point_c))
+                    note=from_plan(plan, |p| format!("{} from sea level", units::kelvin_shift(p.site.boiling_point_shift_k))) />
+                <Card label="Oil and water boil together at" out="codistillation_temperature"
+                    value=from_plan(plan, |p| units::celsius(p.codistillation.temperature_c))
+                    note=from_plan(plan, |p| format!("{} below water alone", units::fixed(p.codistillation.lowering_k, 1) + " K")) />
+                <Card label="Least steam per kg of oil" out="steam_per_kg_oil"
+                    value=from_plan(plan, |p| format!("{} kg", units::sig3(p.codistillation.min_steam_per_kg_oil)))
+                    note=Signal::derive(|| "the thermodynamic minimum, at the start".to_string()) />
+                <Card label="Least steam for this charge" out="min_steam_charge"
+                    value=from_plan(plan, |p| units::mass(p.codistillation.min_steam_whole_charge_kg))
+                    note=from_plan(plan, |p| format!("{} to reach the target", units::mass(p.codistillation.min_steam_to_target_kg))) />
+                <Card label="First drop after" out="first_drop"
+                    value=from_plan(plan, |p| units::duration(p.run.time_to_first_drop_s))
+                    note=from_plan(plan, |p| format!("boiler boils after {}", units::duration(p.run.time_to_boil_s))) />
+                <Card label="Whole run" out="total_time"
+                    value=from_plan(plan, |p| units::duration(p.run.total_time_s))
+                    note=from_plan(plan, |p| format!("{} of distilling", units::duration(p.run.time_after_first_drop_s))) />
+                <Card label="Oil expected" out="oil_volume"
+                    value=from_plan(plan, |p| units::volume(p.yield_estimate.oil_volume_m3.central))
+                    note=from_plan(plan, |p| format!("likely {} – {}", units::volume(p.yield_estimate.oil_volume_m3.low), units::volume(p.yield_estimate.oil_volume_m3.high))) />
+            </div>
+        </section>
+    }
+}
+
+/// Warnings from the plan, each in plain words.
+#[component]
+pub fn Warnings() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let plan = state.plan;
+    let list = move || plan.with(|r| r.as_ref().map(|p| p.warnings.clone()).unwrap_or_default());
+    view! {
+        <Show when=move || !list().is_empty()>
+            <section class="warnings" aria-labelledby="h-warnings">
+                <h2 id="h-warnings">"Watch out"</h2>
+                <ul>
+                    {move || list().into_iter().map(|w| view! { <li data-warning=w.code>{w.message}</li> }).collect_view()}
+                </ul>
+            </section>
+        </Show>
+    }
+}
+
+/// Share of the oil over time, as a small line chart.
+#[component]
+fn RecoveryChart() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let plan = state.plan;
+    let points = move || {
+        plan.with(|r| {
+            r.as_ref()
+                .map(|p| {
+                    let curve = &p.run.recovery_curve;
+                    let t_end = curve.last().map(|c| c.0).unwrap_or(1.0).max(1.0);
+                    curve
+                        .iter()
+                        .map(|(t, y)| format!("{:.1},{:.1}", 10.0 + 280.0 * t / t_end, 110.0 - 100.0 * y))
+                        .collect::<Vec<_>>()
+                        .join(" ")
+                })
+                .unwrap_or_default()
+        })
+    };
+    let end_label = move || {
+        plan.with(|r| r.as_ref().map(|p| units::duration(p.run.time_after_first_drop_s)).unwrap_or_default())
+    };
+    view! {
+        <figure class="chart">
+            <svg viewBox="0 0 300 130" role="img" aria-label="Share of the oil recovered over the run">
+                <line x1="10" y1="110" x2="290" y2="110" class="axis" />
+                <line x1="10" y1="10" x2="10" y2="110" class="axis" />
+                <line x1="10" y1="10" x2="290" y2="10" class="grid" />
+                <polyline points=points class="curve" />
+                <text x="14" y="22" class="tick">"100 %"</text>
+                <text x="14" y="124" class="tick">"first drop"</text>
+                <text x="288" y="124" class="tick end">{end_label}</text>
+            </svg>
+            <figcaption>"Share of the recoverable oil over time after the first drop (first-order release)."</figcaption>
+        </figure>
+    }
+}
+
+/// The full plan, panel by panel.
+#[component]
+pub fn Details() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let plan = state.plan;
+    let p = move |f: fn(&Plan) -> String| from_plan(plan, f);
+    view! {
+        <section class="details" aria-labelledby="h-details">
+            <h2 id="h-details">"The plan in full"</h2>
+
+            <h3>"Steam and time"</h3>
+            <dl>
+                <Row label="Steam raised" out="steam_rate" value=p(|p| format!("{} kg/h", units::sig3(p.run.steam_rate_kg_per_s * 3600.0))) />
+                <Row label="Steam through the plant" out="specific_steam" value=p(|p| format!("{} kg/h per kg of charge", units::sig3(p.run.specific_steam_rate_kg_per_h_per_kg))) />
+                <Row label="Steam condensed warming the charge and still" out="startup_condensate" value=p(|p| units::mass(p.run.startup_condensate_kg)) />
+                <Row label="Steam after the first drop" out="distillate_steam" value=p(|p| units::mass(p.run.distillate_steam_kg)) />
+                <Row label="Planned steam over the least steam" out="steam_ratio" value=p(|p| format!("{}×", units::sig3(p.run.steam_to_minimum_ratio))) />
+                <Row label="What sets the run's length" out="limited_by" value=p(|p| match p.run.limited_by {
+                    RunLimit::Release => "oil leaving the plant".to_string(),
+                    RunLimit::Steam => "the steam's carrying power".to_string(),
+                }) />
+                <Row label="Recovery rate used" out="rate_constant" value=p(|p| format!("{} per min", units::sig3(p.run.rate_constant_per_min))) />
+                <Row label="Boiler water turned to steam" out="evaporated" value=p(|p| units::mass(p.run.boiler_water_evaporated_kg)) />
+                <Row label="Top up the boiler" out="refill" value=p(|p| match p.run.boiler_dry_after_s {
+                    Some(t) => format!("before {} after lighting ({} refill(s))", units::duration(t), p.run.refills),
+                    None => "not needed for this run".to_string(),
+                }) />
+            </dl>
+            <RecoveryChart />
+
+            <h3>"Heat and fuel"</h3>
+            <dl>
+                <Row label="Heat reaching the water" out="useful_heat" value=p(|p| units::kilowatts(p.run.useful_heat_w)) />
+                <Row label="Fuel for the run" out="fuel" value=p(|p| format!("{} {}", units::sig3(p.energy.fuel_amount), p.energy.fuel_unit)) />
+                <Row label="Heat: boiler water / charge / still" out="heat_split" value=p(|p| format!("{} / {} / {} MJ",
+                    units::sig3(p.energy.boiler_water_heating_j / 1e6), units::sig3(p.energy.charge_heating_j / 1e6), units::sig3(p.energy.still_heating_j / 1e6))) />
+                <Row label="Heat: lost through the wall / carried to the condenser" out="heat_out" value=p(|p| format!("{} / {} MJ",
+                    units::sig3(p.energy.wall_loss_j / 1e6), units::sig3(p.energy.steam_to_condenser_j / 1e6))) />
+                <Row label="Cost of the run" out="cost" value=p(|p| match &p.energy.cost {
+                    None => "add prices under “Run, season and costs”".to_string(),
+                    Some(c) => format!("{} {}{}", units::sig3(c.total), c.currency,
+                        c.per_millilitre_oil.map(|m| format!(" ({} per mL of oil)", units::sig3(m))).unwrap_or_default()),
+                }) />
+            </dl>
+
+            <h3>"Condenser and water"</h3>
+            <dl>
+                <Row label="Heat to take out" out="condenser_duty" value=p(|p| units::kilowatts(p.condenser.duty_w)) />
+                <Row label="Cooling water" out="cooling_flow" value=p(|p| units::litres_per_minute(p.condenser.cooling_water_flow_kg_per_s)) />
+                <Row label="Cooling water per run" out="cooling_per_run" value=p(|p| units::volume(p.condenser.cooling_water_per_run_kg / 1000.0)) />
+                <Row label="Tub water lasts" out="tub_lasts" value=p(|p| match (p.condenser.kind, p.condenser.tub_lasts_s) {
+                    (CondenserKind::CoilInTub, Some(t)) => format!("{} without a cold feed", units::duration(t)),
+                    _ => "– (jacketed condenser)".to_string(),
+                }) />
+                <Row label="Cooling area needed" out="condenser_area" value=p(|p| units::area(p.condenser.area_m2)) />
+                <Row label="Tube length" out="tube_length" value=p(|p| units::length(p.condenser.tube_length_m)) />
+                <Row label="Water for the run, boiler and cooling" out="total_water" value=p(|p| units::volume(p.water_use.total_kg / 1000.0)) />
+                <Row label="Hydrosol (distillate water)" out="hydrosol" value=p(|p| units::volume(p.run.hydrosol_volume_m3)) />
+            </dl>
+
+            <h3>"Separator"</h3>
+            <dl>
+                <Row label="Distillate flow" out="distillate_flow" value=p(|p| units::litres_per_hour(p.separator.distillate_flow_m3_per_s)) />
+                <Row label="Oil gathers at the" out="oil_layer" value=p(|p| match p.separator.oil_outlet {
+                    OilLayer::Top => "top: water leaves from the bottom".to_string(),
+                    OilLayer::Bottom => "bottom: water leaves from the top".to_string(),
+                }) />
+                <Row label="Design droplet moves" out="droplet_velocity" value=p(|p| format!("{} {}", units::mm_per_s(p.separator.droplet_velocity_m_per_s.abs()),
+                    if p.separator.droplet_velocity_m_per_s >= 0.0 { "up" } else { "down" })) />
+                <Row label="Least surface area" out="separator_area" value=p(|p| p.separator.plan_area_m2.map(units::area).unwrap_or_else(|| "no gravity separation".into())) />
+                <Row label="Diameter" out="separator_diameter" value=p(|p| p.separator.diameter_m.map(units::length).unwrap_or_else(|| "–".into())) />
+                <Row label="Volume for the standing time" out="separator_volume" value=p(|p| units::volume(p.separator.volume_m3)) />
+                <Row label="Liquid height" out="separator_height" value=p(|p| p.separator.height_m.map(units::length).unwrap_or_else(|| "–".into())) />
+            </dl>
+
+            <h3>"Oil and hydrosol"</h3>
+            <dl>
+                <Row label="Oil in the charge" out="oil_in_charge" value=p(|p| units::mass(p.yield_estimate.oil_in_charge_kg)) />
+                <Row label="Oil recovered" out="oil_mass" value=p(|p| units::range(units::mass(p.yield_estimate.oil_kg.central), units::mass(p.yield_estimate.oil_kg.low), units::mass(p.yield_estimate.oil_kg.high))) />
+                <Row label="As share of the plant" out="oil_share" value=p(|p| format!("{} %", units::sig3(p.yield_estimate.recovery_percent_of_plant.central))) />
+                <Row label="Water to oil" out="water_to_oil" value=p(|p| format!("{} : 1", units::sig3(p.run.water_to_oil_ratio))) />
+                <Row label="Oil dissolved in the hydrosol" out="dissolved" value=p(|p| format!("{} ({})", units::mass(p.yield_estimate.dissolved_in_hydrosol_kg), units::percent(p.yield_estimate.dissolved_share))) />
+                <Row label="Oil density used" out="oil_density" value=p(|p| format!("{} g/mL", units::fixed(p.oil.density_kg_per_m3 / 1000.0, 3))) />
+            </dl>
+            <table class="composition">
+                <caption>"Oil composition and the first vapour"</caption>
+                <thead><tr><th scope="col">"Compound"</th><th scope="col">"In the oil"</th><th scope="col">"In the first vapour"</th></tr></thead>
+                <tbody>
+                    {move || plan.with(|r| r.as_ref().map(|p| p.oil.components.iter().map(|c| view! {
+                        <tr>
+                            <th scope="row">{c.name.clone()}{if c.correlation_in_range { "" } else { " *" }}</th>
+                            <td>{units::percent(c.mass_fraction)}</td>
+                            <td>{units::percent(c.first_vapour_mass_fraction)}</td>
+                        </tr>
+                    }).collect_view()).ok())}
+                </tbody>
+            </table>
+
+            <Show when=move || plan.with(|r| r.as_ref().map(|p| p.season.is_some()).unwrap_or(false))>
+                <h3>"Season"</h3>
+                <dl>
+                    <Row label="Charges" out="season_charges" value=p(|p| p.season.as_ref().map(|s| s.charges.to_string()).unwrap_or_default()) />
+                    <Row label="Still time, with turnarounds" out="season_time" value=p(|p| p.season.as_ref().map(|s| format!("{} h", units::sig3(s.total_time_s / 3600.0))).unwrap_or_default()) />
+                    <Row label="Fuel" out="season_fuel" value=p(|p| p.season.as_ref().map(|s| format!("{} {}", units::sig3(s.fuel_amount), p.energy.fuel_unit)).unwrap_or_default()) />
+                    <Row label="Water" out="season_water" value=p(|p| p.season.as_ref().map(|s| units::volume(s.water_kg / 1000.0)).unwrap_or_default()) />
+                    <Row label="Oil" out="season_oil" value=p(|p| p.season.as_ref().map(|s| units::mass(s.oil_kg)).unwrap_or_default()) />
+                </dl>
+            </Show>
+        </section>
+    }
+}

@@ -1,0 +1,499 @@
+//! The form's number fields: what each one is called, the unit the grower types in, how that
+//! converts to the core's SI field, and back. This is the page's edge: the only place where
+//! units change.
+
+use stillroom_core::scenario::{Barometer, BarometerReference, Scenario};
+
+/// How a field's text maps onto the scenario.
+pub struct NumField {
+    /// Stable key: element ids, storage and tests use it.
+    pub key: &'static str,
+    /// The core's dotted field path, to match its validation errors.
+    pub path: &'static str,
+    pub label: &'static str,
+    pub unit: &'static str,
+    /// A one-line hint under the field.
+    pub hint: &'static str,
+    /// Whether leaving the field empty falls back to a default (shown as a placeholder).
+    pub optional: bool,
+    /// Shown-unit value -> SI value.
+    pub to_si: fn(f64) -> f64,
+    /// SI value -> shown-unit value.
+    pub from_si: fn(f64) -> f64,
+    pub get: fn(&Scenario) -> Option<f64>,
+    pub set: fn(&mut Scenario, Option<f64>),
+}
+
+fn same(v: f64) -> f64 {
+    v
+}
+fn kilo(v: f64) -> f64 {
+    v * 1e3
+}
+fn per_kilo(v: f64) -> f64 {
+    v / 1e3
+}
+fn hecto(v: f64) -> f64 {
+    v * 1e2
+}
+fn per_hecto(v: f64) -> f64 {
+    v / 1e2
+}
+fn milli(v: f64) -> f64 {
+    v * 1e-3
+}
+fn per_milli(v: f64) -> f64 {
+    v * 1e3
+}
+fn micro(v: f64) -> f64 {
+    v * 1e-6
+}
+fn per_micro(v: f64) -> f64 {
+    v * 1e6
+}
+fn minutes(v: f64) -> f64 {
+    v * 60.0
+}
+fn per_minutes(v: f64) -> f64 {
+    v / 60.0
+}
+fn percent(v: f64) -> f64 {
+    v / 100.0
+}
+fn per_percent(v: f64) -> f64 {
+    v * 100.0
+}
+
+fn barometer_of(s: &mut Scenario) -> &mut Barometer {
+    s.site.barometer.get_or_insert_with(Barometer::default)
+}
+
+/// Every number field, in page order.
+pub const FIELDS: &[NumField] = &[
+    NumField {
+        key: "altitude",
+        path: "site.altitude_m",
+        label: "Altitude of the still",
+        unit: "m",
+        hint: "Height above sea level, from a map or GPS.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| Some(s.site.altitude_m),
+        set: |s, v| s.site.altitude_m = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "station_pressure",
+        path: "site.barometer.pressure_pa",
+        label: "Local air pressure",
+        unit: "kPa",
+        hint: "Absolute pressure read at the still (not the weather-report value).",
+        optional: false,
+        to_si: kilo,
+        from_si: per_kilo,
+        get: |s| {
+            s.site
+                .barometer
+                .as_ref()
+                .filter(|b| b.reference == BarometerReference::Station)
+                .map(|b| b.pressure_pa)
+        },
+        set: |s, v| {
+            let b = barometer_of(s);
+            b.reference = BarometerReference::Station;
+            b.pressure_pa = v.unwrap_or_default();
+        },
+    },
+    NumField {
+        key: "sea_level_pressure",
+        path: "site.barometer.pressure_pa",
+        label: "Weather-report pressure",
+        unit: "hPa",
+        hint: "The sea-level value a forecast gives, e.g. 1013.",
+        optional: false,
+        to_si: hecto,
+        from_si: per_hecto,
+        get: |s| {
+            s.site
+                .barometer
+                .as_ref()
+                .filter(|b| b.reference == BarometerReference::SeaLevel)
+                .map(|b| b.pressure_pa)
+        },
+        set: |s, v| {
+            let b = barometer_of(s);
+            b.reference = BarometerReference::SeaLevel;
+            b.pressure_pa = v.unwrap_or_default();
+        },
+    },
+    NumField {
+        key: "ambient",
+        path: "site.ambient_temperature_c",
+        label: "Air temperature",
+        unit: "°C",
+        hint: "Also the plant's and the fill water's temperature unless given.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| Some(s.site.ambient_temperature_c),
+        set: |s, v| s.site.ambient_temperature_c = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "plant_mass",
+        path: "charge.plant_mass_kg",
+        label: "Plant in the still",
+        unit: "kg",
+        hint: "The charge, weighed as loaded.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| Some(s.charge.plant_mass_kg),
+        set: |s, v| s.charge.plant_mass_kg = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "oil_content",
+        path: "charge.oil_content_percent",
+        label: "Oil content",
+        unit: "% w/w",
+        hint: "Empty: the crop's typical value.",
+        optional: true,
+        to_si: same,
+        from_si: same,
+        get: |s| s.charge.oil_content_percent,
+        set: |s, v| s.charge.oil_content_percent = v,
+    },
+    NumField {
+        key: "oil_density",
+        path: "oil.density_kg_per_m3",
+        label: "Oil density",
+        unit: "g/mL",
+        hint: "Empty: from the crop or the compounds.",
+        optional: true,
+        to_si: per_milli,
+        from_si: milli,
+        get: |s| s.oil.density_kg_per_m3,
+        set: |s, v| s.oil.density_kg_per_m3 = v,
+    },
+    NumField {
+        key: "still_volume",
+        path: "still.volume_m3",
+        label: "Still volume",
+        unit: "L",
+        hint: "Working volume of the body that holds the plant.",
+        optional: true,
+        to_si: milli,
+        from_si: per_milli,
+        get: |s| s.still.volume_m3,
+        set: |s, v| s.still.volume_m3 = v,
+    },
+    NumField {
+        key: "metal_mass",
+        path: "still.metal_mass_kg",
+        label: "Metal of the still",
+        unit: "kg",
+        hint: "Body, lid and column that the steam must warm.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| Some(s.still.metal_mass_kg),
+        set: |s, v| s.still.metal_mass_kg = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "wall_u",
+        path: "still.wall_u_w_per_m2_k",
+        label: "Wall heat loss",
+        unit: "W/(m² K)",
+        hint: "About 10 for bare metal, under 1 when lagged.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| Some(s.still.wall_u_w_per_m2_k),
+        set: |s, v| s.still.wall_u_w_per_m2_k = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "heat_input",
+        path: "boiler.heat_input_w",
+        label: "Burner or element power",
+        unit: "kW",
+        hint: "The rating of the heat source.",
+        optional: false,
+        to_si: kilo,
+        from_si: per_kilo,
+        get: |s| Some(s.boiler.heat_input_w),
+        set: |s, v| s.boiler.heat_input_w = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "efficiency",
+        path: "boiler.efficiency",
+        label: "Heat reaching the water",
+        unit: "%",
+        hint: "Empty: typical for the fuel.",
+        optional: true,
+        to_si: percent,
+        from_si: per_percent,
+        get: |s| s.boiler.efficiency,
+        set: |s, v| s.boiler.efficiency = v,
+    },
+    NumField {
+        key: "steam_rate",
+        path: "boiler.steam_rate_kg_per_h",
+        label: "Measured steam rate",
+        unit: "kg/h",
+        hint: "Optional: overrides power and efficiency.",
+        optional: true,
+        to_si: same,
+        from_si: same,
+        get: |s| s.boiler.steam_rate_kg_per_h,
+        set: |s, v| s.boiler.steam_rate_kg_per_h = v,
+    },
+    NumField {
+        key: "boiler_water",
+        path: "boiler.usable_water_kg",
+        label: "Usable boiler water",
+        unit: "L",
+        hint: "What it can give before the heater is exposed (1 L ≈ 1 kg).",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| Some(s.boiler.usable_water_kg),
+        set: |s, v| s.boiler.usable_water_kg = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "target",
+        path: "run.target_recovery_percent",
+        label: "Target recovery",
+        unit: "%",
+        hint: "Share of the oil the plant can give; the last few % take longest.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| Some(s.run.target_recovery_percent),
+        set: |s, v| s.run.target_recovery_percent = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "rate_constant",
+        path: "run.rate_constant_per_min",
+        label: "Recovery rate",
+        unit: "per min",
+        hint: "Empty: the crop's value. Fit it from your own runs.",
+        optional: true,
+        to_si: same,
+        from_si: same,
+        get: |s| s.run.rate_constant_per_min,
+        set: |s, v| s.run.rate_constant_per_min = v,
+    },
+    NumField {
+        key: "cooling_in",
+        path: "condenser.cooling_water_inlet_c",
+        label: "Cooling water in",
+        unit: "°C",
+        hint: "Tap, well or stream temperature.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| Some(s.condenser.cooling_water_inlet_c),
+        set: |s, v| s.condenser.cooling_water_inlet_c = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "cooling_out",
+        path: "condenser.cooling_water_outlet_c",
+        label: "Cooling water out",
+        unit: "°C",
+        hint: "For a tub: the warmest you let it get.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| Some(s.condenser.cooling_water_outlet_c),
+        set: |s, v| s.condenser.cooling_water_outlet_c = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "distillate_out",
+        path: "condenser.distillate_outlet_c",
+        label: "Distillate temperature",
+        unit: "°C",
+        hint: "Empty: the crop's advice (warm for oils that set).",
+        optional: true,
+        to_si: same,
+        from_si: same,
+        get: |s| s.condenser.distillate_outlet_c,
+        set: |s, v| s.condenser.distillate_outlet_c = v,
+    },
+    NumField {
+        key: "tub_water",
+        path: "condenser.tub_water_kg",
+        label: "Water in the tub",
+        unit: "L",
+        hint: "Coil-in-tub condensers only.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| Some(s.condenser.tub_water_kg),
+        set: |s, v| s.condenser.tub_water_kg = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "condensing_u",
+        path: "condenser.condensing_u_w_per_m2_k",
+        label: "Coil heat transfer",
+        unit: "W/(m² K)",
+        hint: "Condensing section: about 570-1200 in a tub.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| Some(s.condenser.condensing_u_w_per_m2_k),
+        set: |s, v| s.condenser.condensing_u_w_per_m2_k = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "tube_od",
+        path: "condenser.tube_outer_diameter_m",
+        label: "Tube outside diameter",
+        unit: "mm",
+        hint: "12.7 mm is ½ inch.",
+        optional: false,
+        to_si: milli,
+        from_si: per_milli,
+        get: |s| Some(s.condenser.tube_outer_diameter_m),
+        set: |s, v| s.condenser.tube_outer_diameter_m = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "droplet",
+        path: "separator.droplet_diameter_m",
+        label: "Smallest droplet to catch",
+        unit: "µm",
+        hint: "150 µm is the usual gravity-separator basis.",
+        optional: false,
+        to_si: micro,
+        from_si: per_micro,
+        get: |s| Some(s.separator.droplet_diameter_m),
+        set: |s, v| s.separator.droplet_diameter_m = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "residence",
+        path: "separator.residence_time_s",
+        label: "Time in the separator",
+        unit: "min",
+        hint: "How long the distillate stands before it leaves.",
+        optional: false,
+        to_si: minutes,
+        from_si: per_minutes,
+        get: |s| Some(s.separator.residence_time_s),
+        set: |s, v| s.separator.residence_time_s = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "fuel_price",
+        path: "costs.fuel_price_per_unit",
+        label: "Fuel price",
+        unit: "per unit",
+        hint: "Per kg, m³ or kWh, as the fuel is sold. Optional.",
+        optional: true,
+        to_si: same,
+        from_si: same,
+        get: |s| s.costs.fuel_price_per_unit,
+        set: |s, v| s.costs.fuel_price_per_unit = v,
+    },
+    NumField {
+        key: "plant_value",
+        path: "costs.plant_value_per_kg",
+        label: "Value of the plant",
+        unit: "per kg",
+        hint: "Optional.",
+        optional: true,
+        to_si: same,
+        from_si: same,
+        get: |s| s.costs.plant_value_per_kg,
+        set: |s, v| s.costs.plant_value_per_kg = v,
+    },
+    NumField {
+        key: "labour",
+        path: "costs.labour_per_hour",
+        label: "Labour",
+        unit: "per hour",
+        hint: "Optional.",
+        optional: true,
+        to_si: same,
+        from_si: same,
+        get: |s| s.costs.labour_per_hour,
+        set: |s, v| s.costs.labour_per_hour = v,
+    },
+    NumField {
+        key: "harvest",
+        path: "season.harvest_kg",
+        label: "Season's harvest",
+        unit: "kg",
+        hint: "Optional: gives charges, hours, fuel and water for the season.",
+        optional: true,
+        to_si: same,
+        from_si: same,
+        get: |s| s.season.harvest_kg,
+        set: |s, v| s.season.harvest_kg = v,
+    },
+];
+
+/// Looks a field up by key.
+pub fn field(key: &str) -> &'static NumField {
+    FIELDS.iter().find(|f| f.key == key).unwrap_or(&FIELDS[0])
+}
+
+/// Why a field's text could not be used.
+#[derive(Debug, Clone, PartialEq)]
+pub enum TextError {
+    Empty,
+    NotANumber,
+}
+
+/// Reads a number as people type it: spaces ignored, a decimal comma accepted.
+pub fn parse_number(text: &str) -> Result<Option<f64>, TextError> {
+    let t: String = text.chars().filter(|c| !c.is_whitespace()).collect();
+    if t.is_empty() {
+        return Ok(None);
+    }
+    let t = t.replace(',', ".");
+    match t.parse::<f64>() {
+        Ok(v) if v.is_finite() => Ok(Some(v)),
+        _ => Err(TextError::NotANumber),
+    }
+}
+
+/// The text a field shows for a scenario value (in the field's unit, without needless digits).
+pub fn text_for(field: &NumField, scenario: &Scenario) -> String {
+    match (field.get)(scenario) {
+        None => String::new(),
+        Some(si) => {
+            let v = (field.from_si)(si);
+            let s = format!("{:.6}", v);
+            let s = s.trim_end_matches('0').trim_end_matches('.');
+            if s == "-0" { "0".to_string() } else { s.to_string() }
+        }
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use wasm_bindgen_test::wasm_bindgen_test;
+
+    #[wasm_bindgen_test]
+    fn decimal_comma_and_spaces_are_read() {
+        assert_eq!(parse_number(" 1 200,5 "), Ok(Some(1200.5)));
+        assert_eq!(parse_number(""), Ok(None));
+        assert_eq!(parse_number("abc"), Err(TextError::NotANumber));
+        assert_eq!(parse_number("1e400"), Err(TextError::NotANumber));
+    }
+
+    #[wasm_bindgen_test]
+    fn every_field_round_trips_its_unit() {
+        let s = Scenario::default();
+        for f in FIELDS {
+            if let Some(si) = (f.get)(&s) {
+                let shown = (f.from_si)(si);
+                assert!(((f.to_si)(shown) - si).abs() <= 1e-9 * si.abs().max(1.0), "{}", f.key);
+            }
+        }
+    }
+
+    #[wasm_bindgen_test]
+    fn keys_are_unique() {
+        for (i, a) in FIELDS.iter().enumerate() {
+            assert!(FIELDS[i + 1..].iter().all(|b| b.key != a.key), "{}", a.key);
+        }
+    }
+}

@@ -1,0 +1,219 @@
+//! The page's state: one text signal per number field, the choices, the derived scenario and
+//! plan, and the only code that talks to storage.
+//!
+//! Flow: field texts and choices -> `scenario` (memo, units converted at the edge in
+//! [`crate::fields`]) -> `plan` (memo, the core's one entry point) -> view. The scenario is
+//! what is saved; the plan is always recomputed.
+
+use crate::fields::{FIELDS, TextError, parse_number, text_for};
+use gloo_storage::{LocalStorage, Storage};
+use leptos::prelude::*;
+use serde::{Deserialize, Serialize};
+use stillroom_core::heat::{Fuel, Metal};
+use stillroom_core::scenario::{BarometerReference, CondenserKind, OilComposition, Scenario};
+use stillroom_core::{Plan, ScenarioErrors, plan};
+
+/// Storage key of the saved scenario record.
+pub const SCENARIO_KEY: &str = "stillroom.scenario";
+/// Prefix of keys holding saved data that could not be read, kept so nothing is lost.
+pub const BACKUP_PREFIX: &str = "stillroom.unreadable.";
+/// Version of the stored record's envelope (the scenario inside carries its own version).
+pub const RECORD_VERSION: u32 = 1;
+
+/// How the site's pressure is known.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum PressureMode {
+    Altitude,
+    Station,
+    SeaLevel,
+}
+
+/// The oil choice in the picker: the crop's typical oil or a single compound.
+pub const CROP_OIL: &str = "crop";
+
+#[derive(Serialize, Deserialize)]
+struct Record {
+    record_version: u32,
+    scenario: serde_json::Value,
+}
+
+/// The page's state, shared through context.
+#[derive(Clone)]
+pub struct AppState {
+    /// One text per entry of [`FIELDS`], in the same order.
+    pub texts: Vec<RwSignal<String>>,
+    pub crop: RwSignal<Option<String>>,
+    pub oil_choice: RwSignal<String>,
+    pub pressure_mode: RwSignal<PressureMode>,
+    pub fuel: RwSignal<Fuel>,
+    pub metal: RwSignal<Metal>,
+    pub condenser_kind: RwSignal<CondenserKind>,
+    /// A message about saved data (for example that an unreadable copy was kept).
+    pub notice: RwSignal<Option<String>>,
+    pub scenario: Memo<Derived>,
+    pub plan: Memo<Result<Plan, ScenarioErrors>>,
+}
+
+/// The scenario built from the form, with the texts that could not be read.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Derived {
+    pub scenario: Scenario,
+    pub text_errors: Vec<(&'static str, TextError)>,
+}
+
+/// Reads the saved scenario. Anything unreadable is copied to a backup key and reported, and
+/// the invented example is used instead: saved data is never silently dropped.
+pub fn load() -> (Scenario, Option<String>) {
+    let raw = match LocalStorage::raw().get_item(SCENARIO_KEY) {
+        Ok(Some(raw)) => raw,
+        _ => return (Scenario::default(), None),
+    };
+    match migrate(&raw) {
+        Some(s) => (s, None),
+        None => {
+            let key = format!("{BACKUP_PREFIX}{}", js_sys_now());
+            let kept = LocalStorage::raw().set_item(&key, &raw).is_ok();
+            let msg = if kept {
+                format!(
+                    "Your saved plan could not be read, so the example is shown. A copy was kept in this browser under “{key}”."
+                )
+            } else {
+                "Your saved plan could not be read, and there was no room to keep a copy.".to_string()
+            };
+            (Scenario::default(), Some(msg))
+        }
+    }
+}
+
+/// Turns a stored record of any version into today's scenario, or `None` if it is unreadable.
+///
+/// Record version 1 wraps the scenario; a bare scenario (the shape before records had an
+/// envelope) is read too. Fields added later are filled with defaults by the core's serde rules.
+pub fn migrate(raw: &str) -> Option<Scenario> {
+    let value: serde_json::Value = serde_json::from_str(raw).ok()?;
+    let scenario_value = match serde_json::from_value::<Record>(value.clone()) {
+        Ok(r) if r.record_version <= RECORD_VERSION => r.scenario,
+        Ok(_) => return None,
+        Err(_) => value,
+    };
+    serde_json::from_value::<Scenario>(scenario_value).ok()
+}
+
+fn save(scenario: &Scenario) {
+    if let Ok(value) = serde_json::to_value(scenario) {
+        let record = Record { record_version: RECORD_VERSION, scenario: value };
+        if let Ok(text) = serde_json::to_string(&record) {
+            let _ = LocalStorage::raw().set_item(SCENARIO_KEY, &text);
+        }
+    }
+}
+
+fn js_sys_now() -> u64 {
+    web_sys::window().and_then(|w| w.performance()).map(|p| p.time_origin() + p.now()).unwrap_or(0.0) as u64
+}
+
+impl AppState {
+    /// Builds the state from saved data and wires the memos and the storage sync.
+    pub fn new() -> AppState {
+        let (base, notice) = load();
+        let texts: Vec<RwSignal<String>> = FIELDS.iter().map(|f| RwSignal::new(text_for(f, &base))).collect();
+        let pressure_mode = RwSignal::new(match base.site.barometer.as_ref().map(|b| b.reference) {
+            None => PressureMode::Altitude,
+            Some(BarometerReference::Station) => PressureMode::Station,
+            Some(BarometerReference::SeaLevel) => PressureMode::SeaLevel,
+        });
+        let crop = RwSignal::new(base.charge.crop.clone());
+        let oil_choice = RwSignal::new(match &base.oil.composition {
+            OilComposition::Compound { id } => id.clone(),
+            _ => CROP_OIL.to_string(),
+        });
+        let fuel = RwSignal::new(base.boiler.fuel);
+        let metal = RwSignal::new(base.still.metal);
+        let condenser_kind = RwSignal::new(base.condenser.kind);
+
+        let field_texts = texts.clone();
+        let scenario = Memo::new(move |_| {
+            let mut s = base.clone();
+            let mode = pressure_mode.get();
+            let kind = condenser_kind.get();
+            s.site.barometer = None;
+            let mut text_errors = Vec::new();
+            for (f, text) in FIELDS.iter().zip(&field_texts) {
+                let skip = match f.key {
+                    "station_pressure" => mode != PressureMode::Station,
+                    "sea_level_pressure" => mode != PressureMode::SeaLevel,
+                    "tub_water" => kind != CondenserKind::CoilInTub,
+                    _ => false,
+                };
+                if skip {
+                    continue;
+                }
+                match parse_number(&text.get()) {
+                    Ok(Some(v)) => (f.set)(&mut s, Some((f.to_si)(v))),
+                    Ok(None) if f.optional => (f.set)(&mut s, None),
+                    Ok(None) => text_errors.push((f.key, TextError::Empty)),
+                    Err(e) => text_errors.push((f.key, e)),
+                }
+            }
+            s.charge.crop = crop.get();
+            let choice = oil_choice.get();
+            s.oil.composition = if choice == CROP_OIL {
+                OilComposition::CropTypical
+            } else {
+                OilComposition::Compound { id: choice }
+            };
+            s.boiler.fuel = fuel.get();
+            s.still.metal = metal.get();
+            s.condenser.kind = kind;
+            Derived { scenario: s, text_errors }
+        });
+        let plan = Memo::new(move |_| plan(&scenario.get().scenario));
+
+        // Storage sync, in this one place: save what the grower entered whenever it changes.
+        Effect::new(move |_| save(&scenario.get().scenario));
+
+        AppState {
+            texts,
+            crop,
+            oil_choice,
+            pressure_mode,
+            fuel,
+            metal,
+            condenser_kind,
+            notice: RwSignal::new(notice),
+            scenario,
+            plan,
+        }
+    }
+
+    /// The text signal of a field.
+    pub fn text(&self, key: &str) -> RwSignal<String> {
+        let i = FIELDS.iter().position(|f| f.key == key).unwrap_or(0);
+        self.texts[i]
+    }
+}
+
+impl Default for AppState {
+    fn default() -> Self {
+        Self::new()
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use wasm_bindgen_test::wasm_bindgen_test;
+
+    #[wasm_bindgen_test]
+    fn a_bare_scenario_from_before_the_envelope_still_loads() {
+        let bare = r#"{"charge":{"plant_mass_kg":42.0}}"#;
+        assert_eq!(migrate(bare).unwrap().charge.plant_mass_kg, 42.0);
+    }
+
+    #[wasm_bindgen_test]
+    fn corrupt_or_future_records_are_refused_not_guessed() {
+        assert!(migrate("{not json").is_none());
+        assert!(migrate(r#"{"record_version":99,"scenario":{}}"#).is_none());
+        assert!(migrate(r#"{"charge":{"plant_mass_kg":"lots"}}"#).is_none());
+    }
+}
