@@ -1,26 +1,118 @@
-//! The page in a real browser (headless Chromium through wasm-bindgen-test-runner).
+//! The page in a real browser (headless Chromium through wasm-bindgen-test-runner): typing into
+//! the form updates the plan, bad input is named beside its field, and saved data survives.
 #![cfg(target_arch = "wasm32")]
 
+use gloo_storage::{LocalStorage, Storage};
 use wasm_bindgen::JsCast;
 use wasm_bindgen_test::{wasm_bindgen_test, wasm_bindgen_test_configure};
+use web_sys::{Event, HtmlElement, HtmlInputElement};
 
 wasm_bindgen_test_configure!(run_in_browser);
 
-fn fresh_host() -> web_sys::HtmlElement {
+fn fresh_host() -> HtmlElement {
     let document = web_sys::window().unwrap().document().unwrap();
-    let host: web_sys::HtmlElement = document.create_element("div").unwrap().unchecked_into();
+    let host: HtmlElement = document.create_element("div").unwrap().unchecked_into();
     document.body().unwrap().append_child(&host).unwrap();
     host
 }
 
+fn text_of(host: &HtmlElement, selector: &str) -> String {
+    host.query_selector(selector).unwrap().unwrap_or_else(|| panic!("no {selector}")).text_content().unwrap()
+}
+
+async fn type_into(host: &HtmlElement, key: &str, value: &str) {
+    let input: HtmlInputElement = host.query_selector(&format!("#f-{key}")).unwrap().unwrap().unchecked_into();
+    input.set_value(value);
+    input.dispatch_event(&Event::new("input").unwrap()).unwrap();
+    leptos::task::tick().await;
+}
+
+/// Starts each test from an empty store, so tests do not see each other's saves.
+fn clear_store() {
+    LocalStorage::clear();
+}
+
 #[wasm_bindgen_test]
 async fn heading_names_the_tool() {
+    clear_store();
     let host = fresh_host();
-    assert!(host.query_selector("h1").unwrap().is_none());
     let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
     leptos::task::tick().await;
-    let headings = host.query_selector_all("h1").unwrap();
-    assert_eq!(headings.length(), 1, "one top heading");
-    let h1 = headings.item(0).unwrap();
-    assert_eq!(h1.text_content().unwrap(), "Stillroom");
+    assert_eq!(text_of(&host, "h1"), "Stillroom");
+}
+
+#[wasm_bindgen_test]
+async fn altitude_moves_the_boiling_point() {
+    clear_store();
+    let host = fresh_host();
+    let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    type_into(&host, "altitude", "0").await;
+    // IF97 at 101.325 kPa: 99.97 °C.
+    assert_eq!(text_of(&host, "[data-out=water_boiling_point]"), "100.0 °C");
+    assert_eq!(text_of(&host, "[data-out=pressure]"), "101.3 kPa");
+    type_into(&host, "altitude", "2000").await;
+    // USSA 1976 at 2000 m: 79.50 kPa, where water boils at 93.3 °C (IF97).
+    assert_eq!(text_of(&host, "[data-out=pressure]"), "79.5 kPa");
+    assert_eq!(text_of(&host, "[data-out=water_boiling_point]"), "93.3 °C");
+}
+
+#[wasm_bindgen_test]
+async fn bad_input_is_named_beside_its_field() {
+    clear_store();
+    let host = fresh_host();
+    let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    type_into(&host, "plant_mass", "abc").await;
+    assert!(text_of(&host, "#e-plant_mass").contains("number"));
+    type_into(&host, "plant_mass", "").await;
+    assert!(text_of(&host, "#e-plant_mass").contains("Enter a value"));
+    type_into(&host, "plant_mass", "-4").await;
+    assert!(text_of(&host, "#e-plant_mass").contains("more than zero"));
+    type_into(&host, "oil_content", "120").await;
+    assert!(text_of(&host, "#e-oil_content").contains("100"), "{}", text_of(&host, "#e-oil_content"));
+    type_into(&host, "altitude", "7000").await;
+    assert!(text_of(&host, "#e-altitude").contains("6000"));
+    // The plan waits instead of showing stale numbers.
+    assert_eq!(text_of(&host, "[data-out=water_boiling_point]"), "–");
+    // Fixing the fields brings it back.
+    type_into(&host, "plant_mass", "15").await;
+    type_into(&host, "oil_content", "1").await;
+    type_into(&host, "altitude", "300").await;
+    assert_eq!(text_of(&host, "#e-altitude"), "");
+    assert_ne!(text_of(&host, "[data-out=water_boiling_point]"), "–");
+}
+
+#[wasm_bindgen_test]
+async fn inputs_survive_a_remount() {
+    clear_store();
+    let host = fresh_host();
+    let mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    type_into(&host, "plant_mass", "42.5").await;
+    drop(mounted);
+    let again = fresh_host();
+    let _mounted = leptos::mount::mount_to(again.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    let input: HtmlInputElement = again.query_selector("#f-plant_mass").unwrap().unwrap().unchecked_into();
+    assert_eq!(input.value(), "42.5");
+}
+
+#[wasm_bindgen_test]
+async fn unreadable_saved_data_is_kept_aside_not_lost() {
+    clear_store();
+    LocalStorage::raw().set_item("stillroom.scenario", "{broken json").unwrap();
+    let host = fresh_host();
+    let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    assert!(text_of(&host, "[data-out=storage_notice]").contains("could not be read"));
+    let storage = LocalStorage::raw();
+    let kept = (0..storage.length().unwrap())
+        .filter_map(|i| storage.key(i).unwrap())
+        .filter(|k| k.starts_with("stillroom.unreadable."))
+        .map(|k| storage.get_item(&k).unwrap().unwrap())
+        .collect::<Vec<_>>();
+    assert_eq!(kept, vec!["{broken json".to_string()]);
+    // The page still plans with the example.
+    assert_ne!(text_of(&host, "[data-out=water_boiling_point]"), "–");
 }
