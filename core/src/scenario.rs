@@ -474,6 +474,12 @@ pub struct FieldError {
     /// The valid range or set, in words with units.
     pub valid: String,
     pub message: String,
+    /// The valid range's ends in the field's own (SI) unit, when it is a range, so a page can
+    /// restate them in the unit it shows.
+    #[serde(default)]
+    pub min: Option<f64>,
+    #[serde(default)]
+    pub max: Option<f64>,
 }
 
 /// Every invalid field of a scenario, reported together.
@@ -519,7 +525,15 @@ impl Checker {
             format!("must be at most {} {unit}", fmt_num(max))
         };
         self.push(field, fmt_num(value), format!("{} to {} {unit}", fmt_num(min), fmt_num(max)), message);
+        self.set_range(min, max);
         false
+    }
+
+    fn set_range(&mut self, min: f64, max: f64) {
+        if let Some(e) = self.errors.last_mut() {
+            e.min = Some(min);
+            e.max = Some(max);
+        }
     }
 
     /// Checks min < value ≤ max: for quantities that must be strictly positive.
@@ -535,11 +549,12 @@ impl Checker {
             format!("must be at most {} {unit}", fmt_num(max))
         };
         self.push(field, fmt_num(value), format!("more than 0, up to {} {unit}", fmt_num(max)), message);
+        self.set_range(0.0, max);
         false
     }
 
     pub fn push(&mut self, field: &str, value: String, valid: String, message: String) {
-        self.errors.push(FieldError { field: field.to_string(), value, valid, message });
+        self.errors.push(FieldError { field: field.to_string(), value, valid, message, min: None, max: None });
     }
 }
 

@@ -309,6 +309,8 @@ fn compute_error(field: &str, value: f64, valid: &str, message: &str) -> FieldEr
         value: fmt_num(value),
         valid: valid.to_string(),
         message: message.to_string(),
+        min: None,
+        max: None,
     }
 }
 

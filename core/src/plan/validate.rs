@@ -348,6 +348,8 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
                 value: String::new(),
                 valid: String::new(),
                 message: "the scenario is incomplete".into(),
+                min: None,
+                max: None,
             }],
         });
     };
