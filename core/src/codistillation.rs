@@ -122,6 +122,8 @@ pub struct Depletion {
     pub cuts: Vec<Cut>,
     /// Least cumulative steam per kg of initial oil to carry over `target_fraction` of it.
     pub steam_to_target_kg_per_kg_oil: f64,
+    /// Least cumulative steam per kg of initial oil to carry over all of it (99.9 %).
+    pub steam_to_all_kg_per_kg_oil: f64,
     pub target_fraction: f64,
     /// Whether any component's correlation left its range during the run.
     pub any_out_of_range: bool,
@@ -134,7 +136,8 @@ pub struct Depletion {
 /// [`boiling_temperature_k`] at each state (Rayleigh-type batch depletion, as for a differential
 /// distillation; McCabe, Smith & Harriott, *Unit Operations*, §21). Integrated with the
 /// midpoint method in steps of 1 % of the initial oil mass, the oil mass removed being the
-/// independent variable (so each step removes exactly 1 %). `target_fraction` is capped at 0.999.
+/// independent variable (so each step removes exactly 1 %), on to 99.9 % of the oil; the cuts
+/// cover the way to `target_fraction` (capped at 0.999).
 ///
 /// ```
 /// use stillroom_core::{codistillation::{deplete, equilibrium}, compounds::find, oil::{Component, Oil}};
@@ -181,8 +184,11 @@ pub fn deplete(
     let mut cut_mass = vec![0.0; n];
     let mut last_t = 0.0;
 
-    while removed < target - 1e-12 {
-        let h = step.min(target - removed);
+    let mut steam_to_target = 0.0;
+    let all = 0.999;
+    while removed < all - 1e-12 {
+        let before_target = removed < target - 1e-12;
+        let h = if before_target { step.min(target - removed) } else { step.min(all - removed) };
         let (dn0, _, ok0) = rates(&state)?;
         let mut mid = state.clone();
         for (m, d) in mid.moles.iter_mut().zip(&dn0) {
@@ -197,6 +203,13 @@ pub fn deplete(
         }
         removed += h;
         steam_total += h * steam_rate;
+        if !before_target {
+            if state.moles.iter().sum::<f64>() <= 0.0 {
+                break;
+            }
+            continue;
+        }
+        steam_to_target = steam_total;
         cut_steam += h * steam_rate;
         let cut_end = cut_start + cut_width;
         if removed >= cut_end - 1e-9 || removed >= target - 1e-12 {
@@ -219,7 +232,8 @@ pub fn deplete(
     }
     Ok(Depletion {
         cuts,
-        steam_to_target_kg_per_kg_oil: steam_total,
+        steam_to_target_kg_per_kg_oil: steam_to_target,
+        steam_to_all_kg_per_kg_oil: steam_total,
         target_fraction: target,
         any_out_of_range,
     })

@@ -554,7 +554,14 @@ impl Checker {
     }
 
     pub fn push(&mut self, field: &str, value: String, valid: String, message: String) {
-        self.errors.push(FieldError { field: field.to_string(), value, valid, message, min: None, max: None });
+        self.errors.push(FieldError {
+            field: field.to_string(),
+            value,
+            valid,
+            message,
+            min: None,
+            max: None,
+        });
     }
 }
 

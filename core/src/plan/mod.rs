@@ -339,9 +339,6 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, FieldError> {
     let depletion = codistillation::deplete(&r.oil, p, target, 10).map_err(|_| {
         compute_error("oil.composition", 0.0, "a known oil", "the oil could not be followed through the run")
     })?;
-    let full = codistillation::deplete(&r.oil, p, 0.999, 1).map_err(|_| {
-        compute_error("oil.composition", 0.0, "a known oil", "the oil could not be followed through the run")
-    })?;
     let oil_in_charge_kg = s.charge.plant_mass_kg * r.oil_content_fraction;
     let min_steam_to_target_kg = oil_in_charge_kg * depletion.steam_to_target_kg_per_kg_oil;
 
@@ -401,7 +398,7 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, FieldError> {
         lowering_k: t_boil_c - t_cd_c,
         water_partial_pressure_pa: eq.water_partial_pressure_pa,
         min_steam_per_kg_oil: eq.steam_per_oil_kg_per_kg,
-        min_steam_whole_charge_kg: oil_in_charge_kg * full.steam_to_target_kg_per_kg_oil,
+        min_steam_whole_charge_kg: oil_in_charge_kg * depletion.steam_to_all_kg_per_kg_oil,
         min_steam_to_target_kg,
         cuts: depletion.cuts,
     };
