@@ -2,7 +2,9 @@
 //! converts to the core's SI field, and back. This is the page's edge: the only place where
 //! units change.
 
-use stillroom_core::scenario::{Barometer, BarometerReference, Scenario};
+use stillroom_core::scenario::{
+    Barometer, BarometerReference, CustomCompound, CustomVapourPressure, Scenario,
+};
 
 /// How a field's text maps onto the scenario.
 pub struct NumField {
@@ -66,6 +68,51 @@ fn per_percent(v: f64) -> f64 {
 
 fn barometer_of(s: &mut Scenario) -> &mut Barometer {
     s.site.barometer.get_or_insert_with(Barometer::default)
+}
+
+/// Id of the grower's own compound in the scenario (the page offers one).
+pub const OWN_COMPOUND_ID: &str = "own";
+
+fn own_of(s: &mut Scenario) -> &mut CustomCompound {
+    if s.custom_compounds.is_empty() {
+        s.custom_compounds.push(CustomCompound {
+            id: OWN_COMPOUND_ID.to_string(),
+            name: String::new(),
+            molar_mass_kg_per_mol: 0.15,
+            liquid_density_kg_per_m3: 900.0,
+            water_solubility_kg_per_m3: 0.0,
+            vapour_pressure: CustomVapourPressure::TwoPoints {
+                t1_c: 25.0,
+                p1_pa: 30.0,
+                t2_c: 200.0,
+                p2_pa: 101_325.0,
+            },
+        });
+    }
+    &mut s.custom_compounds[0]
+}
+
+/// The two measured points of the own compound, as (t1 °C, p1 Pa, t2 °C, p2 Pa).
+fn own_points(s: &Scenario) -> Option<(f64, f64, f64, f64)> {
+    match s.custom_compounds.first()?.vapour_pressure {
+        CustomVapourPressure::TwoPoints { t1_c, p1_pa, t2_c, p2_pa } => Some((t1_c, p1_pa, t2_c, p2_pa)),
+        _ => None,
+    }
+}
+
+fn set_own_point(s: &mut Scenario, which: usize, v: f64) {
+    let c = own_of(s);
+    let (mut t1, mut p1, mut t2, mut p2) = match c.vapour_pressure {
+        CustomVapourPressure::TwoPoints { t1_c, p1_pa, t2_c, p2_pa } => (t1_c, p1_pa, t2_c, p2_pa),
+        _ => (25.0, 30.0, 200.0, 101_325.0),
+    };
+    match which {
+        0 => t1 = v,
+        1 => p1 = v,
+        2 => t2 = v,
+        _ => p2 = v,
+    }
+    c.vapour_pressure = CustomVapourPressure::TwoPoints { t1_c: t1, p1_pa: p1, t2_c: t2, p2_pa: p2 };
 }
 
 /// Every number field, in page order.
@@ -426,7 +473,95 @@ pub const FIELDS: &[NumField] = &[
         get: |s| s.season.harvest_kg,
         set: |s, v| s.season.harvest_kg = v,
     },
+    NumField {
+        key: "own_molar_mass",
+        path: "custom_compounds.0.molar_mass_kg_per_mol",
+        label: "Molar mass",
+        unit: "g/mol",
+        hint: "From the supplier's sheet or a handbook.",
+        optional: false,
+        to_si: milli,
+        from_si: per_milli,
+        get: |s| s.custom_compounds.first().map(|c| c.molar_mass_kg_per_mol),
+        set: |s, v| own_of(s).molar_mass_kg_per_mol = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "own_density",
+        path: "custom_compounds.0.liquid_density_kg_per_m3",
+        label: "Density",
+        unit: "g/mL",
+        hint: "Of the liquid near 20 °C.",
+        optional: false,
+        to_si: per_milli,
+        from_si: milli,
+        get: |s| s.custom_compounds.first().map(|c| c.liquid_density_kg_per_m3),
+        set: |s, v| own_of(s).liquid_density_kg_per_m3 = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "own_solubility",
+        path: "custom_compounds.0.water_solubility_kg_per_m3",
+        label: "Solubility in water",
+        unit: "g/L",
+        hint: "Near 25 °C; 0 if unknown.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| s.custom_compounds.first().map(|c| c.water_solubility_kg_per_m3),
+        set: |s, v| own_of(s).water_solubility_kg_per_m3 = v.unwrap_or_default(),
+    },
+    NumField {
+        key: "own_t1",
+        path: "custom_compounds.0.vapour_pressure",
+        label: "First point: temperature",
+        unit: "°C",
+        hint: "A measured vapour pressure, e.g. at 25 °C.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| own_points(s).map(|p| p.0),
+        set: |s, v| set_own_point(s, 0, v.unwrap_or_default()),
+    },
+    NumField {
+        key: "own_p1",
+        path: "custom_compounds.0.vapour_pressure.p1",
+        label: "First point: vapour pressure",
+        unit: "kPa",
+        hint: "",
+        optional: false,
+        to_si: kilo,
+        from_si: per_kilo,
+        get: |s| own_points(s).map(|p| p.1),
+        set: |s, v| set_own_point(s, 1, v.unwrap_or_default()),
+    },
+    NumField {
+        key: "own_t2",
+        path: "custom_compounds.0.vapour_pressure.t2",
+        label: "Second point: temperature",
+        unit: "°C",
+        hint: "The normal boiling point is a good second point.",
+        optional: false,
+        to_si: same,
+        from_si: same,
+        get: |s| own_points(s).map(|p| p.2),
+        set: |s, v| set_own_point(s, 2, v.unwrap_or_default()),
+    },
+    NumField {
+        key: "own_p2",
+        path: "custom_compounds.0.vapour_pressure.p2",
+        label: "Second point: vapour pressure",
+        unit: "kPa",
+        hint: "101.325 kPa at the normal boiling point.",
+        optional: false,
+        to_si: kilo,
+        from_si: per_kilo,
+        get: |s| own_points(s).map(|p| p.3),
+        set: |s, v| set_own_point(s, 3, v.unwrap_or_default()),
+    },
 ];
+
+/// Keys of the own-compound fields: used only when the compound has a name.
+pub const OWN_COMPOUND_KEYS: &[&str] =
+    &["own_molar_mass", "own_density", "own_solubility", "own_t1", "own_p1", "own_t2", "own_p2"];
 
 /// Looks a field up by key.
 pub fn field(key: &str) -> &'static NumField {

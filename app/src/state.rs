@@ -5,12 +5,12 @@
 //! [`crate::fields`]) -> `plan` (memo, the core's one entry point) -> view. The scenario is
 //! what is saved; the plan is always recomputed.
 
-use crate::fields::{FIELDS, TextError, parse_number, text_for};
+use crate::fields::{FIELDS, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, text_for};
 use gloo_storage::{LocalStorage, Storage};
 use leptos::prelude::*;
 use serde::{Deserialize, Serialize};
 use stillroom_core::heat::{Fuel, Metal};
-use stillroom_core::scenario::{BarometerReference, CondenserKind, OilComposition, Scenario};
+use stillroom_core::scenario::{BarometerReference, CondenserKind, OilComposition, OilPart, Scenario};
 use stillroom_core::{Plan, ScenarioErrors, plan};
 
 /// Storage key of the saved scenario record.
@@ -28,8 +28,19 @@ pub enum PressureMode {
     SeaLevel,
 }
 
-/// The oil choice in the picker: the crop's typical oil or a single compound.
+/// The oil choice in the picker: the crop's typical oil, the grower's own analysis, or (any other
+/// value) a single compound's id.
 pub const CROP_OIL: &str = "crop";
+pub const MIXTURE_OIL: &str = "mixture";
+
+/// One line of the grower's own oil analysis.
+#[derive(Clone, Copy, Debug, PartialEq)]
+pub struct MixRow {
+    /// Stable key for the list, never reused.
+    pub key: u32,
+    pub compound: RwSignal<String>,
+    pub percent: RwSignal<String>,
+}
 
 #[derive(Serialize, Deserialize)]
 struct Record {
@@ -48,6 +59,11 @@ pub struct AppState {
     pub fuel: RwSignal<Fuel>,
     pub metal: RwSignal<Metal>,
     pub condenser_kind: RwSignal<CondenserKind>,
+    /// The lines of the grower's own oil analysis.
+    pub mixture: RwSignal<Vec<MixRow>>,
+    next_row_key: RwSignal<u32>,
+    /// Name of the grower's own compound; empty means none.
+    pub own_name: RwSignal<String>,
     /// A message about saved data (for example that an unreadable copy was kept).
     pub notice: RwSignal<Option<String>>,
     pub scenario: Memo<Derived>,
@@ -58,7 +74,8 @@ pub struct AppState {
 #[derive(Debug, Clone, PartialEq)]
 pub struct Derived {
     pub scenario: Scenario,
-    pub text_errors: Vec<(&'static str, TextError)>,
+    /// (field key, or `mix-<row>` for a line of the oil analysis; the error).
+    pub text_errors: Vec<(String, TextError)>,
 }
 
 /// Reads the saved scenario. Anything unreadable is copied to a backup key and reported, and
@@ -125,8 +142,25 @@ impl AppState {
         let crop = RwSignal::new(base.charge.crop.clone());
         let oil_choice = RwSignal::new(match &base.oil.composition {
             OilComposition::Compound { id } => id.clone(),
-            _ => CROP_OIL.to_string(),
+            OilComposition::Mixture { .. } => MIXTURE_OIL.to_string(),
+            OilComposition::CropTypical => CROP_OIL.to_string(),
         });
+        let rows: Vec<MixRow> = match &base.oil.composition {
+            OilComposition::Mixture { parts } => parts
+                .iter()
+                .enumerate()
+                .map(|(i, p)| MixRow {
+                    key: i as u32,
+                    compound: RwSignal::new(p.compound.clone()),
+                    percent: RwSignal::new(crate::units::plain(p.mass_percent)),
+                })
+                .collect(),
+            _ => Vec::new(),
+        };
+        let next_row_key = RwSignal::new(rows.len() as u32);
+        let mixture = RwSignal::new(rows);
+        let own_name =
+            RwSignal::new(base.custom_compounds.first().map(|c| c.name.clone()).unwrap_or_default());
         let fuel = RwSignal::new(base.boiler.fuel);
         let metal = RwSignal::new(base.still.metal);
         let condenser_kind = RwSignal::new(base.condenser.kind);
@@ -138,11 +172,13 @@ impl AppState {
             let kind = condenser_kind.get();
             s.site.barometer = None;
             let mut text_errors = Vec::new();
+            let name = own_name.get().trim().to_string();
             for (f, text) in FIELDS.iter().zip(&field_texts) {
                 let skip = match f.key {
                     "station_pressure" => mode != PressureMode::Station,
                     "sea_level_pressure" => mode != PressureMode::SeaLevel,
                     "tub_water" => kind != CondenserKind::CoilInTub,
+                    k if OWN_COMPOUND_KEYS.contains(&k) => name.is_empty(),
                     _ => false,
                 };
                 if skip {
@@ -151,16 +187,34 @@ impl AppState {
                 match parse_number(&text.get()) {
                     Ok(Some(v)) => (f.set)(&mut s, Some((f.to_si)(v))),
                     Ok(None) if f.optional => (f.set)(&mut s, None),
-                    Ok(None) => text_errors.push((f.key, TextError::Empty)),
-                    Err(e) => text_errors.push((f.key, e)),
+                    Ok(None) => text_errors.push((f.key.to_string(), TextError::Empty)),
+                    Err(e) => text_errors.push((f.key.to_string(), e)),
                 }
+            }
+            if name.is_empty() {
+                s.custom_compounds.clear();
+            } else if let Some(c) = s.custom_compounds.first_mut() {
+                c.id = OWN_COMPOUND_ID.to_string();
+                c.name = name;
             }
             s.charge.crop = crop.get();
             let choice = oil_choice.get();
-            s.oil.composition = if choice == CROP_OIL {
-                OilComposition::CropTypical
-            } else {
-                OilComposition::Compound { id: choice }
+            s.oil.composition = match choice.as_str() {
+                CROP_OIL => OilComposition::CropTypical,
+                MIXTURE_OIL => {
+                    let mut parts = Vec::new();
+                    for (i, row) in mixture.get().iter().enumerate() {
+                        match parse_number(&row.percent.get()) {
+                            Ok(Some(v)) => {
+                                parts.push(OilPart { compound: row.compound.get(), mass_percent: v })
+                            }
+                            Ok(None) => text_errors.push((format!("mix-{i}"), TextError::Empty)),
+                            Err(e) => text_errors.push((format!("mix-{i}"), e)),
+                        }
+                    }
+                    OilComposition::Mixture { parts }
+                }
+                _ => OilComposition::Compound { id: choice },
             };
             s.boiler.fuel = fuel.get();
             s.still.metal = metal.get();
@@ -180,10 +234,30 @@ impl AppState {
             fuel,
             metal,
             condenser_kind,
+            mixture,
+            next_row_key,
+            own_name,
             notice: RwSignal::new(notice),
             scenario,
             plan,
         }
+    }
+
+    /// Adds a line to the oil analysis.
+    pub fn add_mix_row(&self, compound: &str) {
+        let key = self.next_row_key.get_untracked();
+        self.next_row_key.set(key + 1);
+        let row = MixRow {
+            key,
+            compound: RwSignal::new(compound.to_string()),
+            percent: RwSignal::new(String::new()),
+        };
+        self.mixture.update(|rows| rows.push(row));
+    }
+
+    /// Removes a line from the oil analysis.
+    pub fn remove_mix_row(&self, key: u32) {
+        self.mixture.update(|rows| rows.retain(|r| r.key != key));
     }
 
     /// The text signal of a field.

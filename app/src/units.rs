@@ -15,6 +15,12 @@ pub fn fixed(v: f64, decimals: usize) -> String {
     s.replace('-', "−")
 }
 
+/// A number as a person would type it back: no trailing zeros.
+pub fn plain(v: f64) -> String {
+    let s = format!("{:.6}", v);
+    s.trim_end_matches('0').trim_end_matches('.').to_string()
+}
+
 /// A number to about three significant figures.
 pub fn sig3(v: f64) -> String {
     let a = v.abs();

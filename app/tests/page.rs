@@ -21,7 +21,8 @@ fn text_of(host: &HtmlElement, selector: &str) -> String {
 }
 
 async fn type_into(host: &HtmlElement, key: &str, value: &str) {
-    let input: HtmlInputElement = host.query_selector(&format!("#f-{key}")).unwrap().unwrap().unchecked_into();
+    let input: HtmlInputElement =
+        host.query_selector(&format!("#f-{key}")).unwrap().unwrap().unchecked_into();
     input.set_value(value);
     input.dispatch_event(&Event::new("input").unwrap()).unwrap();
     leptos::task::tick().await;
@@ -115,4 +116,60 @@ async fn unreadable_saved_data_is_kept_aside_not_lost() {
     assert_eq!(kept, vec!["{broken json".to_string()]);
     // The page still plans with the example.
     assert_ne!(text_of(&host, "[data-out=water_boiling_point]"), "–");
+}
+
+async fn choose(host: &HtmlElement, selector: &str, value: &str) {
+    let select: web_sys::HtmlSelectElement = host.query_selector(selector).unwrap().unwrap().unchecked_into();
+    select.set_value(value);
+    select.dispatch_event(&Event::new("change").unwrap()).unwrap();
+    leptos::task::tick().await;
+}
+
+#[wasm_bindgen_test]
+async fn a_lab_report_mixture_drives_the_plan() {
+    clear_store();
+    let host = fresh_host();
+    let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    type_into(&host, "altitude", "0").await;
+    choose(&host, "#f-oil", "mixture").await;
+    let add: HtmlElement = host.query_selector("#mix-add").unwrap().unwrap().unchecked_into();
+    add.click();
+    leptos::task::tick().await;
+    // The new line starts empty: the plan waits for its share.
+    assert_eq!(text_of(&host, "[data-out=codistillation_temperature]"), "–");
+    choose(&host, "select[id^=mix-compound-]", "alpha-pinene").await;
+    let share: HtmlInputElement =
+        host.query_selector("input[id^=mix-percent-]").unwrap().unwrap().unchecked_into();
+    share.set_value("100");
+    share.dispatch_event(&Event::new("input").unwrap()).unwrap();
+    leptos::task::tick().await;
+    // Pure α-pinene with water at 1 atm boils at 95.2 °C (thermo 0.6.1 + CoolProp 8.0.0: 95.19).
+    assert_eq!(text_of(&host, "[data-out=codistillation_temperature]"), "95.2 °C");
+}
+
+#[wasm_bindgen_test]
+async fn a_compound_of_ones_own_from_two_points() {
+    clear_store();
+    let host = fresh_host();
+    let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    type_into(&host, "altitude", "0").await;
+    type_into(&host, "own_name", "test oil").await;
+    // α-pinene's own numbers, as a grower would copy them from a sheet: 136.2 g/mol, 0.86 g/mL,
+    // 19.16 kPa at 100 °C (chemicals 1.5.2, WebBook set) and its boiling point 156.3 °C.
+    type_into(&host, "own_molar_mass", "136.23").await;
+    type_into(&host, "own_density", "0.86").await;
+    type_into(&host, "own_solubility", "0").await;
+    type_into(&host, "own_t1", "100").await;
+    type_into(&host, "own_p1", "19.16").await;
+    type_into(&host, "own_t2", "156.3").await;
+    type_into(&host, "own_p2", "101.325").await;
+    choose(&host, "#f-oil", "own").await;
+    // A straight line in ln p against 1/T through those points: boils with water near 95.2 °C.
+    let t = text_of(&host, "[data-out=codistillation_temperature]");
+    assert!(t == "95.2 °C" || t == "95.1 °C" || t == "95.3 °C", "{t}");
+    // A bad point is named beside its field.
+    type_into(&host, "own_p1", "-3").await;
+    assert!(!text_of(&host, "#e-own_t1").is_empty(), "two-point law error shown");
 }

@@ -1,8 +1,8 @@
 //! The form: small components, one concern each. They read and write the state's signals and
 //! never compute physics.
 
-use crate::fields::{NumField, TextError, field};
-use crate::state::{AppState, CROP_OIL, PressureMode};
+use crate::fields::{NumField, OWN_COMPOUND_ID, TextError, field};
+use crate::state::{AppState, CROP_OIL, MIXTURE_OIL, MixRow, PressureMode};
 use crate::units;
 use leptos::prelude::*;
 use stillroom_core::compounds::COMPOUNDS;
@@ -13,7 +13,7 @@ use stillroom_core::scenario::CondenserKind;
 /// The message shown beside a field: its own text first, then the core's verdict on its value.
 fn field_message(f: &NumField, state: &AppState) -> Option<String> {
     let derived = state.scenario.get();
-    if let Some((_, e)) = derived.text_errors.iter().find(|(k, _)| *k == f.key) {
+    if let Some((_, e)) = derived.text_errors.iter().find(|(k, _)| k == f.key) {
         return Some(match e {
             TextError::Empty => "Enter a value.".to_string(),
             TextError::NotANumber => "Enter a number, such as 12.5.".to_string(),
@@ -113,7 +113,18 @@ pub fn CropPicker() -> impl IntoView {
     }
 }
 
-/// Picks the oil: the crop's typical composition or one compound.
+/// The compounds a picker offers: the library's, then the grower's own if named.
+fn compound_options(state: &AppState) -> Vec<(String, String)> {
+    let mut list: Vec<(String, String)> =
+        COMPOUNDS.iter().map(|c| (c.id.to_string(), c.name.to_string())).collect();
+    let own = state.own_name.get();
+    if !own.trim().is_empty() {
+        list.push((OWN_COMPOUND_ID.to_string(), format!("{} (yours)", own.trim())));
+    }
+    list
+}
+
+/// Picks the oil: the crop's typical composition, the grower's own analysis, or one compound.
 #[component]
 pub fn OilPicker() -> impl IntoView {
     let state = expect_context::<AppState>();
@@ -127,19 +138,113 @@ pub fn OilPicker() -> impl IntoView {
             .find(|e| e.field == "oil.composition")
             .map(|e| first_upper(&e.message) + ".")
     });
+    let opt_state = state.clone();
     view! {
         <div class="field" class:invalid=move || message.get().is_some()>
             <label for="f-oil"><span class="label">"Oil"</span></label>
             <select id="f-oil" on:change=move |ev| choice.set(event_target_value(&ev))>
                 <option value=CROP_OIL selected=move || choice.get() == CROP_OIL>"The crop's typical oil"</option>
-                {COMPOUNDS.iter().map(|c| {
-                    let id = c.id;
-                    view! { <option value=id selected=move || choice.get() == id>{c.name}</option> }
+                <option value=MIXTURE_OIL selected=move || choice.get() == MIXTURE_OIL>"My own analysis (by mass)"</option>
+                {move || compound_options(&opt_state).into_iter().map(|(id, name)| {
+                    let selected_id = id.clone();
+                    view! { <option value=id selected=move || choice.get() == selected_id>{name}</option> }
                 }).collect_view()}
             </select>
             <p class="error" id="e-oil" aria-live="polite">{move || message.get()}</p>
-            <p class="hint">"One compound, or the mix of main compounds typical of the crop."</p>
+            <p class="hint">"The crop's typical mix of main compounds, your lab report, or one compound."</p>
         </div>
+        <Show when=move || choice.get() == MIXTURE_OIL>
+            <MixtureEditor />
+        </Show>
+    }
+}
+
+/// The message beside one line of the oil analysis.
+fn row_message(index: usize, state: &AppState) -> Option<String> {
+    let key = format!("mix-{index}");
+    if let Some((_, e)) = state.scenario.get().text_errors.iter().find(|(k, _)| *k == key) {
+        return Some(match e {
+            TextError::Empty => "Enter the share.".to_string(),
+            TextError::NotANumber => "Enter a number, such as 35.".to_string(),
+        });
+    }
+    let plan = state.plan.get();
+    let prefix = format!("oil.composition.parts.{index}.");
+    plan.err()?.errors.iter().find(|e| e.field.starts_with(&prefix)).map(|e| first_upper(&e.message) + ".")
+}
+
+/// One line of the analysis: a compound and its share by mass.
+#[component]
+fn MixLine(row: MixRow) -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let index_state = state.clone();
+    let index = move || index_state.mixture.get().iter().position(|r| r.key == row.key).unwrap_or(0);
+    let msg_state = state.clone();
+    let message = Memo::new(move |_| row_message(index(), &msg_state));
+    let opt_state = state.clone();
+    let remove_state = state.clone();
+    let id = format!("mix-compound-{}", row.key);
+    let pid = format!("mix-percent-{}", row.key);
+    view! {
+        <li class="mix-line" class:invalid=move || message.get().is_some()>
+            <select id=id aria-label="Compound" on:change=move |ev| row.compound.set(event_target_value(&ev))>
+                {move || compound_options(&opt_state).into_iter().map(|(cid, name)| {
+                    let sel = cid.clone();
+                    view! { <option value=cid selected=move || row.compound.get() == sel>{name}</option> }
+                }).collect_view()}
+            </select>
+            <input id=pid type="text" inputmode="decimal" aria-label="Share by mass, %" placeholder="%"
+                prop:value=move || row.percent.get()
+                on:input=move |ev| row.percent.set(event_target_value(&ev)) />
+            <button type="button" class="quiet" aria-label="Remove this compound"
+                on:click=move |_| remove_state.remove_mix_row(row.key)>"✕"</button>
+            <p class="error" aria-live="polite">{move || message.get()}</p>
+        </li>
+    }
+}
+
+/// The grower's own oil analysis: compounds and their shares by mass.
+#[component]
+pub fn MixtureEditor() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let rows = state.mixture;
+    let add_state = state.clone();
+    view! {
+        <div class="mixture">
+            <p class="hint">"Shares by mass from your analysis. They are scaled to 100 %; list the main compounds."</p>
+            <ul class="mix-lines">
+                <For each=move || rows.get() key=|r| r.key children=move |row| view! { <MixLine row=row /> } />
+            </ul>
+            <button type="button" id="mix-add" on:click=move |_| add_state.add_mix_row(COMPOUNDS[0].id)>"Add a compound"</button>
+        </div>
+    }
+}
+
+/// A compound of the grower's own, from two measured vapour pressures.
+#[component]
+pub fn OwnCompound() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let name = state.own_name;
+    view! {
+        <details class="own-compound">
+            <summary>"Add your own compound"</summary>
+            <div class="field">
+                <label for="f-own_name"><span class="label">"Name"</span></label>
+                <input id="f-own_name" type="text" autocomplete="off" placeholder="e.g. sclareol"
+                    prop:value=move || name.get()
+                    on:input=move |ev| name.set(event_target_value(&ev)) />
+                <p class="hint">"Named, it joins the oil lists. Two measured points give its vapour pressure (ln p against 1/T)."</p>
+            </div>
+            <Show when=move || !name.get().trim().is_empty()>
+                <NumberInput key="own_molar_mass" />
+                <NumberInput key="own_density" />
+                <NumberInput key="own_solubility" />
+                <NumberInput key="own_t1" />
+                <NumberInput key="own_p1" />
+                <NumberInput key="own_t2" />
+                <NumberInput key="own_p2" />
+            </Show>
+        </details>
     }
 }
 
@@ -263,6 +368,7 @@ pub fn EssentialInputs() -> impl IntoView {
             <NumberInput key="plant_mass" />
             <NumberInput key="oil_content" />
             <OilPicker />
+            <OwnCompound />
             <PressureInputs />
         </section>
     }
