@@ -109,7 +109,36 @@ pub fn CropPicker() -> impl IntoView {
                 }).collect_view()}
             </select>
             <p class="hint">{move || crop.get().and_then(|id| CROPS.iter().find(|c| c.id == id)).map(|c| c.material)}</p>
+            <CropSources />
         </div>
+    }
+}
+
+/// Where the crop preset's numbers come from, row by row.
+#[component]
+fn CropSources() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let crop = state.crop;
+    let preset = move || crop.get().and_then(|id| CROPS.iter().find(|c| c.id == id));
+    view! {
+        <Show when=move || preset().is_some()>
+            <details class="sources">
+                <summary>"Where the crop's numbers come from"</summary>
+                {move || preset().map(|c| view! {
+                    <dl class="source-list">
+                        <dt>"Oil content"</dt><dd>{c.oil_content_source}</dd>
+                        <dt>"Composition"</dt><dd>{c.composition_source}</dd>
+                        <dt>"Oil density"</dt><dd>{c.oil_density_source}</dd>
+                        <dt>"Recovery rate"</dt><dd>{c.rate_constant_source}</dd>
+                        <dt>"Run time"</dt><dd>{c.typical_run_source}</dd>
+                        <dt>"Steam rate"</dt><dd>{c.steam_rate_source}</dd>
+                        <dt>"Packing"</dt><dd>{c.charge_density_source}</dd>
+                        <dt>"Moisture and heat capacity"</dt><dd>{c.thermal_source}</dd>
+                        <dt>"Distillate temperature"</dt><dd>{c.distillate_temperature_source}</dd>
+                    </dl>
+                })}
+            </details>
+        </Show>
     }
 }
 
