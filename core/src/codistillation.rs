@@ -59,7 +59,8 @@ pub fn boiling_temperature_k(oil: &Oil, pressure_pa: f64) -> Result<f64, Equilib
     if !(1_000.0..=1.0e6).contains(&pressure_pa) {
         return Err(EquilibriumError::PressureOutOfRange { pressure_pa });
     }
-    if oil.components.is_empty() || !(oil.moles.iter().sum::<f64>() > 0.0) {
+    let total_moles: f64 = oil.moles.iter().sum();
+    if oil.components.is_empty() || total_moles.is_nan() || total_moles <= 0.0 {
         return Err(EquilibriumError::InvalidOil);
     }
     let t_water = water::saturation_temperature_k(pressure_pa)

@@ -136,6 +136,7 @@ schema! {
     }
 
     /// Money, all in one currency of the user's choice.
+    #[derive(Default)]
     pub struct Costs {
         pub currency: String,
         /// Price per sales unit of the fuel (kg, m³ or kWh).
@@ -145,6 +146,7 @@ schema! {
     }
 
     /// The season's harvest.
+    #[derive(Default)]
     pub struct Season {
         pub harvest_kg: Option<f64>,
     }
@@ -171,9 +173,11 @@ pub enum BarometerReference {
 /// The oil's composition.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
+#[derive(Default)]
 #[serde(tag = "kind", rename_all = "snake_case")]
 pub enum OilComposition {
     /// The crop preset's typical composition.
+    #[default]
     CropTypical,
     /// A single compound.
     Compound { id: String },
@@ -376,12 +380,6 @@ impl Default for OilSpec {
     }
 }
 
-impl Default for OilComposition {
-    fn default() -> Self {
-        OilComposition::CropTypical
-    }
-}
-
 impl Default for OilPart {
     fn default() -> Self {
         OilPart { compound: String::new(), mass_percent: 0.0 }
@@ -437,23 +435,6 @@ impl Default for Condenser {
 impl Default for Separator {
     fn default() -> Self {
         Separator { droplet_diameter_m: 150e-6, residence_time_s: 600.0, turbulence_factor: 1.2 }
-    }
-}
-
-impl Default for Costs {
-    fn default() -> Self {
-        Costs {
-            currency: String::new(),
-            fuel_price_per_unit: None,
-            plant_value_per_kg: None,
-            labour_per_hour: None,
-        }
-    }
-}
-
-impl Default for Season {
-    fn default() -> Self {
-        Season { harvest_kg: None }
     }
 }
 

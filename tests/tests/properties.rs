@@ -95,11 +95,11 @@ proptest! {
     fn higher_site_boils_lower(s in scenario(), rise in 10.0f64..2000.0) {
         let mut up = s.clone();
         up.site.altitude_m = (s.site.altitude_m + rise).min(6000.0);
-        if let (Some(a), Some(b)) = (ok(&s), ok(&up)) {
-            if up.site.altitude_m > s.site.altitude_m {
-                prop_assert!(b.site.water_boiling_point_c < a.site.water_boiling_point_c);
-                prop_assert!(b.codistillation.temperature_c < a.codistillation.temperature_c);
-            }
+        if let (Some(a), Some(b)) = (ok(&s), ok(&up))
+            && up.site.altitude_m > s.site.altitude_m
+        {
+            prop_assert!(b.site.water_boiling_point_c < a.site.water_boiling_point_c);
+            prop_assert!(b.codistillation.temperature_c < a.codistillation.temperature_c);
         }
     }
 
@@ -121,10 +121,10 @@ proptest! {
         light.oil.density_kg_per_m3 = Some(d1);
         let mut dense = light.clone();
         dense.oil.density_kg_per_m3 = Some((d1 + extra).min(1500.0));
-        if let (Some(a), Some(b)) = (ok(&light), ok(&dense)) {
-            if a.separator.oil_outlet == OilLayer::Bottom {
-                prop_assert_eq!(b.separator.oil_outlet, OilLayer::Bottom);
-            }
+        if let (Some(a), Some(b)) = (ok(&light), ok(&dense))
+            && a.separator.oil_outlet == OilLayer::Bottom
+        {
+            prop_assert_eq!(b.separator.oil_outlet, OilLayer::Bottom);
         }
     }
 }

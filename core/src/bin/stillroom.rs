@@ -74,7 +74,7 @@ fn sweep(args: &[String]) -> Result<String, String> {
     };
     let num = |s: &String| s.parse::<f64>().map_err(|_| format!("{s} is not a number"));
     let (from, to, step) = (num(from)?, num(to)?, num(step)?);
-    if !(step > 0.0) || to < from {
+    if step.is_nan() || step <= 0.0 || to < from {
         return Err("need FROM <= TO and STEP > 0".into());
     }
     let base = if rest.is_empty() { Scenario::default() } else { read_scenario(rest.first())? };

@@ -817,10 +817,10 @@ mod tests {
     fn two_point_fits_are_labelled_as_such() {
         // A row whose Antoine C is exactly the assumed -43 K was fitted here, not measured.
         for c in COMPOUNDS {
-            if let CorrelationForm::AntoineLnPa { c: cc, .. } = c.vapour_pressure.form {
-                if cc == -43.0 {
-                    assert_ne!(c.vapour_pressure.confidence, Confidence::Measured, "{}", c.id);
-                }
+            if let CorrelationForm::AntoineLnPa { c: cc, .. } = c.vapour_pressure.form
+                && cc == -43.0
+            {
+                assert_ne!(c.vapour_pressure.confidence, Confidence::Measured, "{}", c.id);
             }
         }
     }

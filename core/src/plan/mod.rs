@@ -275,7 +275,7 @@ const SEA_LEVEL_BOILING_C: f64 = 99.974_3;
 /// ```
 pub fn plan(scenario: &Scenario) -> Result<Plan, ScenarioErrors> {
     let resolved = validate(scenario)?;
-    compute(scenario, &resolved).map_err(|e| ScenarioErrors { errors: vec![e] })
+    compute(scenario, &resolved).map_err(|e| ScenarioErrors { errors: vec![*e] })
 }
 
 /// The scenario with every default filled in, ready to compute.
@@ -303,18 +303,18 @@ fn warn(list: &mut Vec<Warning>, code: &str, message: String) {
     list.push(Warning { code: code.to_string(), message });
 }
 
-fn compute_error(field: &str, value: f64, valid: &str, message: &str) -> FieldError {
-    FieldError {
+fn compute_error(field: &str, value: f64, valid: &str, message: &str) -> Box<FieldError> {
+    Box::new(FieldError {
         field: field.to_string(),
         value: fmt_num(value),
         valid: valid.to_string(),
         message: message.to_string(),
         min: None,
         max: None,
-    }
+    })
 }
 
-fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, FieldError> {
+fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
     let mut warnings = Vec::new();
     let p = r.pressure_pa;
     let t_boil_k = water::saturation_temperature_k(p)
@@ -431,7 +431,7 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, FieldError> {
         .filter(|(c, _)| c.liquid_density_kg_per_m3 < rho_w_sep)
         .map(|(_, w)| w)
         .sum();
-    let mixed_density = lighter >= 0.05 && lighter <= 0.95;
+    let mixed_density = (0.05..=0.95).contains(&lighter);
     if mixed_density {
         warn(
             &mut warnings,
@@ -561,17 +561,17 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, FieldError> {
     let steam_to_minimum_ratio = distillate_steam_kg / min_steam_to_target_kg;
     let water_to_oil_ratio = distillate_steam_kg / oil_recovered_kg;
     let specific_rate = distillate_rate * 3600.0 / s.charge.plant_mass_kg;
-    if let Some(crop) = r.crop {
-        if specific_rate < 0.5 * crop.steam_rate_kg_per_h_per_kg {
-            warn(
-                &mut warnings,
-                "low_steam_rate",
-                format!(
-                    "{:.2} kg/h of steam per kg of charge is under half the {:.2} usual for {}: the run may take longer than planned.",
-                    specific_rate, crop.steam_rate_kg_per_h_per_kg, crop.name
-                ),
-            );
-        }
+    if let Some(crop) = r.crop
+        && specific_rate < 0.5 * crop.steam_rate_kg_per_h_per_kg
+    {
+        warn(
+            &mut warnings,
+            "low_steam_rate",
+            format!(
+                "{:.2} kg/h of steam per kg of charge is under half the {:.2} usual for {}: the run may take longer than planned.",
+                specific_rate, crop.steam_rate_kg_per_h_per_kg, crop.name
+            ),
+        );
     }
     let curve_end = time_after_first_drop_s.max(1.0);
     let recovery_curve = (0..=24)
@@ -683,19 +683,19 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, FieldError> {
         )),
         CondenserKind::TubeInTube => None,
     };
-    if let Some(t) = tub_lasts_s {
-        if t < time_after_first_drop_s {
-            warn(
-                &mut warnings,
-                "tub_warms_up",
-                format!(
-                    "The tub's water reaches {:.0} °C after about {:.0} min: feed it cold water at the bottom, about {:.1} L/min, or change it during the run.",
-                    c.cooling_water_outlet_c,
-                    t / 60.0,
-                    cw_flow * 60.0 / 1.0
-                ),
-            );
-        }
+    if let Some(t) = tub_lasts_s
+        && t < time_after_first_drop_s
+    {
+        warn(
+            &mut warnings,
+            "tub_warms_up",
+            format!(
+                "The tub's water reaches {:.0} °C after about {:.0} min: feed it cold water at the bottom, about {:.1} L/min, or change it during the run.",
+                c.cooling_water_outlet_c,
+                t / 60.0,
+                cw_flow * 60.0 / 1.0
+            ),
+        );
     }
     let cooling_water_per_run_kg = cw_flow * time_after_first_drop_s;
     let condenser = CondenserPlan {
@@ -807,17 +807,17 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, FieldError> {
         (Some(v), Some(crop)) => Some(season::charge_mass_kg(v, crop.charge_density_kg_per_m3)),
         _ => None,
     };
-    if let Some(cap) = still_capacity_kg {
-        if s.charge.plant_mass_kg > 1.25 * cap {
-            warn(
-                &mut warnings,
-                "overpacked",
-                format!(
-                    "{:.0} kg is well over the {:.0} kg this still holds at a usual packing: tight packing makes steam channel and leaves oil behind.",
-                    s.charge.plant_mass_kg, cap
-                ),
-            );
-        }
+    if let Some(cap) = still_capacity_kg
+        && s.charge.plant_mass_kg > 1.25 * cap
+    {
+        warn(
+            &mut warnings,
+            "overpacked",
+            format!(
+                "{:.0} kg is well over the {:.0} kg this still holds at a usual packing: tight packing makes steam channel and leaves oil behind.",
+                s.charge.plant_mass_kg, cap
+            ),
+        );
     }
     let season = s.season.harvest_kg.map(|harvest| {
         let charges = season::charges_for_harvest(harvest, s.charge.plant_mass_kg);

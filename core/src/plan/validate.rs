@@ -205,7 +205,7 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
                         "these coefficients do not give a usable vapour pressure near 100 °C; check the units".into(),
                     );
                 }
-                if !(vp.t_min_k < vp.t_max_k) {
+                if vp.t_min_k.partial_cmp(&vp.t_max_k) != Some(std::cmp::Ordering::Less) {
                     ck.push(
                         &format!("{f}.vapour_pressure"),
                         fmt_num(vp.t_min_k - 273.15),
