@@ -9,6 +9,7 @@ pub mod units;
 use components::cautions::Cautions;
 use components::inputs::{EquipmentInputs, EssentialInputs};
 use components::results::{Details, Headline, Warnings};
+use components::runlog::RunLog;
 use leptos::prelude::*;
 use state::AppState;
 
@@ -34,7 +35,7 @@ pub fn App() -> impl IntoView {
             <div class="columns">
                 <div class="col-in"><EssentialInputs /></div>
                 <div class="col-out"><Headline /><Warnings /></div>
-                <div class="col-in"><EquipmentInputs /></div>
+                <div class="col-in"><EquipmentInputs /><RunLog /></div>
                 <div class="col-out"><Details /></div>
             </div>
             <Cautions />

@@ -9,12 +9,15 @@ use crate::fields::{FIELDS, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse
 use gloo_storage::{LocalStorage, Storage};
 use leptos::prelude::*;
 use serde::{Deserialize, Serialize};
+use stillroom_core::calibration::RunRecord;
 use stillroom_core::heat::{Fuel, Metal};
 use stillroom_core::scenario::{BarometerReference, CondenserKind, OilComposition, OilPart, Scenario};
 use stillroom_core::{Plan, ScenarioErrors, plan};
 
 /// Storage key of the saved scenario record.
 pub const SCENARIO_KEY: &str = "stillroom.scenario";
+/// Storage key of the grower's log of finished runs.
+pub const RUNS_KEY: &str = "stillroom.runs";
 /// Prefix of keys holding saved data that could not be read, kept so nothing is lost.
 pub const BACKUP_PREFIX: &str = "stillroom.unreadable.";
 /// Version of the stored record's envelope (the scenario inside carries its own version).
@@ -48,6 +51,12 @@ struct Record {
     scenario: serde_json::Value,
 }
 
+#[derive(Serialize, Deserialize)]
+struct RunsRecord {
+    record_version: u32,
+    runs: Vec<RunRecord>,
+}
+
 /// The page's state, shared through context.
 #[derive(Clone)]
 pub struct AppState {
@@ -64,6 +73,8 @@ pub struct AppState {
     next_row_key: RwSignal<u32>,
     /// Name of the grower's own compound; empty means none.
     pub own_name: RwSignal<String>,
+    /// The grower's log of finished runs.
+    pub runs: RwSignal<Vec<RunRecord>>,
     /// A message about saved data (for example that an unreadable copy was kept).
     pub notice: RwSignal<Option<String>>,
     pub scenario: Memo<Derived>,
@@ -78,6 +89,19 @@ pub struct Derived {
     pub text_errors: Vec<(String, TextError)>,
 }
 
+/// Copies unreadable saved text aside under a backup key and says where it went.
+fn keep_aside(what: &str, raw: &str) -> String {
+    let slug: String = what.chars().filter(|c| c.is_ascii_alphanumeric()).collect();
+    let key = format!("{BACKUP_PREFIX}{slug}.{}", js_sys_now());
+    if LocalStorage::raw().set_item(&key, raw).is_ok() {
+        format!(
+            "Your saved {what} could not be read, so the page starts afresh. A copy was kept in this browser under “{key}”."
+        )
+    } else {
+        format!("Your saved {what} could not be read, and there was no room to keep a copy.")
+    }
+}
+
 /// Reads the saved scenario. Anything unreadable is copied to a backup key and reported, and
 /// the invented example is used instead: saved data is never silently dropped.
 pub fn load() -> (Scenario, Option<String>) {
@@ -87,18 +111,26 @@ pub fn load() -> (Scenario, Option<String>) {
     };
     match migrate(&raw) {
         Some(s) => (s, None),
-        None => {
-            let key = format!("{BACKUP_PREFIX}{}", js_sys_now());
-            let kept = LocalStorage::raw().set_item(&key, &raw).is_ok();
-            let msg = if kept {
-                format!(
-                    "Your saved plan could not be read, so the example is shown. A copy was kept in this browser under “{key}”."
-                )
-            } else {
-                "Your saved plan could not be read, and there was no room to keep a copy.".to_string()
-            };
-            (Scenario::default(), Some(msg))
-        }
+        None => (Scenario::default(), Some(keep_aside("plan", &raw))),
+    }
+}
+
+/// Reads the log of runs, with the same care as [`load`].
+pub fn load_runs() -> (Vec<RunRecord>, Option<String>) {
+    let raw = match LocalStorage::raw().get_item(RUNS_KEY) {
+        Ok(Some(raw)) => raw,
+        _ => return (Vec::new(), None),
+    };
+    match serde_json::from_str::<RunsRecord>(&raw) {
+        Ok(r) if r.record_version <= RECORD_VERSION => (r.runs, None),
+        _ => (Vec::new(), Some(keep_aside("run log", &raw))),
+    }
+}
+
+fn save_runs(runs: &[RunRecord]) {
+    let record = RunsRecord { record_version: RECORD_VERSION, runs: runs.to_vec() };
+    if let Ok(text) = serde_json::to_string(&record) {
+        let _ = LocalStorage::raw().set_item(RUNS_KEY, &text);
     }
 }
 
@@ -133,6 +165,12 @@ impl AppState {
     /// Builds the state from saved data and wires the memos and the storage sync.
     pub fn new() -> AppState {
         let (base, notice) = load();
+        let (logged, runs_notice) = load_runs();
+        let notice = match (notice, runs_notice) {
+            (Some(a), Some(b)) => Some(format!("{a} {b}")),
+            (a, b) => a.or(b),
+        };
+        let runs = RwSignal::new(logged);
         let texts: Vec<RwSignal<String>> = FIELDS.iter().map(|f| RwSignal::new(text_for(f, &base))).collect();
         let pressure_mode = RwSignal::new(match base.site.barometer.as_ref().map(|b| b.reference) {
             None => PressureMode::Altitude,
@@ -225,6 +263,7 @@ impl AppState {
 
         // Storage sync, in this one place: save what the grower entered whenever it changes.
         Effect::new(move |_| save(&scenario.get().scenario));
+        Effect::new(move |_| runs.with(|r| save_runs(r)));
 
         AppState {
             texts,
@@ -237,6 +276,7 @@ impl AppState {
             mixture,
             next_row_key,
             own_name,
+            runs,
             notice: RwSignal::new(notice),
             scenario,
             plan,

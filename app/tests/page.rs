@@ -173,3 +173,39 @@ async fn a_compound_of_ones_own_from_two_points() {
     type_into(&host, "own_p1", "-3").await;
     assert!(!text_of(&host, "#e-own_t1").is_empty(), "two-point law error shown");
 }
+
+#[wasm_bindgen_test]
+async fn a_logged_run_calibrates_the_next_plan_and_is_kept() {
+    clear_store();
+    let host = fresh_host();
+    let mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    type_into(&host, "plant_mass", "20").await;
+    let set = |id: &str, v: &str| {
+        let input: HtmlInputElement =
+            host.query_selector(&format!("#{id}")).unwrap().unwrap().unchecked_into();
+        input.set_value(v);
+        input.dispatch_event(&Event::new("input").unwrap()).unwrap();
+    };
+    set("run-minutes", "60");
+    set("run-oil", "200");
+    leptos::task::tick().await;
+    let log: HtmlElement = host.query_selector("#run-log").unwrap().unwrap().unchecked_into();
+    log.click();
+    leptos::task::tick().await;
+    // Lavender's preset: k = 0.05/min, oil 0.883 g/mL -> 200 mL after 60 min from 20 kg is
+    // 176.6 g / 0.9502 / 20 kg = 0.93 % (inverse of the first-order law).
+    let suggestion = text_of(&host, "[data-out=calibration]");
+    assert!(suggestion.contains("0.93 %"), "{suggestion}");
+    let use_it: HtmlElement = host.query_selector("#run-use").unwrap().unwrap().unchecked_into();
+    use_it.click();
+    leptos::task::tick().await;
+    let content: HtmlInputElement = host.query_selector("#f-oil_content").unwrap().unwrap().unchecked_into();
+    assert_eq!(content.value(), "0.93");
+    drop(mounted);
+    // The log survives a remount (a reload).
+    let again = fresh_host();
+    let _mounted = leptos::mount::mount_to(again.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    assert_eq!(again.query_selector_all("[data-run]").unwrap().length(), 1);
+}

@@ -5,6 +5,7 @@
 //! in, a [`plan::Plan`] (or every invalid field at once, as [`scenario::ScenarioErrors`]) out.
 
 pub mod atmosphere;
+pub mod calibration;
 pub mod codistillation;
 pub mod compounds;
 pub mod condenser;

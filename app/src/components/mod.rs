@@ -3,3 +3,4 @@
 pub mod cautions;
 pub mod inputs;
 pub mod results;
+pub mod runlog;

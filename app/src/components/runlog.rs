@@ -1,0 +1,132 @@
+//! The grower's log of finished runs, and what it says about the next one.
+
+use crate::fields::{TextError, parse_number};
+use crate::state::AppState;
+use crate::units;
+use leptos::prelude::*;
+use stillroom_core::calibration::{RunRecord, calibrate, oil_content_percent_from_run};
+use stillroom_core::crops::CROPS;
+
+fn crop_name(id: &Option<String>) -> String {
+    id.as_deref()
+        .and_then(|id| CROPS.iter().find(|c| c.id == id))
+        .map(|c| c.name.to_string())
+        .unwrap_or_else(|| "no preset".to_string())
+}
+
+fn read(text: &str, what: &str) -> Result<f64, String> {
+    match parse_number(text) {
+        Ok(Some(v)) if v > 0.0 => Ok(v),
+        Ok(Some(_)) => Err(format!("{what} must be more than zero.")),
+        Ok(None) | Err(TextError::Empty) => Err(format!("Enter {what}.")),
+        Err(TextError::NotANumber) => Err(format!("{what}: enter a number.")),
+    }
+}
+
+/// The log: a short form for a finished run, the list, and the suggestion for the next plan.
+#[component]
+pub fn RunLog() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let runs = state.runs;
+    let date = RwSignal::new(String::new());
+    let minutes = RwSignal::new(String::new());
+    let oil_ml = RwSignal::new(String::new());
+    let problem = RwSignal::new(None::<String>);
+
+    let log_state = state.clone();
+    let log = move |_| {
+        let derived = log_state.scenario.get_untracked();
+        let plan = log_state.plan.get_untracked();
+        let Ok(plan) = plan else {
+            problem.set(Some(
+                "Fix the plan's marked fields first: the log uses its plant mass and oil density.".into(),
+            ));
+            return;
+        };
+        let parsed = read(&minutes.get_untracked(), "the minutes distilled")
+            .and_then(|m| read(&oil_ml.get_untracked(), "the oil collected").map(|o| (m, o)));
+        match parsed {
+            Err(e) => problem.set(Some(e)),
+            Ok((m, ml)) => {
+                problem.set(None);
+                let record = RunRecord {
+                    date: date.get_untracked().trim().to_string(),
+                    crop: derived.scenario.charge.crop.clone(),
+                    plant_mass_kg: derived.scenario.charge.plant_mass_kg,
+                    distilling_time_s: m * 60.0,
+                    oil_volume_m3: ml * 1e-6,
+                    oil_density_kg_per_m3: plan.oil.density_kg_per_m3,
+                    rate_constant_per_min: plan.run.rate_constant_per_min,
+                    note: String::new(),
+                };
+                runs.update(|r| r.push(record));
+                minutes.set(String::new());
+                oil_ml.set(String::new());
+            }
+        }
+    };
+
+    let sug_state = state.clone();
+    let suggestion = Memo::new(move |_| {
+        let crop = sug_state.crop.get();
+        runs.with(|r| calibrate(r, crop.as_deref())).map(|c| (c, crop_name(&crop)))
+    });
+    let use_state = state.clone();
+    let use_it = move |_| {
+        if let Some((c, _)) = suggestion.get_untracked() {
+            use_state.text("oil_content").set(units::fixed(c.oil_content_percent, 2));
+        }
+    };
+
+    view! {
+        <section class="runlog" aria-labelledby="h-runlog">
+            <h2 id="h-runlog">"Your runs"</h2>
+            <p class="hint">"Log a finished run of the charge above: the plan learns your crop's real oil content from it."</p>
+            <div class="field">
+                <label for="run-date"><span class="label">"Date"</span></label>
+                <input id="run-date" type="text" autocomplete="off" placeholder="e.g. 14 July"
+                    prop:value=move || date.get() on:input=move |ev| date.set(event_target_value(&ev)) />
+            </div>
+            <div class="field">
+                <label for="run-minutes"><span class="label">"Distilled after the first drop"</span><span class="unit">"min"</span></label>
+                <input id="run-minutes" type="text" inputmode="decimal" autocomplete="off"
+                    prop:value=move || minutes.get() on:input=move |ev| minutes.set(event_target_value(&ev)) />
+            </div>
+            <div class="field">
+                <label for="run-oil"><span class="label">"Oil collected"</span><span class="unit">"mL"</span></label>
+                <input id="run-oil" type="text" inputmode="decimal" autocomplete="off"
+                    prop:value=move || oil_ml.get() on:input=move |ev| oil_ml.set(event_target_value(&ev)) />
+            </div>
+            <p class="error" id="run-error" aria-live="polite">{move || problem.get()}</p>
+            <button type="button" id="run-log" on:click=log>"Log this run"</button>
+
+            <Show when=move || suggestion.get().is_some()>
+                <div class="suggestion" data-out="calibration">
+                    <p>{move || suggestion.get().map(|(c, name)| format!(
+                        "Your {} logged run(s) of {} imply an oil content of {} % (from {} to {} %).",
+                        c.runs_used, name, units::fixed(c.oil_content_percent, 2),
+                        units::fixed(c.lowest_percent, 2), units::fixed(c.highest_percent, 2)))}</p>
+                    <button type="button" id="run-use" on:click=use_it.clone()>"Plan with it"</button>
+                </div>
+            </Show>
+
+            <ul class="runs">
+                {move || runs.get().into_iter().enumerate().map(|(i, r)| {
+                    let implied = oil_content_percent_from_run(&r)
+                        .map(|p| format!("{} %", units::fixed(p, 2)))
+                        .unwrap_or_else(|| "–".into());
+                    view! {
+                        <li data-run=i>
+                            <span>{format!("{} · {} · {} kg · {} min · {} mL → {}",
+                                if r.date.is_empty() { "undated".to_string() } else { r.date.clone() },
+                                crop_name(&r.crop), units::sig3(r.plant_mass_kg), units::sig3(r.distilling_time_s / 60.0),
+                                units::sig3(r.oil_volume_m3 * 1e6), implied)}</span>
+                            <button type="button" class="quiet" aria-label="Delete this run"
+                                on:click=move |_| runs.update(|list| { if i < list.len() { list.remove(i); } })>"✕"</button>
+                        </li>
+                    }
+                }).collect_view()}
+            </ul>
+        </section>
+    }
+}
