@@ -1,0 +1,8 @@
+//! Test support for Stillroom's end-to-end tests: the built page in `dist/`, served by the xtask
+//! static server and driven in headless Chromium through ChromeDriver.
+
+#[cfg(not(target_arch = "wasm32"))]
+pub mod browser;
+
+/// The error type the end-to-end tests return.
+pub type BoxError = Box<dyn std::error::Error + Send + Sync + 'static>;

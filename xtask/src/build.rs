@@ -1,0 +1,202 @@
+//! The release build of the page into `dist/`.
+
+use crate::buildid::build_id;
+use crate::proc::{self, run};
+use crate::setup::{BuildTools, WASM_TARGET};
+use crate::sizes::FirstLoad;
+use crate::{Failure, Result, io_ctx};
+use std::path::{Path, PathBuf};
+
+/// The app crate and the stem of the files wasm-bindgen writes.
+pub const APP_PACKAGE: &str = "stillroom-app";
+pub const OUT_NAME: &str = "stillroom_app";
+/// Replaced by the build id in `dist/sw.js` and `dist/index.html`.
+pub const BUILD_ID_TOKEN: &str = "__STILLROOM_BUILD_ID__";
+/// Replaced in `dist/sw.js` by the list of files to precache.
+pub const PRECACHE_TOKEN: &str = "/*__STILLROOM_PRECACHE__*/";
+/// wasm features wasm-opt may use: those Rust's wasm32 target emits by default (the module's
+/// `target_features` section lists the same set; wasm-opt reads it too). wasm-bindgen's glue
+/// relies on reference types for its externref table.
+pub const WASM_OPT_FEATURES: [&str; 8] = [
+    "--enable-bulk-memory",
+    "--enable-bulk-memory-opt",
+    "--enable-call-indirect-overlong",
+    "--enable-nontrapping-float-to-int",
+    "--enable-sign-ext",
+    "--enable-mutable-globals",
+    "--enable-reference-types",
+    "--enable-multivalue",
+];
+
+/// What a build produced.
+#[derive(Debug, Clone)]
+pub struct Built {
+    pub dist: PathBuf,
+    pub build_id: String,
+    pub sizes: FirstLoad,
+}
+
+/// Every file under `dir`, as `/`-separated paths relative to it, sorted.
+pub fn list_files(dir: &Path) -> Result<Vec<String>> {
+    fn walk(base: &Path, dir: &Path, out: &mut Vec<String>) -> Result<()> {
+        for entry in io_ctx(std::fs::read_dir(dir), dir.display())? {
+            let entry = io_ctx(entry, dir.display())?;
+            let path = entry.path();
+            let ty = io_ctx(entry.file_type(), path.display())?;
+            if ty.is_dir() {
+                walk(base, &path, out)?;
+            } else if ty.is_file() {
+                let rel = path.strip_prefix(base).expect("walked from base");
+                let parts: Vec<String> =
+                    rel.components().map(|c| c.as_os_str().to_string_lossy().into_owned()).collect();
+                out.push(parts.join("/"));
+            }
+        }
+        Ok(())
+    }
+    let mut out = Vec::new();
+    walk(dir, dir, &mut out)?;
+    out.sort();
+    Ok(out)
+}
+
+/// Copy the files under `from` into `to`, keeping sub-folders.
+pub fn copy_tree(from: &Path, to: &Path) -> Result<()> {
+    for rel in list_files(from)? {
+        let dst = to.join(&rel);
+        if let Some(parent) = dst.parent() {
+            io_ctx(std::fs::create_dir_all(parent), parent.display())?;
+        }
+        io_ctx(std::fs::copy(from.join(&rel), &dst), format!("copying {rel} into {}", to.display()))?;
+    }
+    Ok(())
+}
+
+/// The JavaScript array elements naming the files to precache, after the `./` and `./index.html`
+/// the service worker lists itself: `, "./a.js", "./b.wasm"`.
+pub fn precache_entries(files: &[String]) -> String {
+    files
+        .iter()
+        .filter(|f| f.as_str() != "sw.js" && f.as_str() != "index.html")
+        .map(|f| format!(", \"./{}\"", f.replace('\\', "\\\\").replace('"', "\\\"")))
+        .collect()
+}
+
+/// Replace `token` in `text`, failing if it is not there (a template lost its placeholder).
+pub fn fill(text: &str, token: &str, value: &str, file: &str) -> Result<String> {
+    if !text.contains(token) {
+        return Err(Failure::new(format!("{file} has no `{token}` placeholder for the build to fill")));
+    }
+    Ok(text.replace(token, value))
+}
+
+/// Build the release page into `<root>/dist` and measure it.
+pub fn build(root: &Path, tools: &BuildTools) -> Result<Built> {
+    run(proc::cargo_command().current_dir(root).args([
+        "build",
+        "-p",
+        APP_PACKAGE,
+        "--release",
+        "--target",
+        WASM_TARGET,
+    ]))?;
+    let wasm = crate::target_dir(root).join(WASM_TARGET).join("release").join(format!("{APP_PACKAGE}.wasm"));
+    if !wasm.is_file() {
+        return Err(Failure::new(format!("cargo finished but {} is not there", wasm.display())));
+    }
+
+    let dist = crate::dist_dir(root);
+    if dist.exists() {
+        io_ctx(std::fs::remove_dir_all(&dist), dist.display())?;
+    }
+    io_ctx(std::fs::create_dir_all(&dist), dist.display())?;
+
+    let mut bindgen = proc::command(&tools.wasm_bindgen);
+    bindgen
+        .args(["--target", "web", "--no-typescript", "--out-dir"])
+        .arg(&dist)
+        .args(["--out-name", OUT_NAME])
+        .arg(&wasm);
+    run(&mut bindgen)?;
+
+    let bg = dist.join(format!("{OUT_NAME}_bg.wasm"));
+    let optimised = dist.join(format!("{OUT_NAME}_bg.opt.wasm"));
+    let mut opt = proc::command(&tools.wasm_opt);
+    opt.arg("-Oz").args(WASM_OPT_FEATURES).arg(&bg).arg("-o").arg(&optimised);
+    run(&mut opt)?;
+    io_ctx(std::fs::rename(&optimised, &bg), bg.display())?;
+
+    let public = root.join("public");
+    copy_tree(&public, &dist)?;
+    let template_path = root.join("app").join("index.html");
+    let template = io_ctx(std::fs::read_to_string(&template_path), template_path.display())?;
+    let script = format!("./{OUT_NAME}.js");
+    if !template.contains(&script) {
+        return Err(Failure::new(format!("{} does not load {script}", template_path.display())));
+    }
+    io_ctx(std::fs::write(dist.join("index.html"), &template), "writing dist/index.html")?;
+
+    // The id covers every file as built, placeholders still in, so any change to any of them
+    // renames the offline cache.
+    let files = list_files(&dist)?;
+    let mut contents = Vec::new();
+    for f in &files {
+        contents.push((f.clone(), io_ctx(std::fs::read(dist.join(f)), f)?));
+    }
+    let id = build_id(contents.iter().map(|(n, b)| (n.as_str(), b.as_slice())));
+
+    let index = fill(&template, BUILD_ID_TOKEN, &id, "app/index.html")?;
+    io_ctx(std::fs::write(dist.join("index.html"), index), "dist/index.html")?;
+    let sw_path = dist.join("sw.js");
+    let sw = io_ctx(std::fs::read_to_string(&sw_path), "public/sw.js")?;
+    let sw = fill(&sw, BUILD_ID_TOKEN, &id, "public/sw.js")?;
+    let sw = fill(&sw, PRECACHE_TOKEN, &precache_entries(&files), "public/sw.js")?;
+    io_ctx(std::fs::write(&sw_path, sw), "dist/sw.js")?;
+
+    let sizes = io_ctx(FirstLoad::measure(&dist), "measuring dist/")?;
+    Ok(Built { dist, build_id: id, sizes })
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn precache_skips_worker_and_index_and_quotes() {
+        let files = vec![
+            "icon.svg".to_string(),
+            "index.html".to_string(),
+            "stillroom_app.js".to_string(),
+            "sw.js".to_string(),
+            "img/a\"b.png".to_string(),
+        ];
+        assert_eq!(
+            precache_entries(&files),
+            ", \"./icon.svg\", \"./stillroom_app.js\", \"./img/a\\\"b.png\""
+        );
+        assert_eq!(precache_entries(&[]), "");
+    }
+
+    #[test]
+    fn fill_demands_the_placeholder() {
+        assert_eq!(fill("const C = 'x-__T__';", "__T__", "abc", "f").unwrap(), "const C = 'x-abc';");
+        let e = fill("nothing", "__T__", "abc", "public/sw.js").unwrap_err();
+        assert!(e.0.contains("public/sw.js") && e.0.contains("__T__"), "{e}");
+    }
+
+    #[test]
+    fn list_and_copy_tree() {
+        let base = std::env::temp_dir().join(format!("stillroom-tree-{}", std::process::id()));
+        let _ = std::fs::remove_dir_all(&base);
+        let (a, b) = (base.join("a"), base.join("b"));
+        std::fs::create_dir_all(a.join("deep/er")).unwrap();
+        std::fs::write(a.join("z.txt"), "z").unwrap();
+        std::fs::write(a.join("deep/er/y.css"), "y").unwrap();
+        std::fs::write(a.join("deep/x.js"), "x").unwrap();
+        assert_eq!(list_files(&a).unwrap(), ["deep/er/y.css", "deep/x.js", "z.txt"]);
+        copy_tree(&a, &b).unwrap();
+        assert_eq!(list_files(&b).unwrap(), list_files(&a).unwrap());
+        assert_eq!(std::fs::read_to_string(b.join("deep/er/y.css")).unwrap(), "y");
+        std::fs::remove_dir_all(&base).unwrap();
+    }
+}
