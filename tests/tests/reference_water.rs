@@ -48,14 +48,11 @@ fn if97_tables_5_and_15_enthalpies_from_the_crate() {
 
 #[test]
 fn iapws_2008_viscosity_table_4_from_the_crate() {
-    // IAPWS R12-08, Table 4 (industrial use, no critical enhancement), µPa·s at (T, ρ).
-    let cases = [
-        (298.15, 998.0, 889.735100),
-        (298.15, 1200.0, 1437.649467),
-        (373.15, 1000.0, 307.883622),
-        (433.15, 1.0, 14.538324),
-        (433.15, 1000.0, 217.685358),
-    ];
+    // IAPWS R12-08, Table 4 (industrial use, no critical enhancement), µPa·s at (T, ρ). The
+    // crate reaches the viscosity only through IF97 states (p ≤ 100 MPa), so the table's points
+    // at 1200 kg/m³ (298.15 K) and 1000 kg/m³ (373.15 and 433.15 K), which lie at several
+    // hundred MPa, cannot be asked; these two can.
+    let cases = [(298.15, 998.0, 889.735100), (433.15, 1.0, 14.538324)];
     for (t_k, rho, mu) in cases {
         let got = seuif97::tv(t_k - 273.15, 1.0 / rho, seuif97::ODV) * 1e6;
         assert!(rel(got, mu) <= 1e-6, "mu({t_k} K, {rho} kg/m3) = {got}, table {mu}");
@@ -102,7 +99,8 @@ fn liquid_density_matches_iapws_95() {
 
 #[test]
 fn liquid_viscosity_within_one_percent_from_10_to_99_c() {
-    // IAPWS 2008 viscosity with IAPWS-95 density, mPa·s, computed with iapws 1.5.5.
+    // IAPWS 2008 viscosity with IAPWS-95 density, mPa·s, computed with iapws 1.5.5. The brief
+    // asks for 1 %; the IF97 density differs by at most 0.015 kg/m³, so 1e-4 is what we hold.
     let cases = [
         (10.0, 1.30590),
         (20.0, 1.00160),
@@ -117,7 +115,7 @@ fn liquid_viscosity_within_one_percent_from_10_to_99_c() {
     ];
     for (t_c, mu) in cases {
         let got = liquid_viscosity_pa_s(t_c + 273.15, 101_325.0).unwrap() * 1e3;
-        assert!(rel(got, mu) <= 0.01, "mu({t_c} °C) = {got}, iapws {mu}");
+        assert!(rel(got, mu) <= 1e-4, "mu({t_c} °C) = {got}, iapws {mu}");
     }
 }
 
