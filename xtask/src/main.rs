@@ -175,29 +175,10 @@ fn test(root: &Path) -> Result<()> {
     st.stage("format (cargo fmt --check)", |_| {
         run(proc::cargo_command().current_dir(root).args(["fmt", "--all", "--check"]))
     })?;
-    st.stage("lints, host (clippy)", |_| {
-        run(proc::cargo_command().current_dir(root).args([
-            "clippy",
-            "--workspace",
-            "--all-targets",
-            "--",
-            "-D",
-            "warnings",
-        ]))
-    })?;
+    st.stage("lints, host (clippy)", |_| clippy(root, &["--workspace", "--all-targets", "--all-features"]))?;
     st.stage("lints, wasm32 (clippy)", |_| {
-        run(proc::cargo_command().current_dir(root).args([
-            "clippy",
-            "-p",
-            "stillroom-app",
-            "-p",
-            "stillroom-core",
-            "--target",
-            WASM_TARGET,
-            "--",
-            "-D",
-            "warnings",
-        ]))
+        clippy(root, &["-p", "stillroom-app", "--all-targets", "--target", WASM_TARGET])?;
+        clippy(root, &["-p", "stillroom-core", "--target", WASM_TARGET])
     })?;
     st.stage("release build of the page (dist/)", |_| do_build(root, &tools).map(|_| ()))?;
     st.stage("native tests (unit, doc, reference, end-to-end)", |c| {
@@ -220,6 +201,11 @@ fn test(root: &Path) -> Result<()> {
     );
     println!("total: {} passed, {} failed", t.passed, t.failed);
     Ok(())
+}
+
+/// Clippy over the given packages and targets, every warning an error.
+fn clippy(root: &Path, selection: &[&str]) -> Result<()> {
+    run(proc::cargo_command().current_dir(root).arg("clippy").args(selection).args(["--", "-D", "warnings"]))
 }
 
 fn bench(root: &Path) -> Result<()> {
