@@ -336,7 +336,7 @@ impl CustomVapourPressure {
 
 impl Default for Scenario {
     /// An invented example: Larkfield Farm (a fictional farm) plans a charge of fresh lavender in
-    /// a 100 L copper still over a 12 kW propane burner, at 300 m.
+    /// a 100 L copper still over an 8 kW propane burner, at 300 m.
     fn default() -> Self {
         Scenario {
             version: SCENARIO_VERSION,
@@ -402,7 +402,7 @@ impl Default for Boiler {
     fn default() -> Self {
         Boiler {
             fuel: Fuel::Propane,
-            heat_input_w: 12_000.0,
+            heat_input_w: 8_000.0,
             efficiency: None,
             usable_water_kg: 40.0,
             feed_temperature_c: None,

@@ -118,6 +118,21 @@ pub fn latent_heat_j_per_kg(t_k: f64) -> Result<f64, OutOfRange> {
     Ok(saturated_vapour_enthalpy_j_per_kg(t_k)? - saturated_liquid_enthalpy_j_per_kg(t_k)?)
 }
 
+/// Density of saturated steam at temperature T, kg/m³ (IF97 region 2 on the saturation line).
+///
+/// Source: IAPWS R7-97(2012), eq. 15 at p = p_s(T). Valid 273.15 K to 623.15 K.
+///
+/// ```
+/// use stillroom_core::water::saturated_vapour_density_kg_per_m3;
+/// // Saturated steam at 1 atm: 0.5977 kg/m³ (CoolProp 8.0.0, IAPWS-95).
+/// let rho = saturated_vapour_density_kg_per_m3(373.124).unwrap();
+/// assert!((rho - 0.5977).abs() < 0.001);
+/// ```
+pub fn saturated_vapour_density_kg_per_m3(t_k: f64) -> Result<f64, OutOfRange> {
+    check("temperature_k", t_k, SATURATION_T_MIN_K, 623.15)?;
+    Ok(tx(k_to_c(t_k), 1.0, OD))
+}
+
 /// The liquid states the calculator needs: 0.5 °C to just below boiling at the given pressure,
 /// and pressures a still sees (10 kPa to 1 MPa).
 fn check_liquid(t_k: f64, p_pa: f64) -> Result<(), OutOfRange> {

@@ -138,3 +138,18 @@ fn every_crop_preset_plans_with_defaults() {
         assert!(p.run.total_time_s > 0.0, "{}", crop.id);
     }
 }
+
+#[test]
+fn fast_steam_in_a_narrow_still_is_flagged_and_a_gentle_one_is_not() {
+    // 50 kg/h of steam up a 20 L still (D = 0.26 m): about 0.45 m/s, where 100 µm water droplets
+    // (terminal velocity 0.36 m/s in steam, fluids 1.3.1) are carried up.
+    let mut s = Scenario::default();
+    s.still.volume_m3 = Some(0.02);
+    s.charge.plant_mass_kg = 3.0;
+    s.boiler.steam_rate_kg_per_h = Some(50.0);
+    let p = plan(&s).unwrap();
+    assert!(p.warnings.iter().any(|w| w.code == "steam_too_fast"), "{:?}", p.warnings);
+    s.boiler.steam_rate_kg_per_h = Some(3.0);
+    let p = plan(&s).unwrap();
+    assert!(!p.warnings.iter().any(|w| w.code == "steam_too_fast"));
+}

@@ -573,6 +573,36 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
             ),
         );
     }
+    // Practice: total distillate water to oil of about 20-30:1 (Denny, for lavender: at most
+    // 20:1; lavandin caissons 19-33:1 by arithmetic on published fuel use).
+    if water_to_oil_ratio > 30.0 {
+        warn(
+            &mut warnings,
+            "water_to_oil_high",
+            format!(
+                "About {:.0} kg of distillate water per kg of oil: practice is 20-30. Less steam per hour (a smaller flame) or a shorter run would save fuel and water for little oil.",
+                water_to_oil_ratio
+            ),
+        );
+    }
+    // Steam rising through the charge: droplets of 100 µm and more fall back below about
+    // 0.2-0.3 m/s (terminal velocities computed with fluids 1.3.1); above, the steam carries
+    // water up and finds channels (judgement, no published limit).
+    if let Some(v) = s.still.volume_m3 {
+        let d = (4.0 * v / (std::f64::consts::PI * s.still.height_to_diameter)).cbrt();
+        let rho_v = water::saturated_vapour_density_kg_per_m3(eq.temperature_k).unwrap_or(0.6);
+        let velocity = distillate_rate / (rho_v * std::f64::consts::PI * d * d / 4.0);
+        if velocity > 0.25 {
+            warn(
+                &mut warnings,
+                "steam_too_fast",
+                format!(
+                    "Steam rises through the charge at about {:.2} m/s: above about 0.25 m/s it lifts water droplets and cuts channels, leaving oil behind. Use less heat or a wider still.",
+                    velocity
+                ),
+            );
+        }
+    }
     let curve_end = time_after_first_drop_s.max(1.0);
     let recovery_curve = (0..=24)
         .map(|i| {
