@@ -72,3 +72,26 @@ pub fn plan_area_m2(flow_m3_per_s: f64, velocity_m_per_s: f64, turbulence_factor
 pub fn diameter_for_area_m(area_m2: f64) -> f64 {
     (4.0 * area_m2 / std::f64::consts::PI).sqrt()
 }
+
+/// A practical upright cylinder holding `volume_m3` with at least `min_area_m2` of surface and
+/// no taller than `max_height_to_diameter` times its diameter, as (diameter, height), m.
+///
+/// D = max(√(4 A_min/π), (4 V / (π r))^(1/3)), H = 4 V / (π D²). The area rule is API 421's;
+/// the shape limit keeps a receiver from becoming a tall pipe in which the layers mix
+/// (common practice, no source).
+///
+/// ```
+/// use stillroom_core::separator::practical_cylinder_m;
+/// // 0.7 L with at least 8 cm²: the shape limit (H ≤ 2 D) wins, D = 7.6 cm, H = 15.3 cm.
+/// let (d, h) = practical_cylinder_m(0.7e-3, 8e-4, 2.0);
+/// assert!((d - 0.0764).abs() < 1e-3 && (h / d - 2.0).abs() < 1e-9);
+/// // 20 L/h through 200 cm² with only 1 L: the area wins and the vessel is squat.
+/// let (d, h) = practical_cylinder_m(1e-3, 0.02, 2.0);
+/// assert!((d - 0.1596).abs() < 1e-3 && h < d);
+/// ```
+pub fn practical_cylinder_m(volume_m3: f64, min_area_m2: f64, max_height_to_diameter: f64) -> (f64, f64) {
+    let by_area = diameter_for_area_m(min_area_m2);
+    let by_shape = (4.0 * volume_m3 / (std::f64::consts::PI * max_height_to_diameter)).cbrt();
+    let d = by_area.max(by_shape);
+    (d, 4.0 * volume_m3 / (std::f64::consts::PI * d * d))
+}

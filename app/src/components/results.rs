@@ -217,9 +217,9 @@ pub fn Details() -> impl IntoView {
                 <Row label="Design droplet moves" out="droplet_velocity" value=p(|p| format!("{} {}", units::mm_per_s(p.separator.droplet_velocity_m_per_s.abs()),
                     if p.separator.droplet_velocity_m_per_s >= 0.0 { "up" } else { "down" })) />
                 <Row label="Least surface area" out="separator_area" value=p(|p| p.separator.plan_area_m2.map(units::area).unwrap_or_else(|| "no gravity separation".into())) />
-                <Row label="Diameter" out="separator_diameter" value=p(|p| p.separator.diameter_m.map(units::length).unwrap_or_else(|| "–".into())) />
+                <Row label="A vessel that works: diameter" out="separator_diameter" value=p(|p| p.separator.diameter_m.map(units::length).unwrap_or_else(|| "–".into())) />
                 <Row label="Volume for the standing time" out="separator_volume" value=p(|p| units::volume(p.separator.volume_m3)) />
-                <Row label="Liquid height" out="separator_height" value=p(|p| p.separator.height_m.map(units::length).unwrap_or_else(|| "–".into())) />
+                <Row label="and liquid height" out="separator_height" value=p(|p| p.separator.height_m.map(units::length).unwrap_or_else(|| "–".into())) />
             </dl>
 
             <h3>"Oil and hydrosol"</h3>
@@ -245,9 +245,31 @@ pub fn Details() -> impl IntoView {
                 </tbody>
             </table>
 
+            <table class="composition cuts">
+                <caption>"The distillate, cut by cut (ideal run: the light compounds come first)"</caption>
+                <thead><tr><th scope="col">"Share of the oil"</th><th scope="col">"Least steam, kg per kg of oil"</th><th scope="col">"Mostly"</th></tr></thead>
+                <tbody>
+                    {move || plan.with(|r| r.as_ref().map(|p| p.codistillation.cuts.iter().map(|cut| {
+                        let mut ranked: Vec<(usize, f64)> = cut.mass_fractions.iter().cloned().enumerate().collect();
+                        ranked.sort_by(|a, b| b.1.total_cmp(&a.1));
+                        let mostly = ranked.iter().take(2)
+                            .map(|(i, w)| format!("{} {}", p.oil.components[*i].name, units::percent(*w)))
+                            .collect::<Vec<_>>().join(", ");
+                        view! {
+                            <tr>
+                                <th scope="row">{format!("{}–{} %", units::fixed(cut.from_fraction * 100.0, 0), units::fixed(cut.to_fraction * 100.0, 0))}</th>
+                                <td>{units::sig3(cut.steam_kg_per_kg_oil)}</td>
+                                <td>{mostly}</td>
+                            </tr>
+                        }
+                    }).collect_view()).ok())}
+                </tbody>
+            </table>
+
             <Show when=move || plan.with(|r| r.as_ref().map(|p| p.season.is_some()).unwrap_or(false))>
                 <h3>"Season"</h3>
                 <dl>
+                    <Row label="The still holds, at usual packing" out="still_capacity" value=p(|p| p.season.as_ref().and_then(|s| s.still_capacity_kg).map(units::mass).unwrap_or_else(|| "give the still volume".into())) />
                     <Row label="Charges" out="season_charges" value=p(|p| p.season.as_ref().map(|s| s.charges.to_string()).unwrap_or_default()) />
                     <Row label="Still time, with turnarounds" out="season_time" value=p(|p| p.season.as_ref().map(|s| format!("{} h", units::sig3(s.total_time_s / 3600.0))).unwrap_or_default()) />
                     <Row label="Fuel" out="season_fuel" value=p(|p| p.season.as_ref().map(|s| format!("{} {}", units::sig3(s.fuel_amount), p.energy.fuel_unit)).unwrap_or_default()) />

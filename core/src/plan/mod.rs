@@ -176,8 +176,10 @@ output! {
         /// Stokes velocity of the design droplet: positive rising, negative sinking.
         pub droplet_velocity_m_per_s: f64,
         pub droplet_reynolds_number: f64,
-        /// None when the oil and water densities are too close for a gravity separator.
+        /// Least surface area; None when the oil and water densities are too close for a
+        /// gravity separator.
         pub plan_area_m2: Option<f64>,
+        /// A practical cylinder: at least the least area, no taller than twice its width.
         pub diameter_m: Option<f64>,
         pub volume_m3: f64,
         pub height_m: Option<f64>,
@@ -770,7 +772,8 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
     let volume_m3 = flow * sp.residence_time_s;
     let (plan_area_m2, diameter_m, height_m) = if (rho_oil - rho_w_sep).abs() >= 1.0 {
         let a = separator::plan_area_m2(flow, v, sp.turbulence_factor);
-        (Some(a), Some(separator::diameter_for_area_m(a)), Some(volume_m3 / a))
+        let (d, h) = separator::practical_cylinder_m(volume_m3, a, 2.0);
+        (Some(a), Some(d), Some(h))
     } else {
         warn(
             &mut warnings,
