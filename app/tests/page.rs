@@ -209,3 +209,16 @@ async fn a_logged_run_calibrates_the_next_plan_and_is_kept() {
     leptos::task::tick().await;
     assert_eq!(again.query_selector_all("[data-run]").unwrap().length(), 1);
 }
+
+#[wasm_bindgen_test]
+async fn the_fuel_picker_changes_the_fuel_and_its_unit() {
+    clear_store();
+    let host = fresh_host();
+    let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    assert!(text_of(&host, "[data-out=fuel]").ends_with(" kg"), "propane is sold by the kg");
+    choose(&host, "#f-fuel", "electricity").await;
+    assert!(text_of(&host, "[data-out=fuel]").ends_with(" kWh"), "{}", text_of(&host, "[data-out=fuel]"));
+    choose(&host, "#f-fuel", "natural_gas").await;
+    assert!(text_of(&host, "[data-out=fuel]").ends_with(" m³"));
+}

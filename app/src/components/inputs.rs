@@ -309,58 +309,61 @@ pub fn PressureInputs() -> impl IntoView {
     }
 }
 
-/// Picks the fuel.
+/// The heat sources the page offers: (value, option key, label).
+const FUELS: &[(Fuel, &str, &str)] = &[
+    (Fuel::Propane, "propane", "Propane (bottled gas)"),
+    (Fuel::NaturalGas, "natural_gas", "Natural gas"),
+    (Fuel::Firewood, "firewood", "Firewood"),
+    (Fuel::Electricity, "electricity", "Electricity"),
+];
+
+/// The still metals the page offers.
+const METALS: &[(Metal, &str, &str)] = &[
+    (Metal::Copper, "copper", "Copper"),
+    (Metal::StainlessSteel, "stainless", "Stainless steel"),
+    (Metal::CarbonSteel, "carbon", "Carbon steel"),
+    (Metal::Aluminium, "aluminium", "Aluminium"),
+];
+
+/// A drop-down list over a fixed set of choices, bound to one signal.
 #[component]
-pub fn FuelPicker() -> impl IntoView {
-    let state = expect_context::<AppState>();
-    let fuel = state.fuel;
-    let options = [
-        (Fuel::Propane, "propane", "Propane (bottled gas)"),
-        (Fuel::NaturalGas, "natural_gas", "Natural gas"),
-        (Fuel::Firewood, "firewood", "Firewood"),
-        (Fuel::Electricity, "electricity", "Electricity"),
-    ];
+fn ChoicePicker<T>(
+    id: &'static str,
+    label: &'static str,
+    value: RwSignal<T>,
+    options: &'static [(T, &'static str, &'static str)],
+) -> impl IntoView
+where
+    T: Copy + PartialEq + Send + Sync + 'static,
+{
     view! {
         <div class="field">
-            <label for="f-fuel"><span class="label">"Heat source"</span></label>
-            <select id="f-fuel" on:change=move |ev| {
+            <label for=id><span class="label">{label}</span></label>
+            <select id=id on:change=move |ev| {
                 let v = event_target_value(&ev);
-                if let Some((f, _, _)) = options.iter().find(|(_, k, _)| *k == v) { fuel.set(*f); }
+                if let Some((choice, _, _)) = options.iter().find(|(_, k, _)| *k == v) { value.set(*choice); }
             }>
-                {options.iter().map(|(f, k, label)| {
-                    let f = *f;
-                    view! { <option value=*k selected=move || fuel.get() == f>{*label}</option> }
+                {options.iter().map(|(choice, k, text)| {
+                    let choice = *choice;
+                    view! { <option value=*k selected=move || value.get() == choice>{*text}</option> }
                 }).collect_view()}
             </select>
         </div>
     }
 }
 
+/// Picks the fuel.
+#[component]
+pub fn FuelPicker() -> impl IntoView {
+    let fuel = expect_context::<AppState>().fuel;
+    view! { <ChoicePicker id="f-fuel" label="Heat source" value=fuel options=FUELS /> }
+}
+
 /// Picks the still's metal.
 #[component]
 pub fn MetalPicker() -> impl IntoView {
-    let state = expect_context::<AppState>();
-    let metal = state.metal;
-    let options = [
-        (Metal::Copper, "copper", "Copper"),
-        (Metal::StainlessSteel, "stainless", "Stainless steel"),
-        (Metal::CarbonSteel, "carbon", "Carbon steel"),
-        (Metal::Aluminium, "aluminium", "Aluminium"),
-    ];
-    view! {
-        <div class="field">
-            <label for="f-metal"><span class="label">"Still made of"</span></label>
-            <select id="f-metal" on:change=move |ev| {
-                let v = event_target_value(&ev);
-                if let Some((m, _, _)) = options.iter().find(|(_, k, _)| *k == v) { metal.set(*m); }
-            }>
-                {options.iter().map(|(m, k, label)| {
-                    let m = *m;
-                    view! { <option value=*k selected=move || metal.get() == m>{*label}</option> }
-                }).collect_view()}
-            </select>
-        </div>
-    }
+    let metal = expect_context::<AppState>().metal;
+    view! { <ChoicePicker id="f-metal" label="Still made of" value=metal options=METALS /> }
 }
 
 /// Picks the condenser's build.
