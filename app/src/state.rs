@@ -259,10 +259,10 @@ impl AppState {
             s.condenser.kind = kind;
             Derived { scenario: s, text_errors }
         });
-        let plan = Memo::new(move |_| plan(&scenario.get().scenario));
+        let plan = Memo::new(move |_| scenario.with(|d| plan(&d.scenario)));
 
         // Storage sync, in this one place: save what the grower entered whenever it changes.
-        Effect::new(move |_| save(&scenario.get().scenario));
+        Effect::new(move |_| scenario.with(|d| save(&d.scenario)));
         Effect::new(move |_| runs.with(|r| save_runs(r)));
 
         AppState {

@@ -12,25 +12,31 @@ use stillroom_core::scenario::CondenserKind;
 
 /// The message shown beside a field: its own text first, then the core's verdict on its value.
 fn field_message(f: &NumField, state: &AppState) -> Option<String> {
-    let derived = state.scenario.get();
-    if let Some((_, e)) = derived.text_errors.iter().find(|(k, _)| k == f.key) {
+    // Read through `with`: the plan is large and every field asks on every keystroke.
+    let text_error =
+        state.scenario.with(|d| d.text_errors.iter().find(|(k, _)| k == f.key).map(|(_, e)| e.clone()));
+    if let Some(e) = text_error {
         return Some(match e {
             TextError::Empty => "Enter a value.".to_string(),
             TextError::NotANumber => "Enter a number, such as 12.5.".to_string(),
         });
     }
-    let plan = state.plan.get();
-    let errors = plan.err()?;
-    let e = errors.errors.iter().find(|e| e.field == f.path)?;
-    let mut message = first_upper(&e.message);
-    if let (Some(min), Some(max)) = (e.min, e.max) {
-        let (a, b) = ((f.from_si)(min), (f.from_si)(max));
-        message =
-            format!("{message}. Valid: {} to {} {}.", units::sig3(a.min(b)), units::sig3(a.max(b)), f.unit);
-    } else {
-        message.push('.');
-    }
-    Some(message)
+    state.plan.with(|plan| {
+        let e = plan.as_ref().err()?.errors.iter().find(|e| e.field == f.path)?;
+        let mut message = first_upper(&e.message);
+        if let (Some(min), Some(max)) = (e.min, e.max) {
+            let (a, b) = ((f.from_si)(min), (f.from_si)(max));
+            message = format!(
+                "{message}. Valid: {} to {} {}.",
+                units::sig3(a.min(b)),
+                units::sig3(a.max(b)),
+                f.unit
+            );
+        } else {
+            message.push('.');
+        }
+        Some(message)
+    })
 }
 
 fn first_upper(s: &str) -> String {
@@ -160,12 +166,14 @@ pub fn OilPicker() -> impl IntoView {
     let choice = state.oil_choice;
     let msg_state = state.clone();
     let message = Memo::new(move |_| {
-        let plan = msg_state.plan.get();
-        plan.err()?
-            .errors
-            .iter()
-            .find(|e| e.field == "oil.composition")
-            .map(|e| first_upper(&e.message) + ".")
+        msg_state.plan.with(|plan| {
+            plan.as_ref()
+                .err()?
+                .errors
+                .iter()
+                .find(|e| e.field == "oil.composition")
+                .map(|e| first_upper(&e.message) + ".")
+        })
     });
     let opt_state = state.clone();
     view! {
@@ -191,15 +199,23 @@ pub fn OilPicker() -> impl IntoView {
 /// The message beside one line of the oil analysis.
 fn row_message(index: usize, state: &AppState) -> Option<String> {
     let key = format!("mix-{index}");
-    if let Some((_, e)) = state.scenario.get().text_errors.iter().find(|(k, _)| *k == key) {
+    let text_error =
+        state.scenario.with(|d| d.text_errors.iter().find(|(k, _)| *k == key).map(|(_, e)| e.clone()));
+    if let Some(e) = text_error {
         return Some(match e {
             TextError::Empty => "Enter the share.".to_string(),
             TextError::NotANumber => "Enter a number, such as 35.".to_string(),
         });
     }
-    let plan = state.plan.get();
     let prefix = format!("oil.composition.parts.{index}.");
-    plan.err()?.errors.iter().find(|e| e.field.starts_with(&prefix)).map(|e| first_upper(&e.message) + ".")
+    state.plan.with(|plan| {
+        plan.as_ref()
+            .err()?
+            .errors
+            .iter()
+            .find(|e| e.field.starts_with(&prefix))
+            .map(|e| first_upper(&e.message) + ".")
+    })
 }
 
 /// One line of the analysis: a compound and its share by mass.
