@@ -10,6 +10,7 @@ use components::cautions::Cautions;
 use components::inputs::{EquipmentInputs, EssentialInputs};
 use components::results::{Details, Headline, Warnings};
 use components::runlog::RunLog;
+use components::share::ScenarioText;
 use leptos::prelude::*;
 use state::AppState;
 
@@ -35,7 +36,7 @@ pub fn App() -> impl IntoView {
             <div class="columns">
                 <div class="col-in"><EssentialInputs /></div>
                 <div class="col-out"><Headline /><Warnings /></div>
-                <div class="col-in"><EquipmentInputs /><RunLog /></div>
+                <div class="col-in"><EquipmentInputs /><RunLog /><ScenarioText /></div>
                 <div class="col-out"><Details /></div>
             </div>
             <Cautions />

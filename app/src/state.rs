@@ -60,6 +60,8 @@ struct RunsRecord {
 /// The page's state, shared through context.
 #[derive(Clone)]
 pub struct AppState {
+    /// The scenario the form started from: holds the fields the form does not show.
+    base: RwSignal<Scenario>,
     /// One text per entry of [`FIELDS`], in the same order.
     pub texts: Vec<RwSignal<String>>,
     pub crop: RwSignal<Option<String>>,
@@ -171,41 +173,21 @@ impl AppState {
             (a, b) => a.or(b),
         };
         let runs = RwSignal::new(logged);
-        let texts: Vec<RwSignal<String>> = FIELDS.iter().map(|f| RwSignal::new(text_for(f, &base))).collect();
-        let pressure_mode = RwSignal::new(match base.site.barometer.as_ref().map(|b| b.reference) {
-            None => PressureMode::Altitude,
-            Some(BarometerReference::Station) => PressureMode::Station,
-            Some(BarometerReference::SeaLevel) => PressureMode::SeaLevel,
-        });
-        let crop = RwSignal::new(base.charge.crop.clone());
-        let oil_choice = RwSignal::new(match &base.oil.composition {
-            OilComposition::Compound { id } => id.clone(),
-            OilComposition::Mixture { .. } => MIXTURE_OIL.to_string(),
-            OilComposition::CropTypical => CROP_OIL.to_string(),
-        });
-        let rows: Vec<MixRow> = match &base.oil.composition {
-            OilComposition::Mixture { parts } => parts
-                .iter()
-                .enumerate()
-                .map(|(i, p)| MixRow {
-                    key: i as u32,
-                    compound: RwSignal::new(p.compound.clone()),
-                    percent: RwSignal::new(crate::units::plain(p.mass_percent)),
-                })
-                .collect(),
-            _ => Vec::new(),
-        };
-        let next_row_key = RwSignal::new(rows.len() as u32);
-        let mixture = RwSignal::new(rows);
-        let own_name =
-            RwSignal::new(base.custom_compounds.first().map(|c| c.name.clone()).unwrap_or_default());
+        let texts: Vec<RwSignal<String>> = FIELDS.iter().map(|_| RwSignal::new(String::new())).collect();
+        let base_signal = RwSignal::new(Scenario::default());
+        let pressure_mode = RwSignal::new(PressureMode::Altitude);
+        let crop = RwSignal::new(None);
+        let oil_choice = RwSignal::new(CROP_OIL.to_string());
+        let mixture = RwSignal::new(Vec::<MixRow>::new());
+        let next_row_key = RwSignal::new(0);
+        let own_name = RwSignal::new(String::new());
         let fuel = RwSignal::new(base.boiler.fuel);
         let metal = RwSignal::new(base.still.metal);
         let condenser_kind = RwSignal::new(base.condenser.kind);
 
         let field_texts = texts.clone();
         let scenario = Memo::new(move |_| {
-            let mut s = base.clone();
+            let mut s = base_signal.get();
             let mode = pressure_mode.get();
             let kind = condenser_kind.get();
             s.site.barometer = None;
@@ -265,7 +247,8 @@ impl AppState {
         Effect::new(move |_| scenario.with(|d| save(&d.scenario)));
         Effect::new(move |_| runs.with(|r| save_runs(r)));
 
-        AppState {
+        let state = AppState {
+            base: base_signal,
             texts,
             crop,
             oil_choice,
@@ -280,6 +263,61 @@ impl AppState {
             notice: RwSignal::new(notice),
             scenario,
             plan,
+        };
+        state.apply(&base);
+        state
+    }
+
+    /// Shows a scenario in the form: every field, choice and list, and the fields the form does
+    /// not show (kept in `base`). Used when the page starts and when a scenario is pasted in.
+    pub fn apply(&self, s: &Scenario) {
+        self.base.set(s.clone());
+        for (f, text) in FIELDS.iter().zip(&self.texts) {
+            text.set(text_for(f, s));
+        }
+        self.pressure_mode.set(match s.site.barometer.as_ref().map(|b| b.reference) {
+            None => PressureMode::Altitude,
+            Some(BarometerReference::Station) => PressureMode::Station,
+            Some(BarometerReference::SeaLevel) => PressureMode::SeaLevel,
+        });
+        self.crop.set(s.charge.crop.clone());
+        self.oil_choice.set(match &s.oil.composition {
+            OilComposition::Compound { id } => id.clone(),
+            OilComposition::Mixture { .. } => MIXTURE_OIL.to_string(),
+            OilComposition::CropTypical => CROP_OIL.to_string(),
+        });
+        let start = self.next_row_key.get_untracked();
+        let rows: Vec<MixRow> = match &s.oil.composition {
+            OilComposition::Mixture { parts } => parts
+                .iter()
+                .enumerate()
+                .map(|(i, p)| MixRow {
+                    key: start + i as u32,
+                    compound: RwSignal::new(p.compound.clone()),
+                    percent: RwSignal::new(crate::units::plain(p.mass_percent)),
+                })
+                .collect(),
+            _ => Vec::new(),
+        };
+        self.next_row_key.set(start + rows.len() as u32);
+        self.mixture.set(rows);
+        self.own_name.set(s.custom_compounds.first().map(|c| c.name.clone()).unwrap_or_default());
+        self.fuel.set(s.boiler.fuel);
+        self.metal.set(s.still.metal);
+        self.condenser_kind.set(s.condenser.kind);
+    }
+
+    /// Reads a pasted scenario (JSON, any saved version) and shows it; an error in words if it
+    /// cannot be read.
+    pub fn import(&self, text: &str) -> Result<(), String> {
+        match migrate(text) {
+            Some(s) => {
+                self.apply(&s);
+                Ok(())
+            }
+            None => {
+                Err("This is not a scenario the page can read: check that the whole text was copied.".into())
+            }
         }
     }
 

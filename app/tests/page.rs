@@ -222,3 +222,39 @@ async fn the_fuel_picker_changes_the_fuel_and_its_unit() {
     choose(&host, "#f-fuel", "natural_gas").await;
     assert!(text_of(&host, "[data-out=fuel]").ends_with(" m³"));
 }
+
+#[wasm_bindgen_test]
+async fn a_plan_copied_as_text_opens_again_and_bad_text_is_refused() {
+    clear_store();
+    let host = fresh_host();
+    let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    let details: web_sys::HtmlDetailsElement =
+        host.query_selector("details.share").unwrap().unwrap().unchecked_into();
+    details.set_open(true);
+    details.dispatch_event(&Event::new("toggle").unwrap()).unwrap();
+    leptos::task::tick().await;
+    let out: web_sys::HtmlTextAreaElement =
+        host.query_selector("#scenario-out").unwrap().unwrap().unchecked_into();
+    let copied = out.value().replace("\"plant_mass_kg\": 15.0", "\"plant_mass_kg\": 64.0");
+    assert!(copied.contains("64.0"), "the copied text holds the plant mass");
+    let paste: web_sys::HtmlTextAreaElement =
+        host.query_selector("#scenario-in").unwrap().unwrap().unchecked_into();
+    let load: HtmlElement = host.query_selector("#scenario-load").unwrap().unwrap().unchecked_into();
+    paste.set_value("{ this is not a plan");
+    paste.dispatch_event(&Event::new("input").unwrap()).unwrap();
+    leptos::task::tick().await;
+    load.click();
+    leptos::task::tick().await;
+    assert!(text_of(&host, "#scenario-in-error").contains("not a scenario"));
+    paste.set_value(&copied);
+    paste.dispatch_event(&Event::new("input").unwrap()).unwrap();
+    leptos::task::tick().await;
+    load.click();
+    leptos::task::tick().await;
+    leptos::task::tick().await;
+    assert!(text_of(&host, "details.share").contains("Opened"), "{}", text_of(&host, "details.share"));
+    let mass: HtmlInputElement = host.query_selector("#f-plant_mass").unwrap().unwrap().unchecked_into();
+    assert_eq!(mass.value(), "64");
+    assert_eq!(text_of(&host, "#scenario-in-error"), "");
+}

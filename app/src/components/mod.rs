@@ -4,3 +4,4 @@ pub mod cautions;
 pub mod inputs;
 pub mod results;
 pub mod runlog;
+pub mod share;
