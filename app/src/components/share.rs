@@ -32,7 +32,7 @@ pub fn ScenarioText() -> impl IntoView {
             <Show when=move || open.get()>
                 <div class="field">
                     <label for="scenario-out"><span class="label">"Copy this to keep or send the plan"</span></label>
-                    <textarea id="scenario-out" readonly rows="8" prop:value=current.clone()></textarea>
+                    <textarea id="scenario-out" readonly rows="8" prop:value=current></textarea>
                     <p class="hint">"The command-line tool reads the same text: stillroom plan scenario.json."</p>
                 </div>
                 <div class="field">
