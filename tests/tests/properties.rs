@@ -153,3 +153,16 @@ fn fast_steam_in_a_narrow_still_is_flagged_and_a_gentle_one_is_not() {
     let p = plan(&s).unwrap();
     assert!(!p.warnings.iter().any(|w| w.code == "steam_too_fast"));
 }
+
+#[test]
+fn tub_warming_rise_and_time_tell_the_same_story() {
+    // One heat balance, m c_p ΔT = Q t, read two ways: the tub reaches the allowed outlet
+    // temperature after `tub_lasts_s`, and warms by `tub_rise_over_run_k` over the whole run.
+    let s = Scenario::default();
+    let p = plan(&s).unwrap();
+    let lasts = p.condenser.tub_lasts_s.unwrap();
+    let rise = p.condenser.tub_rise_over_run_k.unwrap();
+    let allowed = s.condenser.cooling_water_outlet_c - s.condenser.cooling_water_inlet_c;
+    let implied = rise * lasts / p.run.time_after_first_drop_s;
+    assert!((implied - allowed).abs() < 1e-6 * allowed, "{implied} vs {allowed}");
+}

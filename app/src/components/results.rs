@@ -201,6 +201,8 @@ pub fn Details() -> impl IntoView {
                     (CondenserKind::CoilInTub, Some(t)) => format!("{} without a cold feed", units::duration(t)),
                     _ => "– (jacketed condenser)".to_string(),
                 }) />
+                <Row label="Tub warms over the run, without a feed" out="tub_rise" value=p(|p| p.condenser.tub_rise_over_run_k
+                    .map(|k| format!("{} K", units::fixed(k, 0))).unwrap_or_else(|| "– (jacketed condenser)".into())) />
                 <Row label="Cooling area needed" out="condenser_area" value=p(|p| units::area(p.condenser.area_m2)) />
                 <Row label="Tube length" out="tube_length" value=p(|p| units::length(p.condenser.tube_length_m)) />
                 <Row label="Water for the run, boiler and cooling" out="total_water" value=p(|p| units::volume(p.water_use.total_kg / 1000.0)) />

@@ -162,6 +162,8 @@ output! {
         pub cooling_water_per_run_kg: f64,
         /// Coil in a tub: how long the tub's own water lasts without a feed, s.
         pub tub_lasts_s: Option<f64>,
+        /// Coil in a tub: how much the tub would warm over the whole run without a feed, K.
+        pub tub_rise_over_run_k: Option<f64>,
         pub condensing_area_m2: f64,
         pub cooling_area_m2: f64,
         pub area_m2: f64,
@@ -748,6 +750,10 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
         cooling_water_flow_kg_per_s: cw_flow,
         cooling_water_per_run_kg,
         tub_lasts_s,
+        tub_rise_over_run_k: match c.kind {
+            CondenserKind::CoilInTub => Some(duty_w * time_after_first_drop_s / (c.tub_water_kg * cp_cw)),
+            CondenserKind::TubeInTube => None,
+        },
         condensing_area_m2,
         cooling_area_m2,
         area_m2,
