@@ -298,23 +298,8 @@ pub fn OwnCompound() -> impl IntoView {
 pub fn PressureInputs() -> impl IntoView {
     let state = expect_context::<AppState>();
     let mode = state.pressure_mode;
-    let option = move |value: PressureMode, label: &'static str, id: &'static str| {
-        view! {
-            <label class="choice" for=id>
-                <input type="radio" name="pressure-mode" id=id
-                    prop:checked=move || mode.get() == value
-                    on:change=move |_| mode.set(value) />
-                <span>{label}</span>
-            </label>
-        }
-    };
     view! {
-        <fieldset class="choices">
-            <legend>"Air pressure from"</legend>
-            {option(PressureMode::Altitude, "Altitude (standard air)", "p-altitude")}
-            {option(PressureMode::Station, "My barometer at the still", "p-station")}
-            {option(PressureMode::SeaLevel, "The weather report", "p-sea-level")}
-        </fieldset>
+        <RadioChoices legend="Air pressure from" name="pressure-mode" value=mode options=PRESSURE_MODES />
         <NumberInput key="altitude" />
         <Show when=move || mode.get() == PressureMode::Station>
             <NumberInput key="station_pressure" />
@@ -385,23 +370,48 @@ pub fn MetalPicker() -> impl IntoView {
 /// Picks the condenser's build.
 #[component]
 pub fn CondenserPicker() -> impl IntoView {
-    let state = expect_context::<AppState>();
-    let kind = state.condenser_kind;
+    let kind = expect_context::<AppState>().condenser_kind;
+    view! { <RadioChoices legend="Condenser" name="condenser" value=kind options=CONDENSERS /> }
+}
+
+/// How the site's pressure can be known: (value, element id, label).
+const PRESSURE_MODES: &[(PressureMode, &str, &str)] = &[
+    (PressureMode::Altitude, "p-altitude", "Altitude (standard air)"),
+    (PressureMode::Station, "p-station", "My barometer at the still"),
+    (PressureMode::SeaLevel, "p-sea-level", "The weather report"),
+];
+
+/// The condenser builds the page offers.
+const CONDENSERS: &[(CondenserKind, &str, &str)] = &[
+    (CondenserKind::CoilInTub, "c-tub", "Coil in a tub of water"),
+    (CondenserKind::TubeInTube, "c-jacket", "Tube in a water jacket"),
+];
+
+/// Large radio buttons over a fixed set of choices, bound to one signal.
+#[component]
+fn RadioChoices<T>(
+    legend: &'static str,
+    name: &'static str,
+    value: RwSignal<T>,
+    options: &'static [(T, &'static str, &'static str)],
+) -> impl IntoView
+where
+    T: Copy + PartialEq + Send + Sync + 'static,
+{
     view! {
         <fieldset class="choices">
-            <legend>"Condenser"</legend>
-            <label class="choice" for="c-tub">
-                <input type="radio" name="condenser" id="c-tub"
-                    prop:checked=move || kind.get() == CondenserKind::CoilInTub
-                    on:change=move |_| kind.set(CondenserKind::CoilInTub) />
-                <span>"Coil in a tub of water"</span>
-            </label>
-            <label class="choice" for="c-jacket">
-                <input type="radio" name="condenser" id="c-jacket"
-                    prop:checked=move || kind.get() == CondenserKind::TubeInTube
-                    on:change=move |_| kind.set(CondenserKind::TubeInTube) />
-                <span>"Tube in a water jacket"</span>
-            </label>
+            <legend>{legend}</legend>
+            {options.iter().map(|(choice, id, label)| {
+                let choice = *choice;
+                view! {
+                    <label class="choice" for=*id>
+                        <input type="radio" name=name id=*id
+                            prop:checked=move || value.get() == choice
+                            on:change=move |_| value.set(choice) />
+                        <span>{*label}</span>
+                    </label>
+                }
+            }).collect_view()}
         </fieldset>
     }
 }

@@ -4,7 +4,6 @@ use super::{PressureFrom, Resolved, component_for};
 use crate::atmosphere;
 use crate::crops;
 use crate::oil::Oil;
-use crate::recovery;
 use crate::scenario::*;
 use crate::water;
 
@@ -364,7 +363,6 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
         Some(kc) => (k * kc.low / kc.typical, k * kc.high / kc.typical),
         None => (k * 0.5, k * 1.5),
     };
-    debug_assert!(recovery::time_to_fraction_s(k, 0.5).is_finite());
     Ok(Resolved {
         crop,
         pressure_pa,
