@@ -1,0 +1,184 @@
+//! Stage 4, the time line: the boiler warming its water, steam warming the charge and the
+//! still (time to the first drop), the run to the target recovery, and the boiler's water.
+
+use super::equilibrium::Equilibrium;
+use super::site::Site;
+use super::{FieldError, Resolved, RunLimit, RunPlan, compute_error};
+use crate::scenario::Scenario;
+use crate::{heat, recovery, water};
+
+/// Points on the recovery curve the page draws.
+const RECOVERY_CURVE_POINTS: usize = 24;
+
+/// The time line as later stages need it.
+pub(super) struct Timeline {
+    pub plan: RunPlan,
+    pub wall_loss_w: f64,
+    pub warm_up_s: f64,
+    pub boiler_water_heating_j: f64,
+    pub charge_heating_j: f64,
+    pub still_heating_j: f64,
+    pub makeup_kg: f64,
+    pub makeup_water_heating_j: f64,
+    /// Oil recovered at the target, kg.
+    pub oil_recovered_kg: f64,
+    /// Superficial velocity of the steam rising through the charge, when the still's volume is known.
+    pub steam_velocity_m_per_s: Option<f64>,
+}
+
+/// Heat reaching the water and the steam it raises: from a measured steam rate, or from the
+/// burner's input times its efficiency. Q = ṁ h_fg.
+fn heat_source(s: &Scenario, r: &Resolved, h_fg: f64) -> (f64, f64) {
+    let useful_w = match s.boiler.steam_rate_kg_per_h {
+        Some(rate) => rate / 3600.0 * h_fg,
+        None => s.boiler.heat_input_w * r.efficiency,
+    };
+    (useful_w, useful_w / h_fg)
+}
+
+/// Heat lost through the still's wall at the co-distillation temperature (U A ΔT); zero when
+/// the still's volume is not given.
+fn wall_loss_w(s: &Scenario, inside_c: f64) -> f64 {
+    let area =
+        s.still.volume_m3.map(|v| heat::cylinder_surface_m2(v, s.still.height_to_diameter)).unwrap_or(0.0);
+    heat::wall_loss_w(s.still.wall_u_w_per_m2_k, area, inside_c, s.site.ambient_temperature_c)
+}
+
+/// Sensible heat to bring the charge and the still's metal to the co-distillation temperature.
+fn warm_up_heat_j(s: &Scenario, r: &Resolved, t_cd_c: f64) -> (f64, f64) {
+    let charge = heat::sensible_heat_j(
+        s.charge.plant_mass_kg,
+        r.charge_heat_capacity_j_per_kg_k,
+        r.charge_temperature_c,
+        t_cd_c,
+    )
+    .max(0.0);
+    let still = heat::sensible_heat_j(
+        s.still.metal_mass_kg,
+        s.still.metal.heat_capacity_j_per_kg_k(),
+        s.site.ambient_temperature_c,
+        t_cd_c,
+    )
+    .max(0.0);
+    (charge, still)
+}
+
+/// Run length after the first drop: the longer of the plant's release time (first order) and
+/// the time the steam needs to carry the least steam to the target.
+fn run_length(r: &Resolved, eq: &Equilibrium, distillate_rate: f64) -> (f64, RunLimit) {
+    let release_time_s = recovery::time_to_fraction_s(r.rate_constant_per_s, eq.target_fraction);
+    let steam_time_s = eq.plan.min_steam_to_target_kg / distillate_rate;
+    if steam_time_s > release_time_s {
+        (steam_time_s, RunLimit::Steam)
+    } else {
+        (release_time_s, RunLimit::Release)
+    }
+}
+
+/// Superficial steam velocity in an empty still of the given shape: u = ṁ / (ρ_v π d²/4).
+fn steam_velocity_m_per_s(s: &Scenario, eq: &Equilibrium, distillate_rate: f64) -> Option<f64> {
+    let v = s.still.volume_m3?;
+    let d = (4.0 * v / (std::f64::consts::PI * s.still.height_to_diameter)).cbrt();
+    let rho_v = water::saturated_vapour_density_kg_per_m3(eq.temperature_k).unwrap_or(0.6);
+    Some(distillate_rate / (rho_v * std::f64::consts::PI * d * d / 4.0))
+}
+
+fn recovery_curve(k_per_s: f64, run_s: f64) -> Vec<(f64, f64)> {
+    let end = run_s.max(1.0);
+    (0..=RECOVERY_CURVE_POINTS)
+        .map(|i| {
+            let t = end * i as f64 / RECOVERY_CURVE_POINTS as f64;
+            (t, recovery::recovered_fraction(k_per_s, t))
+        })
+        .collect()
+}
+
+/// The whole time line, lighting to the end of the run, with the boiler's water balance.
+pub(super) fn timeline(
+    s: &Scenario,
+    r: &Resolved,
+    site: &Site,
+    eq: &Equilibrium,
+    separator_water_density_kg_per_m3: f64,
+) -> Result<Timeline, Box<FieldError>> {
+    let p = site.pressure_pa;
+    let h_fg = site.latent_heat_j_per_kg;
+    let t_cd_c = eq.temperature_k - 273.15;
+    let feed_c = r.feed_temperature_c;
+    let h_feed = water::liquid_enthalpy_j_per_kg(feed_c + 273.15, p).map_err(|_| {
+        compute_error(
+            "boiler.feed_temperature_c",
+            feed_c,
+            "0.5 °C to below the boiling point",
+            "out of range",
+        )
+    })?;
+    let heat_per_kg_fill_j = site.saturated_liquid_enthalpy_j_per_kg - h_feed;
+    let (useful_w, steam_rate) = heat_source(s, r, h_fg);
+    let wall_loss_w = wall_loss_w(s, t_cd_c);
+    if wall_loss_w >= 0.9 * useful_w {
+        return Err(compute_error(
+            "boiler.heat_input_w",
+            s.boiler.heat_input_w,
+            &format!("enough to outrun the still's wall loss of about {:.0} W", wall_loss_w),
+            "the boiler is too small: almost all its heat is lost through the still wall",
+        ));
+    }
+    let distillate_rate = (useful_w - wall_loss_w) / h_fg;
+
+    let boiler_fill_kg = s.boiler.usable_water_kg;
+    let boiler_water_heating_j = boiler_fill_kg * heat_per_kg_fill_j;
+    let time_to_boil_s = boiler_water_heating_j / useful_w;
+    let (charge_heating_j, still_heating_j) = warm_up_heat_j(s, r, t_cd_c);
+    let startup_condensate_kg = heat::startup_condensate_kg(charge_heating_j + still_heating_j, h_fg);
+    let warm_up_s = (charge_heating_j + still_heating_j) / (useful_w - wall_loss_w);
+    let time_to_first_drop_s = time_to_boil_s + warm_up_s;
+
+    let (time_after_first_drop_s, limited_by) = run_length(r, eq, distillate_rate);
+    let distillate_steam_kg = distillate_rate * time_after_first_drop_s;
+    let evaporated_kg = startup_condensate_kg
+        + wall_loss_w * (warm_up_s + time_after_first_drop_s) / h_fg
+        + distillate_steam_kg;
+    let makeup_kg = (evaporated_kg - boiler_fill_kg).max(0.0);
+    let refills = if makeup_kg > 0.0 { (makeup_kg / boiler_fill_kg).ceil() as u32 } else { 0 };
+    let makeup_water_heating_j = makeup_kg * heat_per_kg_fill_j;
+    let boiler_dry_after_s =
+        if makeup_kg > 0.0 { Some(time_to_boil_s + boiler_fill_kg * h_fg / useful_w) } else { None };
+    let refill_reheat_s = makeup_water_heating_j / useful_w;
+    let total_time_s = time_to_first_drop_s + time_after_first_drop_s + refill_reheat_s;
+
+    let oil_recovered_kg = eq.oil_in_charge_kg * eq.target_fraction;
+    let plan = RunPlan {
+        rate_constant_per_min: r.rate_constant_per_s * 60.0,
+        steam_rate_kg_per_s: steam_rate,
+        distillate_steam_rate_kg_per_s: distillate_rate,
+        useful_heat_w: useful_w,
+        time_to_boil_s,
+        time_to_first_drop_s,
+        time_after_first_drop_s,
+        total_time_s,
+        limited_by,
+        startup_condensate_kg,
+        distillate_steam_kg,
+        hydrosol_volume_m3: distillate_steam_kg / separator_water_density_kg_per_m3,
+        steam_to_minimum_ratio: distillate_steam_kg / eq.plan.min_steam_to_target_kg,
+        water_to_oil_ratio: distillate_steam_kg / oil_recovered_kg,
+        specific_steam_rate_kg_per_h_per_kg: distillate_rate * 3600.0 / s.charge.plant_mass_kg,
+        boiler_water_evaporated_kg: evaporated_kg,
+        boiler_dry_after_s,
+        refills,
+        recovery_curve: recovery_curve(r.rate_constant_per_s, time_after_first_drop_s),
+    };
+    Ok(Timeline {
+        plan,
+        wall_loss_w,
+        warm_up_s,
+        boiler_water_heating_j,
+        charge_heating_j,
+        still_heating_j,
+        makeup_kg,
+        makeup_water_heating_j,
+        oil_recovered_kg,
+        steam_velocity_m_per_s: steam_velocity_m_per_s(s, eq, distillate_rate),
+    })
+}

@@ -1,0 +1,249 @@
+//! Stage 10, warnings: what the grower should know about this plan, read off the other stages.
+
+use super::equilibrium::Equilibrium;
+use super::layering::lighter_share;
+use super::timeline::Timeline;
+use super::{CondenserPlan, EnergyPlan, OilPlan, Resolved, RunLimit, SeparatorPlan, Warning, YieldPlan};
+use crate::compounds::Confidence;
+use crate::scenario::Scenario;
+
+/// Practice: total distillate water to oil of about 20-30:1 (Denny, for lavender: at most
+/// 20:1; lavandin caissons 19-33:1 by arithmetic on published fuel use).
+const WATER_TO_OIL_PRACTICE_MAX: f64 = 30.0;
+/// Steam rising through the charge: droplets of 100 µm and more fall back below about
+/// 0.2-0.3 m/s (terminal velocities computed with fluids 1.3.1); above, the steam carries
+/// water up and finds channels (judgement, no published limit).
+const STEAM_VELOCITY_LIMIT_M_PER_S: f64 = 0.25;
+/// Oil and water densities closer than this part slowly, kg/m³ (common practice, no source).
+const SLOW_PARTING_DENSITY_DIFFERENCE: f64 = 20.0;
+/// A charge this far over the still's usual packing is overpacked (common practice, no source).
+const OVERPACKED_RATIO: f64 = 1.25;
+
+/// Everything the warnings read.
+pub(super) struct Facts<'a> {
+    pub scenario: &'a Scenario,
+    pub resolved: &'a Resolved,
+    pub equilibrium: &'a Equilibrium,
+    pub oil: &'a OilPlan,
+    pub timeline: &'a Timeline,
+    pub energy: &'a EnergyPlan,
+    pub condenser: &'a CondenserPlan,
+    pub separator: &'a SeparatorPlan,
+    pub oil_yield: &'a YieldPlan,
+    pub still_capacity_kg: Option<f64>,
+}
+
+fn warn(list: &mut Vec<Warning>, code: &str, message: String) {
+    list.push(Warning { code: code.to_string(), message });
+}
+
+/// Every warning, in the order of the run: data, oil, time line, heat, condenser, separator,
+/// yield, capacity.
+pub(super) fn warnings(f: &Facts) -> Vec<Warning> {
+    let mut list = Vec::new();
+    data_warnings(f, &mut list);
+    density_warnings(f, &mut list);
+    run_warnings(f, &mut list);
+    heat_and_cooling_warnings(f, &mut list);
+    separator_and_yield_warnings(f, &mut list);
+    capacity_warnings(f, &mut list);
+    list
+}
+
+fn data_warnings(f: &Facts, list: &mut Vec<Warning>) {
+    let components = &f.equilibrium.components;
+    // Estimates get their own, stronger warning below.
+    for c in components.iter().filter(|c| !c.correlation_in_range && c.confidence != Confidence::Estimated) {
+        warn(
+            list,
+            "correlation_out_of_range",
+            format!(
+                "The vapour-pressure correlation for {} is used outside the temperature range it was fitted over; its share of the vapour is less certain.",
+                c.name
+            ),
+        );
+    }
+    if f.equilibrium.late_out_of_range && components.iter().all(|c| c.correlation_in_range) {
+        warn(
+            list,
+            "correlation_out_of_range",
+            "Late in the run the boiling temperature leaves a correlation's fitted range; the last cuts are less certain.".to_string(),
+        );
+    }
+    for c in components.iter().filter(|c| c.confidence == Confidence::Estimated) {
+        warn(
+            list,
+            "estimated_vapour_pressure",
+            format!("{} has no measured vapour-pressure correlation; an estimate (±30 %) is used.", c.name),
+        );
+    }
+}
+
+fn density_warnings(f: &Facts, list: &mut Vec<Warning>) {
+    let rho_w = f.separator.water_density_kg_per_m3;
+    let rho_oil = f.oil.density_kg_per_m3;
+    if f.oil.mixed_density {
+        let lighter = lighter_share(f.resolved, rho_w);
+        warn(
+            list,
+            "mixed_density_oil",
+            format!(
+                "About {:.0} % of this oil is lighter than water and {:.0} % heavier: part may float and part sink. Draw off at both the top and the bottom of the separator.",
+                lighter * 100.0,
+                (1.0 - lighter) * 100.0
+            ),
+        );
+    }
+    if (rho_oil - rho_w).abs() < SLOW_PARTING_DENSITY_DIFFERENCE {
+        warn(
+            list,
+            "small_density_difference",
+            format!(
+                "The oil ({:.0} kg/m³) is within {:.0} kg/m³ of the water ({:.0} kg/m³) at the separator: it will part slowly. A warmer or larger separator helps.",
+                rho_oil,
+                (rho_oil - rho_w).abs(),
+                rho_w
+            ),
+        );
+    }
+}
+
+fn run_warnings(f: &Facts, list: &mut Vec<Warning>) {
+    let run = &f.timeline.plan;
+    if run.limited_by == RunLimit::Steam {
+        warn(
+            list,
+            "steam_limited",
+            format!(
+                "This oil needs at least {:.1} kg of steam per kg to come over; the steam, not the plant, sets the run's length. More steam per hour shortens it.",
+                f.equilibrium.steam_to_target_kg_per_kg_oil
+            ),
+        );
+    }
+    if let Some(t_dry) = run.boiler_dry_after_s {
+        warn(
+            list,
+            "boiler_runs_dry",
+            format!(
+                "The run needs {:.0} kg of steam but the boiler holds {:.0} kg of usable water: top it up before {:.0} min after lighting ({} refill(s), {:.0} kg in all). Never let the heater run dry.",
+                run.boiler_water_evaporated_kg,
+                f.scenario.boiler.usable_water_kg,
+                t_dry / 60.0,
+                run.refills,
+                f.timeline.makeup_kg
+            ),
+        );
+    }
+    if let Some(crop) = f.resolved.crop
+        && run.specific_steam_rate_kg_per_h_per_kg < 0.5 * crop.steam_rate_kg_per_h_per_kg
+    {
+        warn(
+            list,
+            "low_steam_rate",
+            format!(
+                "{:.2} kg/h of steam per kg of charge is under half the {:.2} usual for {}: the run may take longer than planned.",
+                run.specific_steam_rate_kg_per_h_per_kg, crop.steam_rate_kg_per_h_per_kg, crop.name
+            ),
+        );
+    }
+    if run.water_to_oil_ratio > WATER_TO_OIL_PRACTICE_MAX {
+        warn(
+            list,
+            "water_to_oil_high",
+            format!(
+                "About {:.0} kg of distillate water per kg of oil: practice is 20-30. Less steam per hour (a smaller flame) or a shorter run would save fuel and water for little oil.",
+                run.water_to_oil_ratio
+            ),
+        );
+    }
+    if let Some(v) = f.timeline.steam_velocity_m_per_s
+        && v > STEAM_VELOCITY_LIMIT_M_PER_S
+    {
+        warn(
+            list,
+            "steam_too_fast",
+            format!(
+                "Steam rises through the charge at about {:.2} m/s: above about 0.25 m/s it lifts water droplets and cuts channels, leaving oil behind. Use less heat or a wider still.",
+                v
+            ),
+        );
+    }
+}
+
+fn heat_and_cooling_warnings(f: &Facts, list: &mut Vec<Warning>) {
+    let e = f.energy;
+    if e.wall_loss_j > 0.2 * e.useful_heat_j {
+        warn(
+            list,
+            "wall_losses",
+            format!(
+                "{:.0} % of the heat is lost through the still's wall. Lagging it (50 mm of mineral wool cuts the loss about fourteen-fold, U 10 -> 0.7 W/(m² K)) saves fuel and time.",
+                100.0 * e.wall_loss_j / e.useful_heat_j
+            ),
+        );
+    }
+    let c = f.condenser;
+    if let Some(t) = c.tub_lasts_s
+        && t < f.timeline.plan.time_after_first_drop_s
+    {
+        warn(
+            list,
+            "tub_warms_up",
+            format!(
+                "The tub's water reaches {:.0} °C after about {:.0} min: feed it cold water at the bottom, about {:.1} L/min, or change it during the run.",
+                f.scenario.condenser.cooling_water_outlet_c,
+                t / 60.0,
+                c.cooling_water_flow_kg_per_s * 60.0
+            ),
+        );
+    }
+}
+
+fn separator_and_yield_warnings(f: &Facts, list: &mut Vec<Warning>) {
+    let sp = f.separator;
+    if sp.droplet_reynolds_number > 1.0 {
+        warn(
+            list,
+            "stokes_limit",
+            format!(
+                "The design droplet's Reynolds number is {:.1}, above Stokes' range (< 1): it moves slower than computed, so allow more area.",
+                sp.droplet_reynolds_number
+            ),
+        );
+    }
+    if sp.plan_area_m2.is_none() {
+        warn(
+            list,
+            "no_gravity_separation",
+            "The oil is as dense as the water at the separator: it will not part by gravity. Change the separator temperature or add salt to the water (common practice).".to_string(),
+        );
+    }
+    let y = f.oil_yield;
+    if y.cohobation_advised {
+        warn(
+            list,
+            "cohobation",
+            format!(
+                "About {:.0} % of the oil ({:.0} g) stays dissolved in the hydrosol: return the waters to the still (cohobation) or redistil them.",
+                y.dissolved_share * 100.0,
+                y.dissolved_in_hydrosol_kg * 1000.0
+            ),
+        );
+    }
+}
+
+fn capacity_warnings(f: &Facts, list: &mut Vec<Warning>) {
+    let mass = f.scenario.charge.plant_mass_kg;
+    if let Some(cap) = f.still_capacity_kg
+        && mass > OVERPACKED_RATIO * cap
+    {
+        warn(
+            list,
+            "overpacked",
+            format!(
+                "{:.0} kg is well over the {:.0} kg this still holds at a usual packing: tight packing makes steam channel and leaves oil behind.",
+                mass, cap
+            ),
+        );
+    }
+}
