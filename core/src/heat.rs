@@ -82,13 +82,11 @@ pub struct FuelData {
     pub heating_value_j_per_unit: f64,
     /// The sales unit: "kg", "m³", "kWh".
     pub unit: &'static str,
-    /// A typical share of the heating value that ends up in the boiler water.
-    pub typical_efficiency: f64,
     pub source: &'static str,
 }
 
 impl Fuel {
-    /// Heating value, unit and typical efficiency of the fuel, with sources.
+    /// Heating value and sales unit of the fuel, with sources.
     ///
     /// ```
     /// use stillroom_core::heat::Fuel;
@@ -99,37 +97,148 @@ impl Fuel {
             Fuel::Propane => FuelData {
                 heating_value_j_per_unit: 46.34e6,
                 unit: "kg",
-                typical_efficiency: 0.45,
-                source: "LHV 46.34 MJ/kg (computed with chemicals 1.5.2 from the heat of \
-                         formation); efficiency 0.45 for a burner under a kettle, range 0.35-0.58 \
-                         (Khan & Saxena, IJERT 2(7) 2013: max 58 %)",
+                source: "LHV 46.34 MJ/kg (computed with chemicals 1.5.2 from the heat of formation)",
             },
             Fuel::NaturalGas => FuelData {
                 heating_value_j_per_unit: 36.6e6,
                 unit: "m³",
-                typical_efficiency: 0.75,
                 source: "LHV 983 Btu/ft³ = 36.6 MJ/m³ at 0 °C, 1 atm (PNNL Hydrogen Analysis \
-                         Resource Center, GREET table); efficiency 0.75 for a packaged boiler, \
-                         range 0.6-0.85 (US DOE Steam Tip Sheet #4, 2006)",
+                         Resource Center, GREET table)",
             },
             Fuel::Firewood => FuelData {
                 heating_value_j_per_unit: 16.0e6,
                 unit: "kg",
-                typical_efficiency: 0.15,
-                source: "16 MJ/kg dry wood (world-nuclear.org, Heat values of various fuels); \
-                         efficiency 0.15 for an open firebox, range 0.10-0.25 (Ikpambese et al., \
-                         IJERST 3(2) 2014, water-boiling tests 9.6-14.6 %)",
+                source: "16 MJ/kg dry wood (world-nuclear.org, Heat values of various fuels)",
             },
-            Fuel::Electricity => FuelData {
-                heating_value_j_per_unit: 3.6e6,
-                unit: "kWh",
+            Fuel::Electricity => {
+                FuelData { heating_value_j_per_unit: 3.6e6, unit: "kWh", source: "3.6 MJ/kWh by definition" }
+            }
+        }
+    }
+
+    /// The appliance a fuel usually fires when the scenario names none: gas under an open
+    /// burner, wood in a firebox, electricity through an immersion element.
+    ///
+    /// ```
+    /// use stillroom_core::heat::{Appliance, Fuel};
+    /// assert_eq!(Fuel::Firewood.usual_appliance(), Appliance::WoodFirebox);
+    /// ```
+    pub fn usual_appliance(self) -> Appliance {
+        match self {
+            Fuel::Propane | Fuel::NaturalGas => Appliance::OpenBurner,
+            Fuel::Firewood => Appliance::WoodFirebox,
+            Fuel::Electricity => Appliance::ImmersionElement,
+        }
+    }
+
+    /// Whether the fuel burns gas in air, so that its burner loses output with altitude.
+    pub fn is_gas(self) -> bool {
+        matches!(self, Fuel::Propane | Fuel::NaturalGas)
+    }
+}
+
+/// What turns the fuel's heat into boiling water. The efficiency belongs to the appliance,
+/// not to the fuel: the same propane heats a kettle at about 45 % and a packaged boiler at 75 %.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+#[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
+#[serde(rename_all = "snake_case")]
+pub enum Appliance {
+    /// A gas ring or burner under the boiler's bottom.
+    OpenBurner,
+    /// A packaged or jacketed boiler with its own firebox and flue (gas, oil or wood).
+    JacketedBoiler,
+    /// An electric element in the boiler water.
+    ImmersionElement,
+    /// A wood fire in a box or hearth under the boiler.
+    WoodFirebox,
+}
+
+/// A typical appliance efficiency, its range, and where it comes from.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct ApplianceData {
+    pub typical_efficiency: f64,
+    pub low_efficiency: f64,
+    pub high_efficiency: f64,
+    pub source: &'static str,
+}
+
+impl Appliance {
+    /// Share of the fuel's heat that reaches the boiler water, with its range and source.
+    ///
+    /// ```
+    /// use stillroom_core::heat::Appliance;
+    /// let d = Appliance::OpenBurner.data();
+    /// assert!(d.low_efficiency < d.typical_efficiency && d.typical_efficiency < d.high_efficiency);
+    /// ```
+    pub fn data(self) -> ApplianceData {
+        match self {
+            Appliance::OpenBurner => ApplianceData {
+                typical_efficiency: 0.45,
+                low_efficiency: 0.35,
+                high_efficiency: 0.58,
+                source: "LPG burner under a pot, at most 58 % (Khan & Saxena, IJERT 2(7) 2013); \
+                         0.45 typical for a kettle-type still",
+            },
+            Appliance::JacketedBoiler => ApplianceData {
+                typical_efficiency: 0.75,
+                low_efficiency: 0.60,
+                high_efficiency: 0.85,
+                source: "combustion 80.8-85.4 % (US DOE ITP Steam Tip Sheet #4, 2006); overall \
+                         42.5-76.6 % after radiation and blowdown (ASHRAE Journal, Sept 1994)",
+            },
+            Appliance::ImmersionElement => ApplianceData {
                 typical_efficiency: 0.95,
-                source: "3.6 MJ/kWh by definition; an immersion element turns about all of its \
-                         input into heat, 0.95 allows for wiring and vessel surfaces \
-                         (common practice, no source)",
+                low_efficiency: 0.90,
+                high_efficiency: 0.99,
+                source: "an element in the water turns about all its input into heat; 0.95 allows \
+                         for wiring and exposed surfaces (common practice, no source)",
+            },
+            Appliance::WoodFirebox => ApplianceData {
+                typical_efficiency: 0.15,
+                low_efficiency: 0.10,
+                high_efficiency: 0.25,
+                source: "open fires and wood stoves in water-boiling tests 9.6-14.6 % (Ikpambese \
+                         et al., IJERST 3(2) 2014); up to 25 % in a closed box (from memory)",
             },
         }
     }
+
+    /// Whether this appliance can burn or use the fuel.
+    ///
+    /// ```
+    /// use stillroom_core::heat::{Appliance, Fuel};
+    /// assert!(Appliance::JacketedBoiler.accepts(Fuel::Firewood));
+    /// assert!(!Appliance::ImmersionElement.accepts(Fuel::Propane));
+    /// ```
+    pub fn accepts(self, fuel: Fuel) -> bool {
+        match self {
+            Appliance::OpenBurner => fuel.is_gas(),
+            Appliance::JacketedBoiler => fuel != Fuel::Electricity,
+            Appliance::ImmersionElement => fuel == Fuel::Electricity,
+            Appliance::WoodFirebox => fuel == Fuel::Firewood,
+        }
+    }
+}
+
+/// Share of its sea-level rating a gas appliance delivers at altitude.
+///
+/// f = 1 up to 2000 ft (609.6 m); above, 1 − 0.04 · z/1000 ft, i.e. 4 % for each 1000 ft above
+/// sea level. The thinner air burns less gas through the same orifice. Source: the US National
+/// Fuel Gas Code (NFPA 54 / ANSI Z223.1), high-altitude derating rule (wording from memory).
+/// Valid for natural-draft and fan-less burners from sea level to about 3000 m; beyond, the
+/// rule is extrapolated. Not for electric elements or wood fires.
+///
+/// ```
+/// use stillroom_core::heat::gas_altitude_derate;
+/// assert_eq!(gas_altitude_derate(500.0), 1.0);
+/// // 1500 m = 4921 ft: 19.7 % less.
+/// assert!((gas_altitude_derate(1500.0) - 0.8031).abs() < 1e-3);
+/// ```
+pub fn gas_altitude_derate(altitude_m: f64) -> f64 {
+    /// International foot, m (NIST SP 811, B.8).
+    const FOOT_M: f64 = 0.3048;
+    let feet = altitude_m / FOOT_M;
+    if feet <= 2000.0 { 1.0 } else { (1.0 - 0.04 * feet / 1000.0).max(0.0) }
 }
 
 /// Fuel needed to deliver a useful heat, in the fuel's sales unit: Q / (η · HV).

@@ -95,3 +95,56 @@ pub fn practical_cylinder_m(volume_m3: f64, min_area_m2: f64, max_height_to_diam
     let d = by_area.max(by_shape);
     (d, 4.0 * volume_m3 / (std::f64::consts::PI * d * d))
 }
+
+/// Height of the oil-water interface in a receiver with a top overflow and a gooseneck, m.
+///
+/// The lighter liquid leaves over the top outlet at height h_top; the heavier liquid leaves from
+/// the bottom through a gooseneck whose overflow stands at h_neck. The pressure at the bottom is
+/// the same through the vessel and through the gooseneck:
+/// ρ_light g (h_top − h_i) + ρ_heavy g h_i = ρ_heavy g h_neck, so
+/// h_i = (ρ_heavy h_neck − ρ_light h_top) / (ρ_heavy − ρ_light).
+///
+/// Source: hydrostatics (Pascal's law); the same balance sets the interface of a continuous
+/// gravity decanter (Perry's Chemical Engineers' Handbook, decanters, from memory). Valid at rest
+/// and for slow outflow (friction in the gooseneck neglected), ρ_heavy > ρ_light; a result
+/// outside 0..h_top means one liquid leaves through the other's outlet.
+///
+/// ```
+/// use stillroom_core::separator::interface_height_m;
+/// // Oil 880 over water 995, top outlet 300 mm, water gooseneck at 295 mm:
+/// // h_i = (995·0.295 − 880·0.300)/115 = 0.2567 m, an oil layer of 43 mm.
+/// let h = interface_height_m(880.0, 995.0, 0.300, 0.295);
+/// assert!((h - 0.256739).abs() < 1e-5);
+/// ```
+pub fn interface_height_m(light_kg_per_m3: f64, heavy_kg_per_m3: f64, top_outlet_m: f64, neck_m: f64) -> f64 {
+    (heavy_kg_per_m3 * neck_m - light_kg_per_m3 * top_outlet_m) / (heavy_kg_per_m3 - light_kg_per_m3)
+}
+
+/// Gooseneck height that holds the interface at a chosen height, m: the inverse of
+/// [`interface_height_m`], h_neck = h_i + (ρ_light/ρ_heavy)(h_top − h_i).
+///
+/// ```
+/// use stillroom_core::separator::{gooseneck_height_m, interface_height_m};
+/// let neck = gooseneck_height_m(880.0, 995.0, 0.300, 0.240);
+/// assert!((interface_height_m(880.0, 995.0, 0.300, neck) - 0.240).abs() < 1e-12);
+/// ```
+pub fn gooseneck_height_m(
+    light_kg_per_m3: f64,
+    heavy_kg_per_m3: f64,
+    top_outlet_m: f64,
+    interface_m: f64,
+) -> f64 {
+    interface_m + light_kg_per_m3 / heavy_kg_per_m3 * (top_outlet_m - interface_m)
+}
+
+/// How far the interface moves per unit of gooseneck height: ∂h_i/∂h_neck = ρ_heavy/(ρ_heavy − ρ_light).
+/// Large when the densities are close: then the gooseneck must be set to the millimetre.
+///
+/// ```
+/// use stillroom_core::separator::interface_sensitivity;
+/// // Oil 980 over water 992: the interface moves 83 mm per mm of gooseneck.
+/// assert!((interface_sensitivity(980.0, 992.0) - 82.67).abs() < 0.01);
+/// ```
+pub fn interface_sensitivity(light_kg_per_m3: f64, heavy_kg_per_m3: f64) -> f64 {
+    heavy_kg_per_m3 / (heavy_kg_per_m3 - light_kg_per_m3)
+}

@@ -1,8 +1,17 @@
-//! Stage 3, layering: the water at the separator's temperature and which way the oil goes.
+//! Stage 3, layering: the water at the separator's temperature, the oil's density there (whole
+//! and cut by cut, following temperature), and which way the oil goes.
 
 use super::equilibrium::Equilibrium;
 use super::{FieldError, OilLayer, OilPlan, Resolved, compute_error};
+use crate::oil::{ideal_density_kg_per_m3, oil_density_at_kg_per_m3};
 use crate::water;
+
+/// How near the separator temperature a density crossing counts as a risk, K. A receiver drifts
+/// by this much over a run and between day and night (common practice, no source).
+const INVERSION_WINDOW_K: f64 = 10.0;
+/// Coldest and warmest separator temperatures searched for a crossing, °C.
+const SEARCH_FROM_C: f64 = 1.0;
+const SEARCH_TO_C: f64 = 99.0;
 
 /// Water at the separator, as the separator and yield stages need it.
 pub(super) struct SeparatorWater {
@@ -10,39 +19,80 @@ pub(super) struct SeparatorWater {
     pub viscosity_pa_s: f64,
 }
 
-/// Share of the oil (by mass) made of compounds lighter than the water.
-pub(super) fn lighter_share(r: &Resolved, water_density_kg_per_m3: f64) -> f64 {
-    r.oil
-        .components
-        .iter()
-        .zip(r.oil.mass_fractions())
-        .filter(|(c, _)| c.liquid_density_kg_per_m3 < water_density_kg_per_m3)
-        .map(|(_, w)| w)
-        .sum()
+/// Oil density at `t_c` scaled by a cut's ideal density relative to the whole oil's.
+fn density_at(r: &Resolved, relative: f64, t_c: f64) -> f64 {
+    oil_density_at_kg_per_m3(r.oil_density_kg_per_m3, t_c) * relative
+}
+
+/// Water's density on a 1 K grid from 1 °C to the boiling point (or 99 °C): computed once,
+/// shared by every crossing search.
+fn water_density_grid(pressure_pa: f64, boiling_c: f64) -> Vec<(f64, f64)> {
+    let top = (boiling_c - 0.5).min(SEARCH_TO_C);
+    let mut grid = Vec::new();
+    let mut t = SEARCH_FROM_C;
+    while t <= top {
+        if let Ok(rho) = water::liquid_density_kg_per_m3(t + 273.15, pressure_pa) {
+            grid.push((t, rho));
+        }
+        t += 1.0;
+    }
+    grid
+}
+
+/// The temperature nearest `near_c` at which the oil (scaled by `relative`) is as dense as the
+/// water, if any on the grid; linear between grid points (both densities are smooth and
+/// nearly linear over 1 K, so the error is far below a kelvin).
+fn crossing_c(r: &Resolved, relative: f64, grid: &[(f64, f64)], near_c: f64) -> Option<f64> {
+    let gap = |&(t, rho_w): &(f64, f64)| density_at(r, relative, t) - rho_w;
+    grid.windows(2)
+        .filter_map(|w| {
+            let (g0, g1) = (gap(&w[0]), gap(&w[1]));
+            (g0 * g1 <= 0.0 && g0 != g1).then(|| w[0].0 + (w[1].0 - w[0].0) * g0 / (g0 - g1))
+        })
+        .min_by(|a, b| (a - near_c).abs().total_cmp(&(b - near_c).abs()))
 }
 
 /// Liquid water at the distillate temperature (IAPWS-IF97 density, IAPWS 2008 viscosity)
-/// against the oil's density: top or bottom outlet.
+/// against the oil's density at that temperature: top or bottom outlet, cut by cut, and whether
+/// the oil's density crosses the water's within 10 K of the separator temperature.
 pub(super) fn layering(
     r: &Resolved,
     eq: &Equilibrium,
     pressure_pa: f64,
+    boiling_c: f64,
+    t_c: f64,
 ) -> Result<(OilPlan, SeparatorWater), Box<FieldError>> {
-    let t_k = r.distillate_outlet_c + 273.15;
     let out_of_range = |_| {
-        compute_error(
-            "condenser.distillate_outlet_c",
-            r.distillate_outlet_c,
-            "5 °C to below the boiling point",
-            "out of range",
-        )
+        compute_error("condenser.distillate_outlet_c", t_c, "5 °C to below the boiling point", "out of range")
     };
-    let rho_w = water::liquid_density_kg_per_m3(t_k, pressure_pa).map_err(out_of_range)?;
-    let mu_w = water::liquid_viscosity_pa_s(t_k, pressure_pa).map_err(out_of_range)?;
-    let rho_oil = r.oil_density_kg_per_m3;
+    let rho_w = water::liquid_density_kg_per_m3(t_c + 273.15, pressure_pa).map_err(out_of_range)?;
+    let mu_w = water::liquid_viscosity_pa_s(t_c + 273.15, pressure_pa).map_err(out_of_range)?;
+    let rho_oil = density_at(r, 1.0, t_c);
     let collects_at = if rho_oil < rho_w { OilLayer::Top } else { OilLayer::Bottom };
-    let mixed_density = (0.05..=0.95).contains(&lighter_share(r, rho_w));
-    let plan =
-        OilPlan { components: eq.components.clone(), density_kg_per_m3: rho_oil, collects_at, mixed_density };
+    let whole = r.oil.ideal_density_kg_per_m3();
+    let relatives: Vec<f64> = eq
+        .plan
+        .cuts
+        .iter()
+        .map(|c| ideal_density_kg_per_m3(&r.oil.components, &c.mass_fractions) / whole)
+        .collect();
+    let cut_densities: Vec<f64> = relatives.iter().map(|q| density_at(r, *q, t_c)).collect();
+    let floats = cut_densities.iter().any(|d| *d < rho_w);
+    let sinks = cut_densities.iter().any(|d| *d >= rho_w);
+    let grid = water_density_grid(pressure_pa, boiling_c);
+    let inversion_temperature_c = crossing_c(r, 1.0, &grid, t_c);
+    let near = |t: f64| (t - t_c).abs() <= INVERSION_WINDOW_K;
+    let inversion_risk = inversion_temperature_c.is_some_and(near)
+        || relatives.iter().any(|q| crossing_c(r, *q, &grid, t_c).is_some_and(near));
+    let plan = OilPlan {
+        components: eq.components.clone(),
+        density_kg_per_m3: r.oil_density_kg_per_m3,
+        density_at_separator_kg_per_m3: rho_oil,
+        cut_densities_at_separator_kg_per_m3: cut_densities,
+        collects_at,
+        mixed_density: floats && sinks,
+        inversion_temperature_c,
+        inversion_risk,
+    };
     Ok((plan, SeparatorWater { density_kg_per_m3: rho_w, viscosity_pa_s: mu_w }))
 }

@@ -62,11 +62,21 @@ output! {
 
     pub struct OilPlan {
         pub components: Vec<ComponentShare>,
+        /// Density of the whole oil at 20 °C.
         pub density_kg_per_m3: f64,
-        /// Where the oil gathers in the separator.
+        /// Density of the whole oil at the separator's temperature.
+        pub density_at_separator_kg_per_m3: f64,
+        /// Density of each distillate cut's oil at the separator's temperature, in cut order.
+        pub cut_densities_at_separator_kg_per_m3: Vec<f64>,
+        /// Where the oil gathers in the separator, at its temperature.
         pub collects_at: OilLayer,
-        /// Whether the oil holds both lighter- and heavier-than-water compounds (≥ 5 % each).
+        /// Whether some cuts float and others sink at the separator's temperature.
         pub mixed_density: bool,
+        /// Temperature at which the whole oil is as dense as the water (nearest the separator's),
+        /// if any between 1 °C and the boiling point.
+        pub inversion_temperature_c: Option<f64>,
+        /// Whether the oil's or a cut's density crosses the water's within 10 K of the separator.
+        pub inversion_risk: bool,
     }
 
     pub struct ComponentShare {
@@ -166,13 +176,23 @@ output! {
         pub kind: CondenserKind,
         pub duty_w: f64,
         pub duty_per_kg_steam_j: f64,
+        /// Distillate temperature leaving the condenser: the one asked for, or warmer when a
+        /// tub's water cannot bring it that low.
         pub distillate_outlet_c: f64,
+        pub distillate_outlet_requested_c: f64,
+        /// Cooling water flow: through a jacket all run; into a tub only once it has reached
+        /// its warmest allowed temperature (0 when it never does).
         pub cooling_water_flow_kg_per_s: f64,
+        /// Cooling water over the run: the jacket's flow, or the tub's fill plus its feed.
         pub cooling_water_per_run_kg: f64,
         /// Coil in a tub: how long the tub's own water lasts without a feed, s.
         pub tub_lasts_s: Option<f64>,
         /// Coil in a tub: how much the tub would warm over the whole run without a feed, K.
         pub tub_rise_over_run_k: Option<f64>,
+        /// Coil in a tub: its temperature at the end of the run, °C.
+        pub tub_end_c: Option<f64>,
+        /// Coil in a tub: when the feed must start, s after the first drop, if it must.
+        pub tub_feed_from_s: Option<f64>,
         pub condensing_area_m2: f64,
         pub cooling_area_m2: f64,
         pub area_m2: f64,
@@ -195,6 +215,17 @@ output! {
         pub volume_m3: f64,
         pub height_m: Option<f64>,
         pub oil_outlet: OilLayer,
+        /// Overflow of the upper liquid, above the vessel's bottom: the liquid height.
+        pub top_outlet_height_m: Option<f64>,
+        /// Overflow of the gooseneck that draws the lower liquid from the bottom.
+        pub gooseneck_height_m: Option<f64>,
+        /// Where the oil-water interface settles with these outlets (oil layer a fifth of the height).
+        pub interface_height_m: Option<f64>,
+        /// How many mm the interface moves per mm of gooseneck height.
+        pub interface_per_gooseneck: Option<f64>,
+        /// Interface height for the cut that puts it lowest and highest, with the same outlets.
+        pub interface_low_m: Option<f64>,
+        pub interface_high_m: Option<f64>,
     }
 
     pub struct YieldPlan {
@@ -327,12 +358,17 @@ fn compute_error(field: &str, value: f64, valid: &str, message: &str) -> Box<Fie
 fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
     let site = site::site(r)?;
     let eq = equilibrium::equilibrium(s, r, &site)?;
-    let (oil, separator_water) = layering::layering(r, &eq, site.pressure_pa)?;
-    let tl = timeline::timeline(s, r, &site, &eq, separator_water.density_kg_per_m3)?;
+    let mut tl = timeline::timeline(s, r, &site, &eq)?;
     let energy = energy::energy(s, r, site.latent_heat_j_per_kg, &tl);
     let distillate_rate = tl.plan.distillate_steam_rate_kg_per_s;
-    let condenser = condenser::condenser(s, r, &site, distillate_rate, tl.plan.time_after_first_drop_s)?;
-    let separator = separator::separator(s, r, &separator_water, distillate_rate, oil.collects_at);
+    let cond = condenser::condenser(s, r, &site, distillate_rate, tl.plan.time_after_first_drop_s)?;
+    let t_sep_c = cond.distillate_outlet_c;
+    let condenser = cond.plan;
+    let (oil, separator_water) =
+        layering::layering(r, &eq, site.pressure_pa, site.plan.water_boiling_point_c, t_sep_c)?;
+    // The hydrosol's volume waits for the separator's temperature, which the condenser sets.
+    tl.plan.hydrosol_volume_m3 = tl.plan.distillate_steam_kg / separator_water.density_kg_per_m3;
+    let separator = separator::separator(s, &separator_water, distillate_rate, &oil, t_sep_c);
     let yield_estimate = oil_yield::oil_yield(s, r, &eq, &tl);
     let water_use = oil_yield::water_use(s, &tl, condenser.cooling_water_per_run_kg);
     let still_capacity_kg = season::still_capacity_kg(s, r);

@@ -27,11 +27,13 @@ pub(super) struct Timeline {
 }
 
 /// Heat reaching the water and the steam it raises: from a measured steam rate, or from the
-/// burner's input times its efficiency. Q = ṁ h_fg.
+/// burner's input (gas derated for altitude, [`heat::gas_altitude_derate`]) times the
+/// appliance's efficiency. Q = ṁ h_fg.
 fn heat_source(s: &Scenario, r: &Resolved, h_fg: f64) -> (f64, f64) {
+    let derate = if s.boiler.fuel.is_gas() { heat::gas_altitude_derate(s.site.altitude_m) } else { 1.0 };
     let useful_w = match s.boiler.steam_rate_kg_per_h {
         Some(rate) => rate / 3600.0 * h_fg,
-        None => s.boiler.heat_input_w * r.efficiency,
+        None => s.boiler.heat_input_w * derate * r.efficiency,
     };
     (useful_w, useful_w / h_fg)
 }
@@ -99,7 +101,6 @@ pub(super) fn timeline(
     r: &Resolved,
     site: &Site,
     eq: &Equilibrium,
-    separator_water_density_kg_per_m3: f64,
 ) -> Result<Timeline, Box<FieldError>> {
     let p = site.pressure_pa;
     let h_fg = site.latent_heat_j_per_kg;
@@ -160,7 +161,8 @@ pub(super) fn timeline(
         limited_by,
         startup_condensate_kg,
         distillate_steam_kg,
-        hydrosol_volume_m3: distillate_steam_kg / separator_water_density_kg_per_m3,
+        // Set once the separator's temperature is known.
+        hydrosol_volume_m3: f64::NAN,
         steam_to_minimum_ratio: distillate_steam_kg / eq.plan.min_steam_to_target_kg,
         water_to_oil_ratio: distillate_steam_kg / oil_recovered_kg,
         specific_steam_rate_kg_per_h_per_kg: distillate_rate * 3600.0 / s.charge.plant_mass_kg,

@@ -225,7 +225,16 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
     ck.range("still.wall_u_w_per_m2_k", s.still.wall_u_w_per_m2_k, 0.0, 50.0, "W/(m² K)");
 
     // Boiler.
-    let efficiency = s.boiler.efficiency.unwrap_or(s.boiler.fuel.data().typical_efficiency);
+    let appliance = s.boiler.appliance.unwrap_or(s.boiler.fuel.usual_appliance());
+    if !appliance.accepts(s.boiler.fuel) {
+        ck.push(
+            "boiler.appliance",
+            format!("{appliance:?}"),
+            "an appliance that uses this fuel".into(),
+            "this appliance cannot use the chosen fuel".into(),
+        );
+    }
+    let efficiency = s.boiler.efficiency.unwrap_or(appliance.data().typical_efficiency);
     match s.boiler.steam_rate_kg_per_h {
         Some(rate) => {
             ck.positive("boiler.steam_rate_kg_per_h", rate, 20_000.0, "kg/h");

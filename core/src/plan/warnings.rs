@@ -1,9 +1,10 @@
 //! Stage 10, warnings: what the grower should know about this plan, read off the other stages.
 
 use super::equilibrium::Equilibrium;
-use super::layering::lighter_share;
 use super::timeline::Timeline;
-use super::{CondenserPlan, EnergyPlan, OilPlan, Resolved, RunLimit, SeparatorPlan, Warning, YieldPlan};
+use super::{
+    CondenserPlan, EnergyPlan, OilLayer, OilPlan, Resolved, RunLimit, SeparatorPlan, Warning, YieldPlan,
+};
 use crate::compounds::Confidence;
 use crate::scenario::Scenario;
 
@@ -16,6 +17,9 @@ const WATER_TO_OIL_PRACTICE_MAX: f64 = 30.0;
 const STEAM_VELOCITY_LIMIT_M_PER_S: f64 = 0.25;
 /// Oil and water densities closer than this part slowly, kg/m³ (common practice, no source).
 const SLOW_PARTING_DENSITY_DIFFERENCE: f64 = 20.0;
+/// Interface moves more than this many mm per mm of gooseneck: the outlets need care
+/// (judgement, common practice, no source).
+const TOUCHY_INTERFACE: f64 = 20.0;
 /// A charge this far over the still's usual packing is overpacked (common practice, no source).
 const OVERPACKED_RATIO: f64 = 1.25;
 
@@ -79,30 +83,53 @@ fn data_warnings(f: &Facts, list: &mut Vec<Warning>) {
     }
 }
 
+fn outlet_words(layer: OilLayer) -> (&'static str, &'static str) {
+    match layer {
+        OilLayer::Top => ("floats", "top"),
+        OilLayer::Bottom => ("sinks", "bottom"),
+    }
+}
+
 fn density_warnings(f: &Facts, list: &mut Vec<Warning>) {
     let rho_w = f.separator.water_density_kg_per_m3;
-    let rho_oil = f.oil.density_kg_per_m3;
-    if f.oil.mixed_density {
-        let lighter = lighter_share(f.resolved, rho_w);
+    let oil = f.oil;
+    let rho_oil = oil.density_at_separator_kg_per_m3;
+    let t_sep = f.separator.temperature_c;
+    if oil.mixed_density {
         warn(
             list,
             "mixed_density_oil",
             format!(
-                "About {:.0} % of this oil is lighter than water and {:.0} % heavier: part may float and part sink. Draw off at both the top and the bottom of the separator.",
-                lighter * 100.0,
-                (1.0 - lighter) * 100.0
+                "At {t_sep:.0} °C some cuts of this oil are lighter than the water and some heavier: part will float and part sink. Draw off at both the top and the bottom of the separator."
             ),
         );
     }
-    if (rho_oil - rho_w).abs() < SLOW_PARTING_DENSITY_DIFFERENCE {
+    if oil.inversion_risk {
+        let (moves, outlet) = outlet_words(oil.collects_at);
+        let crossing = match oil.inversion_temperature_c {
+            Some(t) => format!(" The whole oil is as dense as the water at about {t:.0} °C."),
+            None => " Some cuts are as dense as the water within 10 °C of it.".to_string(),
+        };
+        warn(
+            list,
+            "density_inversion_risk",
+            format!(
+                "At the separator's {t_sep:.0} °C the oil ({rho_oil:.0} kg/m³) {moves} in the water ({rho_w:.0} kg/m³): use the {outlet} outlet for the oil.{crossing} Keep the separator's temperature steady, or the oil may change sides."
+            ),
+        );
+    }
+    if let Some(k) = f.separator.interface_per_gooseneck
+        && (rho_oil - rho_w).abs() < SLOW_PARTING_DENSITY_DIFFERENCE
+    {
         warn(
             list,
             "small_density_difference",
             format!(
-                "The oil ({:.0} kg/m³) is within {:.0} kg/m³ of the water ({:.0} kg/m³) at the separator: it will part slowly. A warmer or larger separator helps.",
+                "The oil ({:.0} kg/m³) is within {:.0} kg/m³ of the water ({:.0} kg/m³) at the separator: it will part slowly, and every millimetre of gooseneck height moves the interface about {:.0} mm. A larger separator kept at a steady temperature helps.",
                 rho_oil,
                 (rho_oil - rho_w).abs(),
-                rho_w
+                rho_w,
+                k
             ),
         );
     }
@@ -183,17 +210,27 @@ fn heat_and_cooling_warnings(f: &Facts, list: &mut Vec<Warning>) {
         );
     }
     let c = f.condenser;
-    if let Some(t) = c.tub_lasts_s
-        && t < f.timeline.plan.time_after_first_drop_s
-    {
+    if let Some(t) = c.tub_feed_from_s {
         warn(
             list,
             "tub_warms_up",
             format!(
-                "The tub's water reaches {:.0} °C after about {:.0} min: feed it cold water at the bottom, about {:.1} L/min, or change it during the run.",
+                "The tub's water reaches {:.0} °C about {:.0} min after the first drop: from then on feed about {:.1} L/min of cold water at the bottom and let the warm water overflow at the top, or change the water.",
                 f.scenario.condenser.cooling_water_outlet_c,
                 t / 60.0,
                 c.cooling_water_flow_kg_per_s * 60.0
+            ),
+        );
+    }
+    if c.distillate_outlet_c > c.distillate_outlet_requested_c + 0.05 {
+        warn(
+            list,
+            "tub_limits_outlet",
+            format!(
+                "The tub's water ends the run at about {:.0} °C, so the distillate cannot leave colder than about {:.0} °C (not the {:.0} °C asked): the separator is planned at that temperature. A larger tub or an earlier cold feed keeps it cooler.",
+                c.tub_end_c.unwrap_or(c.distillate_outlet_c),
+                c.distillate_outlet_c,
+                c.distillate_outlet_requested_c
             ),
         );
     }
@@ -216,6 +253,33 @@ fn separator_and_yield_warnings(f: &Facts, list: &mut Vec<Warning>) {
             list,
             "no_gravity_separation",
             "The oil is as dense as the water at the separator: it will not part by gravity. Change the separator temperature or add salt to the water (common practice).".to_string(),
+        );
+    }
+    if let (Some(lo), Some(hi), Some(top)) = (sp.interface_low_m, sp.interface_high_m, sp.top_outlet_height_m)
+        && (lo <= 0.0 || hi >= top)
+    {
+        warn(
+            list,
+            "interface_leaves_receiver",
+            format!(
+                "Set for the whole oil, the outlets hold the interface at {:.0} mm, but some cuts are so much lighter or heavier that it would reach the {}: watch the interface as the run goes on and reset the gooseneck, or change receivers between cuts.",
+                sp.interface_height_m.unwrap_or(0.0) * 1000.0,
+                if lo <= 0.0 { "bottom" } else { "top" }
+            ),
+        );
+    }
+    let close = (f.oil.density_at_separator_kg_per_m3 - sp.water_density_kg_per_m3).abs()
+        < SLOW_PARTING_DENSITY_DIFFERENCE;
+    if let Some(k) = sp.interface_per_gooseneck
+        && k > TOUCHY_INTERFACE
+        && !close
+    {
+        warn(
+            list,
+            "touchy_interface",
+            format!(
+                "The oil and water densities are close: every millimetre of gooseneck height moves the interface about {k:.0} mm. Set the gooseneck carefully and check the interface often."
+            ),
         );
     }
     let y = f.oil_yield;
