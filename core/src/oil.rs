@@ -120,7 +120,7 @@ impl Oil {
 ///
 /// ```
 /// use stillroom_core::{compounds::find, oil::{Component, ideal_density_kg_per_m3}};
-/// let l = Component::from(find("limonene").unwrap());
+/// let l = Component::from(find("d-limonene").unwrap());
 /// let e = Component::from(find("eugenol").unwrap());
 /// let rho = ideal_density_kg_per_m3(&[l.clone(), e.clone()], &[0.5, 0.5]);
 /// assert!(rho > l.liquid_density_kg_per_m3 && rho < e.liquid_density_kg_per_m3);
