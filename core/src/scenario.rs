@@ -112,6 +112,9 @@ schema! {
         pub rate_constant_per_min: Option<f64>,
         /// Time to empty, clean and recharge between runs, min.
         pub turnaround_min: f64,
+        /// Whether the separated water is returned to the boiler during the run (cohobation), so
+        /// the oil dissolved in it comes over again.
+        pub cohobation: bool,
     }
 
     /// The condenser and its cooling water.
@@ -419,7 +422,12 @@ impl Default for Boiler {
 
 impl Default for Run {
     fn default() -> Self {
-        Run { target_recovery_percent: 95.0, rate_constant_per_min: None, turnaround_min: 30.0 }
+        Run {
+            target_recovery_percent: 95.0,
+            rate_constant_per_min: None,
+            turnaround_min: 30.0,
+            cohobation: false,
+        }
     }
 }
 

@@ -6,7 +6,8 @@ use crate::heat;
 use crate::scenario::{Costs, Scenario};
 
 /// The heat sinks of the run, the fuel that feeds them (Q_fuel = Q_useful / η) and the costs.
-pub(super) fn energy(s: &Scenario, r: &Resolved, h_fg: f64, tl: &Timeline) -> EnergyPlan {
+/// `oil_volume_m3` is the separable oil, for the cost per millilitre.
+pub(super) fn energy(s: &Scenario, r: &Resolved, h_fg: f64, tl: &Timeline, oil_volume_m3: f64) -> EnergyPlan {
     let run = &tl.plan;
     let wall_loss_j = tl.wall_loss_w * (tl.warm_up_s + run.time_after_first_drop_s);
     let steam_to_condenser_j = run.distillate_steam_kg * h_fg;
@@ -18,7 +19,6 @@ pub(super) fn energy(s: &Scenario, r: &Resolved, h_fg: f64, tl: &Timeline) -> En
         + tl.makeup_water_heating_j;
     let heat_in_j = run.useful_heat_w * run.total_time_s;
     let fuel_amount = heat::fuel_amount(useful_heat_j, s.boiler.fuel, r.efficiency);
-    let oil_volume_m3 = tl.oil_recovered_kg / r.oil_density_kg_per_m3;
     EnergyPlan {
         boiler_water_heating_j: tl.boiler_water_heating_j,
         charge_heating_j: tl.charge_heating_j,

@@ -128,7 +128,10 @@ output! {
         pub startup_condensate_kg: f64,
         /// Steam passed through the charge after the first drop, kg.
         pub distillate_steam_kg: f64,
+        /// Hydrosol kept at the end: the distillate water less what was returned to the boiler.
         pub hydrosol_volume_m3: f64,
+        /// Distillate water returned to the boiler during the run (cohobation), kg.
+        pub returned_to_boiler_kg: f64,
         /// Planned steam over the thermodynamic least steam for the same oil.
         pub steam_to_minimum_ratio: f64,
         /// Distillate water per kg of oil recovered.
@@ -230,12 +233,20 @@ output! {
 
     pub struct YieldPlan {
         pub oil_in_charge_kg: f64,
+        /// Oil the steam carries over: released by the plant and within what the steam can carry.
+        pub carried_over_kg: Range,
+        /// Oil that separates: carried over less what stays dissolved in the kept hydrosol.
         pub oil_kg: Range,
+        /// Volume of the separable oil at 20 °C.
         pub oil_volume_m3: Range,
-        /// Recovered oil as % of the charge mass.
+        /// Separable oil as % of the charge mass.
         pub recovery_percent_of_plant: Range,
+        /// Oil dissolved in the kept hydrosol, at the separator's temperature (central case).
         pub dissolved_in_hydrosol_kg: f64,
+        /// Dissolved oil over oil carried over (central case).
         pub dissolved_share: f64,
+        /// Almost all the oil stays dissolved: the hydrosol, not the oil, is the product.
+        pub hydrosol_is_the_product: bool,
         pub cohobation_advised: bool,
     }
 
@@ -249,6 +260,14 @@ output! {
         /// What the still holds at the crop's packing density, if its volume is given.
         pub still_capacity_kg: Option<f64>,
         pub charges: u32,
+        /// The first charge, from cold, lighting to the end of its run.
+        pub first_charge_time_s: f64,
+        /// Each later charge, started with the boiler and still hot after the turnaround.
+        pub later_charge_time_s: f64,
+        pub later_charge_fuel_amount: f64,
+        /// Heat the still loses while it stands between charges, J.
+        pub turnaround_heat_loss_j: f64,
+        /// All charges with the turnarounds between them.
         pub total_time_s: f64,
         pub fuel_amount: f64,
         pub water_kg: f64,
@@ -359,7 +378,6 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
     let site = site::site(r)?;
     let eq = equilibrium::equilibrium(s, r, &site)?;
     let mut tl = timeline::timeline(s, r, &site, &eq)?;
-    let energy = energy::energy(s, r, site.latent_heat_j_per_kg, &tl);
     let distillate_rate = tl.plan.distillate_steam_rate_kg_per_s;
     let cond = condenser::condenser(s, r, &site, distillate_rate, tl.plan.time_after_first_drop_s)?;
     let t_sep_c = cond.distillate_outlet_c;
@@ -367,12 +385,16 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
     let (oil, separator_water) =
         layering::layering(r, &eq, site.pressure_pa, site.plan.water_boiling_point_c, t_sep_c)?;
     // The hydrosol's volume waits for the separator's temperature, which the condenser sets.
-    tl.plan.hydrosol_volume_m3 = tl.plan.distillate_steam_kg / separator_water.density_kg_per_m3;
+    tl.plan.hydrosol_volume_m3 =
+        (tl.plan.distillate_steam_kg - tl.returned_kg) / separator_water.density_kg_per_m3;
     let separator = separator::separator(s, &separator_water, distillate_rate, &oil, t_sep_c);
     let yield_estimate = oil_yield::oil_yield(s, r, &eq, &tl);
+    let energy = energy::energy(s, r, site.latent_heat_j_per_kg, &tl, yield_estimate.oil_volume_m3.central);
     let water_use = oil_yield::water_use(s, &tl, condenser.cooling_water_per_run_kg);
     let still_capacity_kg = season::still_capacity_kg(s, r);
-    let season = season::season(s, r, (&tl.plan, &energy, &water_use), still_capacity_kg, eq.target_fraction);
+    let t_hot_c = eq.temperature_k - 273.15;
+    let season =
+        season::season(s, r, &tl, (&energy, &water_use, &yield_estimate), still_capacity_kg, t_hot_c);
     let warnings = warnings::warnings(&warnings::Facts {
         scenario: s,
         resolved: r,

@@ -20,8 +20,10 @@ pub(super) struct Timeline {
     pub still_heating_j: f64,
     pub makeup_kg: f64,
     pub makeup_water_heating_j: f64,
-    /// Oil recovered at the target, kg.
-    pub oil_recovered_kg: f64,
+    /// Feed water's enthalpy gain to the boil, J/kg.
+    pub heat_per_kg_fill_j: f64,
+    /// Distillate water returned to the boiler (cohobation), kg.
+    pub returned_kg: f64,
     /// Superficial velocity of the steam rising through the charge, when the still's volume is known.
     pub steam_velocity_m_per_s: Option<f64>,
 }
@@ -75,6 +77,40 @@ fn run_length(r: &Resolved, eq: &Equilibrium, distillate_rate: f64) -> (f64, Run
     } else {
         (release_time_s, RunLimit::Release)
     }
+}
+
+/// Water that tops the boiler up: the returned distillate (cohobation, arriving at the
+/// distillate temperature, all of it reheated to the boil), then fresh feed for what the fill
+/// and the returned water do not cover.
+struct TopUp {
+    feed_kg: f64,
+    heating_j: f64,
+}
+
+fn top_up(
+    s: &Scenario,
+    r: &Resolved,
+    site: &Site,
+    evaporated_kg: f64,
+    returned_kg: f64,
+    heat_per_kg_feed_j: f64,
+) -> Result<TopUp, Box<FieldError>> {
+    let feed_kg = (evaporated_kg - s.boiler.usable_water_kg - returned_kg).max(0.0);
+    let heat_per_kg_returned_j = if returned_kg > 0.0 {
+        let t_k = r.distillate_outlet_c + 273.15;
+        let h = water::liquid_enthalpy_j_per_kg(t_k, site.pressure_pa).map_err(|_| {
+            compute_error(
+                "condenser.distillate_outlet_c",
+                r.distillate_outlet_c,
+                "5 °C to below the boiling point",
+                "out of range",
+            )
+        })?;
+        site.saturated_liquid_enthalpy_j_per_kg - h
+    } else {
+        0.0
+    };
+    Ok(TopUp { feed_kg, heating_j: feed_kg * heat_per_kg_feed_j + returned_kg * heat_per_kg_returned_j })
 }
 
 /// Superficial steam velocity in an empty still of the given shape: u = ṁ / (ρ_v π d²/4).
@@ -140,9 +176,15 @@ pub(super) fn timeline(
     let evaporated_kg = startup_condensate_kg
         + wall_loss_w * (warm_up_s + time_after_first_drop_s) / h_fg
         + distillate_steam_kg;
-    let makeup_kg = (evaporated_kg - boiler_fill_kg).max(0.0);
+    let returned_kg = if s.run.cohobation {
+        (distillate_steam_kg - distillate_rate * s.separator.residence_time_s).max(0.0)
+    } else {
+        0.0
+    };
+    let topping = top_up(s, r, site, evaporated_kg, returned_kg, heat_per_kg_fill_j)?;
+    let makeup_kg = topping.feed_kg;
     let refills = if makeup_kg > 0.0 { (makeup_kg / boiler_fill_kg).ceil() as u32 } else { 0 };
-    let makeup_water_heating_j = makeup_kg * heat_per_kg_fill_j;
+    let makeup_water_heating_j = topping.heating_j;
     let boiler_dry_after_s =
         if makeup_kg > 0.0 { Some(time_to_boil_s + boiler_fill_kg * h_fg / useful_w) } else { None };
     let refill_reheat_s = makeup_water_heating_j / useful_w;
@@ -163,6 +205,7 @@ pub(super) fn timeline(
         distillate_steam_kg,
         // Set once the separator's temperature is known.
         hydrosol_volume_m3: f64::NAN,
+        returned_to_boiler_kg: returned_kg,
         steam_to_minimum_ratio: distillate_steam_kg / eq.plan.min_steam_to_target_kg,
         water_to_oil_ratio: distillate_steam_kg / oil_recovered_kg,
         specific_steam_rate_kg_per_h_per_kg: distillate_rate * 3600.0 / s.charge.plant_mass_kg,
@@ -180,7 +223,8 @@ pub(super) fn timeline(
         still_heating_j,
         makeup_kg,
         makeup_water_heating_j,
-        oil_recovered_kg,
+        heat_per_kg_fill_j,
+        returned_kg,
         steam_velocity_m_per_s: steam_velocity_m_per_s(s, eq, distillate_rate),
     })
 }

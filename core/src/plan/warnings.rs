@@ -283,7 +283,17 @@ fn separator_and_yield_warnings(f: &Facts, list: &mut Vec<Warning>) {
         );
     }
     let y = f.oil_yield;
-    if y.cohobation_advised {
+    if y.hydrosol_is_the_product {
+        warn(
+            list,
+            "hydrosol_is_the_product",
+            format!(
+                "About {:.0} % of the oil carried over ({:.0} g) stays dissolved in the hydrosol: expect little or no oil to separate. The hydrosol is this run's product; returning the waters to the still (cohobation) or a larger charge gives more separable oil.",
+                y.dissolved_share * 100.0,
+                y.dissolved_in_hydrosol_kg * 1000.0
+            ),
+        );
+    } else if y.cohobation_advised {
         warn(
             list,
             "cohobation",
