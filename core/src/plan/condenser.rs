@@ -1,4 +1,4 @@
-//! Stage 5, the condenser: its duty, the cooling water, the area and tube it needs, and the
+//! The condenser: its duty, the cooling water, the area and tube it needs, and the
 //! distillate temperature it can really reach (a tub's water warms over the run).
 
 use super::site::Site;

@@ -1,5 +1,6 @@
-//! Stage 5, heat and fuel: where the boiler's heat goes, and the fuel and money it costs.
+//! Heat and fuel: where the boiler's heat goes, and the fuel and money it costs.
 
+use super::balance::{self, SteppedRun};
 use super::timeline::Timeline;
 use super::{CostPlan, EnergyPlan, Resolved};
 use crate::heat;
@@ -7,7 +8,15 @@ use crate::scenario::{Costs, Scenario};
 
 /// The heat sinks of the run, the fuel that feeds them (Q_fuel = Q_useful / η) and the costs.
 /// `oil_volume_m3` is the separable oil, for the cost per millilitre.
-pub(super) fn energy(s: &Scenario, r: &Resolved, h_fg: f64, tl: &Timeline, oil_volume_m3: f64) -> EnergyPlan {
+/// `heat_balance_error` compares the sums with the stepped run of [`super::balance`].
+pub(super) fn energy(
+    s: &Scenario,
+    r: &Resolved,
+    h_fg: f64,
+    tl: &Timeline,
+    oil_volume_m3: f64,
+    stepped: &SteppedRun,
+) -> EnergyPlan {
     let run = &tl.plan;
     let wall_loss_j = tl.wall_loss_w * (tl.warm_up_s + run.time_after_first_drop_s);
     let steam_to_condenser_j = run.distillate_steam_kg * h_fg;
@@ -17,7 +26,6 @@ pub(super) fn energy(s: &Scenario, r: &Resolved, h_fg: f64, tl: &Timeline, oil_v
         + wall_loss_j
         + steam_to_condenser_j
         + tl.makeup_water_heating_j;
-    let heat_in_j = run.useful_heat_w * run.total_time_s;
     let fuel_amount = heat::fuel_amount(useful_heat_j, s.boiler.fuel, r.efficiency);
     EnergyPlan {
         boiler_water_heating_j: tl.boiler_water_heating_j,
@@ -32,7 +40,7 @@ pub(super) fn energy(s: &Scenario, r: &Resolved, h_fg: f64, tl: &Timeline, oil_v
         fuel_amount,
         fuel_unit: s.boiler.fuel.data().unit.to_string(),
         efficiency: r.efficiency,
-        heat_balance_error: (heat_in_j - useful_heat_j).abs() / heat_in_j,
+        heat_balance_error: balance::gap(stepped, tl, useful_heat_j),
         cost: cost_of_run(&s.costs, fuel_amount, s.charge.plant_mass_kg, run.total_time_s, oil_volume_m3),
     }
 }

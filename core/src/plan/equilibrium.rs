@@ -1,4 +1,4 @@
-//! Stage 2, equilibrium and depletion: where oil and water boil together, what the first
+//! Equilibrium and depletion: where oil and water boil together, what the first
 //! vapour carries, and how the oil's make-up shifts as the light compounds leave.
 
 use super::site::Site;

@@ -1,4 +1,4 @@
-//! Stage 3, layering: the water at the separator's temperature, the oil's density there (whole
+//! Layering: the water at the separator's temperature, the oil's density there (whole
 //! and cut by cut, following temperature), and which way the oil goes.
 
 use super::equilibrium::Equilibrium;

@@ -1,9 +1,14 @@
 //! The one entry point: [`plan`] turns a [`Scenario`] into a [`Plan`].
 //!
-//! The order follows the run itself: the site's pressure, the oil and its boiling point with
-//! water, the boiler warming up, the steam warming the charge (time to the first drop), the
-//! recovery of oil over time, the heat and fuel, the condenser, the separator, the yield, the
-//! season. Every number is recomputed from the scenario; nothing is stored.
+//! The plan is a pipeline of stages, one file each, in the order of the run; each takes the
+//! earlier stages' results and returns its own:
+//! [`site`] (pressure, boiling point) → [`equilibrium`] (Dalton + Raoult, depletion, cuts) →
+//! [`timeline`] (boil, first drop, run, boiler water) → [`condenser`] (duty, cooling water, the
+//! distillate temperature a tub allows) → [`layering`] (oil and water densities at the separator,
+//! cut by cut) → [`separator`] (Stokes check, vessel, outlet heights) → [`oil_yield`] (mass
+//! balance of the oil, water use) → [`balance`] (the run stepped through, against the closed
+//! form) → [`energy`] (heat and fuel) → [`season`] → [`warnings`]. Every number is recomputed
+//! from the scenario; nothing is stored.
 
 use crate::codistillation::Cut;
 use crate::compounds::{self, Confidence};
@@ -13,6 +18,7 @@ use crate::oil::{Component, Oil};
 use crate::scenario::*;
 use serde::{Deserialize, Serialize};
 
+mod balance;
 mod condenser;
 mod energy;
 mod equilibrium;
@@ -161,7 +167,8 @@ output! {
         pub fuel_amount: f64,
         pub fuel_unit: String,
         pub efficiency: f64,
-        /// |heat in - heat out| / heat in, from the time line against the sum of the sinks.
+        /// Largest relative gap between the closed-form time line and heat sum and the same run
+        /// stepped through in time from its physical state (`plan/balance.rs`).
         pub heat_balance_error: f64,
         pub cost: Option<CostPlan>,
     }
@@ -389,7 +396,9 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
         (tl.plan.distillate_steam_kg - tl.returned_kg) / separator_water.density_kg_per_m3;
     let separator = separator::separator(s, &separator_water, distillate_rate, &oil, t_sep_c);
     let yield_estimate = oil_yield::oil_yield(s, r, &eq, &tl);
-    let energy = energy::energy(s, r, site.latent_heat_j_per_kg, &tl, yield_estimate.oil_volume_m3.central);
+    let stepped = balance::stepped_run(s, r, &site, &eq);
+    let energy =
+        energy::energy(s, r, site.latent_heat_j_per_kg, &tl, yield_estimate.oil_volume_m3.central, &stepped);
     let water_use = oil_yield::water_use(s, &tl, condenser.cooling_water_per_run_kg);
     let still_capacity_kg = season::still_capacity_kg(s, r);
     let t_hot_c = eq.temperature_k - 273.15;

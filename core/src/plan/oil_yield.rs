@@ -1,4 +1,4 @@
-//! Stage 8, the yield: the oil the steam carries over with its range, what stays dissolved in
+//! The yield: the oil the steam carries over with its range, what stays dissolved in
 //! the kept hydrosol, what separates, and the water the run uses.
 
 use super::equilibrium::Equilibrium;

@@ -1,4 +1,4 @@
-//! Stage 9, the season: what the still holds, and a harvest's charges run back to back: the
+//! The season: what the still holds, and a harvest's charges run back to back: the
 //! first from cold, the later ones with the boiler and still still hot.
 
 use super::timeline::Timeline;

@@ -1,4 +1,4 @@
-//! Stage 7, the separator: how fast the oil parts from the water, and the vessel it needs.
+//! The separator: how fast the oil parts from the water, and the vessel it needs.
 
 use super::layering::SeparatorWater;
 use super::{OilPlan, SeparatorPlan};

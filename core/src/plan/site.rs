@@ -1,4 +1,4 @@
-//! Stage 1, the site: the pressure at the still and what it does to water.
+//! The site: the pressure at the still and what it does to water.
 
 use super::{FieldError, Resolved, SEA_LEVEL_BOILING_C, SitePlan, compute_error};
 use crate::water;

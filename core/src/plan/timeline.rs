@@ -1,4 +1,4 @@
-//! Stage 4, the time line: the boiler warming its water, steam warming the charge and the
+//! The time line: the boiler warming its water, steam warming the charge and the
 //! still (time to the first drop), the run to the target recovery, and the boiler's water.
 
 use super::equilibrium::Equilibrium;
@@ -31,7 +31,7 @@ pub(super) struct Timeline {
 /// Heat reaching the water and the steam it raises: from a measured steam rate, or from the
 /// burner's input (gas derated for altitude, [`heat::gas_altitude_derate`]) times the
 /// appliance's efficiency. Q = ṁ h_fg.
-fn heat_source(s: &Scenario, r: &Resolved, h_fg: f64) -> (f64, f64) {
+pub(super) fn heat_source(s: &Scenario, r: &Resolved, h_fg: f64) -> (f64, f64) {
     let derate = if s.boiler.fuel.is_gas() { heat::gas_altitude_derate(s.site.altitude_m) } else { 1.0 };
     let useful_w = match s.boiler.steam_rate_kg_per_h {
         Some(rate) => rate / 3600.0 * h_fg,
@@ -42,7 +42,7 @@ fn heat_source(s: &Scenario, r: &Resolved, h_fg: f64) -> (f64, f64) {
 
 /// Heat lost through the still's wall at the co-distillation temperature (U A ΔT); zero when
 /// the still's volume is not given.
-fn wall_loss_w(s: &Scenario, inside_c: f64) -> f64 {
+pub(super) fn wall_loss_w(s: &Scenario, inside_c: f64) -> f64 {
     let area =
         s.still.volume_m3.map(|v| heat::cylinder_surface_m2(v, s.still.height_to_diameter)).unwrap_or(0.0);
     heat::wall_loss_w(s.still.wall_u_w_per_m2_k, area, inside_c, s.site.ambient_temperature_c)

@@ -1,4 +1,4 @@
-//! Stage 10, warnings: what the grower should know about this plan, read off the other stages.
+//! Warnings: what the grower should know about this plan, read off the other stages.
 
 use super::equilibrium::Equilibrium;
 use super::timeline::Timeline;
