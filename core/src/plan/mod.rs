@@ -2,12 +2,12 @@
 //!
 //! The plan is a pipeline of stages, one file each, in the order of the run; each takes the
 //! earlier stages' results and returns its own:
-//! [`site`] (pressure, boiling point) → [`equilibrium`] (Dalton + Raoult, depletion, cuts) →
-//! [`timeline`] (boil, first drop, run, boiler water) → [`condenser`] (duty, cooling water, the
-//! distillate temperature a tub allows) → [`layering`] (oil and water densities at the separator,
-//! cut by cut) → [`separator`] (Stokes check, vessel, outlet heights) → [`oil_yield`] (mass
-//! balance of the oil, water use) → [`balance`] (the run stepped through, against the closed
-//! form) → [`energy`] (heat and fuel) → [`season`] → [`warnings`]. Every number is recomputed
+//! `site` (pressure, boiling point) → `equilibrium` (Dalton + Raoult, depletion, cuts) →
+//! `timeline` (boil, first drop, run, boiler water) → `condenser` (duty, cooling water, the
+//! distillate temperature a tub allows) → `layering` (oil and water densities at the separator,
+//! cut by cut) → `separator` (Stokes check, vessel, outlet heights) → `oil_yield` (mass
+//! balance of the oil, water use) → `balance` (the run stepped through, against the closed
+//! form) → `energy` (heat and fuel) → `season` → `warnings`. Every number is recomputed
 //! from the scenario; nothing is stored.
 
 use crate::codistillation::Cut;
