@@ -1,11 +1,12 @@
 //! The heat-balance check: the run stepped through in time, sink by sink, from the
 //! physical state (boiler water warming with IF97's c_p, charge and metal warming with their own
-//! heat capacities, oil released step by step, the boiler emptying and being topped up), and
+//! heat capacities, the boiler emptying and being topped up over the run), and
 //! compared with the closed-form time line and heat sum. It shares no sum with them, so a term
 //! dropped from or doubled in the closed form shows up here.
 
 use super::Resolved;
 use super::equilibrium::Equilibrium;
+use super::knobs::Knobs;
 use super::site::Site;
 use super::timeline::{self, Timeline};
 use crate::scenario::Scenario;
@@ -51,42 +52,26 @@ fn stepped_warm_up_s(s: &Scenario, r: &Resolved, t_cd_c: f64, net_w: f64) -> f64
         .sum()
 }
 
-/// Steaming time to the end of the run: the release dX/dt = k (1 − X) stepped in time by
-/// fourth-order Runge-Kutta (steps of 1/(100 k)) until X reaches the target, or the time the
-/// steam needs, whichever is longer.
-fn stepped_run_s(r: &Resolved, eq: &Equilibrium, distillate_kg_per_s: f64) -> f64 {
-    let k = r.rate_constant_per_s;
-    let dt = 0.01 / k;
-    let rate = |x: f64| k * (1.0 - x);
-    let (mut t, mut x) = (0.0, 0.0);
-    // At most ln(1/(1 − 0.999)) ≈ 6.9 time constants: 700 steps; the cap only guards the loop.
-    for _ in 0..100_000 {
-        let k1 = rate(x);
-        let k2 = rate(x + 0.5 * dt * k1);
-        let k3 = rate(x + 0.5 * dt * k2);
-        let k4 = rate(x + dt * k3);
-        let next = x + dt / 6.0 * (k1 + 2.0 * k2 + 2.0 * k3 + k4);
-        if next >= eq.target_fraction {
-            t += dt * (eq.target_fraction - x) / (next - x);
-            break;
-        }
-        (t, x) = (t + dt, next);
-    }
-    t.max(eq.plan.min_steam_to_target_kg / distillate_kg_per_s)
-}
-
-/// The run stepped through: boil, warm-up, then steaming while the boiler empties; once its
-/// usable water is gone each further kg of steam first needs a kg of feed brought to the boil.
-pub(super) fn stepped_run(s: &Scenario, r: &Resolved, site: &Site, eq: &Equilibrium) -> SteppedRun {
+/// The run stepped through: boil, warm-up, then steaming for the run's length (from the
+/// release-and-carry model: the kinetics are checked elsewhere, this checks the heat) while
+/// the boiler empties; once its usable water is gone each further kg of steam first needs a kg
+/// of feed brought to the boil.
+pub(super) fn stepped_run(
+    s: &Scenario,
+    r: &Resolved,
+    site: &Site,
+    eq: &Equilibrium,
+    knobs: &Knobs,
+    run_s: f64,
+) -> SteppedRun {
     let h_fg = site.latent_heat_j_per_kg;
     let (power_w, steam_kg_per_s) = timeline::heat_source(s, r, h_fg);
     let t_cd_c = eq.temperature_k - 273.15;
-    let wall_w = timeline::wall_loss_w(s, t_cd_c);
+    let wall_w = timeline::wall_loss_w(s, knobs, t_cd_c);
     let boil_c = site.plan.water_boiling_point_c;
     let fill = s.boiler.usable_water_kg;
     let time_to_boil_s = stepped_boil_s(fill, r.feed_temperature_c, boil_c, power_w, site.pressure_pa);
     let warm_up_s = stepped_warm_up_s(s, r, t_cd_c, power_w - wall_w);
-    let run_s = stepped_run_s(r, eq, (power_w - wall_w) / h_fg);
     // Every kg evaporated beyond the fill (and the returned distillate) is fed cold and reheated.
     let returned_kg = if s.run.cohobation {
         ((power_w - wall_w) / h_fg * (run_s - s.separator.residence_time_s)).max(0.0)
@@ -142,9 +127,10 @@ mod tests {
         let r = validate(s).unwrap();
         let site = site::site(&r).unwrap();
         let eq = equilibrium::equilibrium(s, &r, &site).unwrap();
-        let tl = timeline::timeline(s, &r, &site, &eq).unwrap();
-        let stepped = stepped_run(s, &r, &site, &eq);
-        let energy = energy::energy(s, &r, site.latent_heat_j_per_kg, &tl, 1e-4, &stepped);
+        let knobs = Knobs::CENTRAL;
+        let tl = timeline::timeline(s, &r, &site, &eq, &knobs).unwrap();
+        let stepped = stepped_run(s, &r, &site, &eq, &knobs, tl.plan.time_after_first_drop_s);
+        let energy = energy::energy(s, &r, site.latent_heat_j_per_kg, &tl, 1e-4);
         Parts { tl, stepped, energy }
     }
 

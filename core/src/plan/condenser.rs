@@ -1,6 +1,7 @@
 //! The condenser: its duty, the cooling water, the area and tube it needs, and the
 //! distillate temperature it can really reach (a tub's water warms over the run).
 
+use super::knobs::Knobs;
 use super::site::Site;
 use super::{CondenserPlan, FieldError, Resolved, compute_error};
 use crate::condenser as law;
@@ -155,9 +156,13 @@ pub(super) fn condenser(
     r: &Resolved,
     site: &Site,
     distillate_rate_kg_per_s: f64,
+    knobs: &Knobs,
     run_s: f64,
 ) -> Result<Condensing, Box<FieldError>> {
-    let c = &s.condenser;
+    let mut c = s.condenser.clone();
+    c.condensing_u_w_per_m2_k *= knobs.condenser_u_factor;
+    c.cooling_u_w_per_m2_k *= knobs.condenser_u_factor;
+    let c = &c;
     let cp = cooling_water_cp(c, site.pressure_pa)?;
     let requested_c = r.distillate_outlet_c;
     let mut outlet_c = requested_c;

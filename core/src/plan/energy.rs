@@ -1,6 +1,5 @@
 //! Heat and fuel: where the boiler's heat goes, and the fuel and money it costs.
 
-use super::balance::{self, SteppedRun};
 use super::timeline::Timeline;
 use super::{CostPlan, EnergyPlan, Resolved};
 use crate::heat;
@@ -8,15 +7,8 @@ use crate::scenario::{Costs, Scenario};
 
 /// The heat sinks of the run, the fuel that feeds them (Q_fuel = Q_useful / η) and the costs.
 /// `oil_volume_m3` is the separable oil, for the cost per millilitre.
-/// `heat_balance_error` compares the sums with the stepped run of [`super::balance`].
-pub(super) fn energy(
-    s: &Scenario,
-    r: &Resolved,
-    h_fg: f64,
-    tl: &Timeline,
-    oil_volume_m3: f64,
-    stepped: &SteppedRun,
-) -> EnergyPlan {
+/// `heat_balance_error` is left at 0 here: the plan sets it from `plan/balance.rs`.
+pub(super) fn energy(s: &Scenario, r: &Resolved, h_fg: f64, tl: &Timeline, oil_volume_m3: f64) -> EnergyPlan {
     let run = &tl.plan;
     let wall_loss_j = tl.wall_loss_w * (tl.warm_up_s + run.time_after_first_drop_s);
     let steam_to_condenser_j = run.distillate_steam_kg * h_fg;
@@ -40,7 +32,7 @@ pub(super) fn energy(
         fuel_amount,
         fuel_unit: s.boiler.fuel.data().unit.to_string(),
         efficiency: r.efficiency,
-        heat_balance_error: balance::gap(stepped, tl, useful_heat_j),
+        heat_balance_error: 0.0,
         cost: cost_of_run(&s.costs, fuel_amount, s.charge.plant_mass_kg, run.total_time_s, oil_volume_m3),
     }
 }

@@ -61,6 +61,7 @@ pub(super) fn layering(
     pressure_pa: f64,
     boiling_c: f64,
     t_c: f64,
+    look_for_inversion: bool,
 ) -> Result<(OilPlan, SeparatorWater), Box<FieldError>> {
     let out_of_range = |_| {
         compute_error("condenser.distillate_outlet_c", t_c, "5 °C to below the boiling point", "out of range")
@@ -79,7 +80,7 @@ pub(super) fn layering(
     let cut_densities: Vec<f64> = relatives.iter().map(|q| density_at(r, *q, t_c)).collect();
     let floats = cut_densities.iter().any(|d| *d < rho_w);
     let sinks = cut_densities.iter().any(|d| *d >= rho_w);
-    let grid = water_density_grid(pressure_pa, boiling_c);
+    let grid = if look_for_inversion { water_density_grid(pressure_pa, boiling_c) } else { Vec::new() };
     let inversion_temperature_c = crossing_c(r, 1.0, &grid, t_c);
     let near = |t: f64| (t - t_c).abs() <= INVERSION_WINDOW_K;
     let inversion_risk = inversion_temperature_c.is_some_and(near)

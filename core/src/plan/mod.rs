@@ -22,8 +22,10 @@ mod balance;
 mod condenser;
 mod energy;
 mod equilibrium;
+mod knobs;
 mod layering;
 mod oil_yield;
+mod ranges;
 mod season;
 mod separator;
 mod site;
@@ -54,7 +56,39 @@ output! {
         pub yield_estimate: YieldPlan,
         pub water_use: WaterPlan,
         pub season: Option<SeasonPlan>,
+        /// Likely low and high of the headline answers.
+        pub ranges: PlanRanges,
         pub warnings: Vec<Warning>,
+    }
+
+    /// The headline answers with their likely ranges (about P10-P90), from the uncertainties of
+    /// the data and the grower's entries (`plan/ranges.rs`).
+    pub struct PlanRanges {
+        /// Steam the boiler raises over the run, kg.
+        pub steam_kg: Answer,
+        /// From the first drop to the target, s.
+        pub run_time_s: Answer,
+        /// Lighting to the end, s.
+        pub total_time_s: Answer,
+        /// Fuel for the run, in the fuel's unit.
+        pub fuel_amount: Answer,
+        pub cooling_water_kg: Answer,
+        /// Boiler feed plus cooling water, kg.
+        pub water_total_kg: Answer,
+        /// Separable oil, kg.
+        pub oil_kg: Answer,
+        pub separator_volume_m3: Answer,
+        /// Input ends whose plan failed (for example a burner too small at its lowest
+        /// efficiency) and so are left out of the ranges.
+        pub failed_ends: u32,
+    }
+
+    /// One answer: central value, likely low and high, and what moves it most.
+    pub struct Answer {
+        pub low: f64,
+        pub central: f64,
+        pub high: f64,
+        pub mostly_from: Uncertainty,
     }
 
     pub struct SitePlan {
@@ -114,7 +148,12 @@ output! {
     }
 
     pub struct RunPlan {
+        /// Release constant at this run's specific steam rate, per minute.
         pub rate_constant_per_min: f64,
+        /// The crop's (or the grower's) release constant at the crop's usual steam rate.
+        pub reference_rate_constant_per_min: f64,
+        /// Share of the saturation load the steam carries, after any channelling.
+        pub vaporisation_efficiency: f64,
         /// Steam raised by the boiler while it runs, kg/s.
         pub steam_rate_kg_per_s: f64,
         /// Steam reaching the condenser once the charge is hot, kg/s (after wall losses).
@@ -148,7 +187,7 @@ output! {
         /// Time from lighting at which the usable water is gone, if it runs out before the end.
         pub boiler_dry_after_s: Option<f64>,
         pub refills: u32,
-        /// Share of recoverable oil over time since the first drop: (s, fraction).
+        /// Share of the charge's oil carried over, by time since the first drop: (s, fraction).
         pub recovery_curve: Vec<(f64, f64)>,
     }
 
@@ -240,9 +279,10 @@ output! {
 
     pub struct YieldPlan {
         pub oil_in_charge_kg: f64,
-        /// Oil the steam carries over: released by the plant and within what the steam can carry.
-        pub carried_over_kg: Range,
-        /// Oil that separates: carried over less what stays dissolved in the kept hydrosol.
+        /// Oil the steam carries over by the end of the run (the target share of the charge's oil).
+        pub carried_over_kg: f64,
+        /// Oil that separates: carried over less what stays dissolved in the kept hydrosol, with
+        /// its likely range (as `ranges.oil_kg`).
         pub oil_kg: Range,
         /// Volume of the separable oil at 20 °C.
         pub oil_volume_m3: Range,
@@ -293,6 +333,31 @@ output! {
         pub central: f64,
         pub high: f64,
     }
+}
+
+/// An uncertain input the ranges swing.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+#[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
+#[serde(rename_all = "snake_case")]
+pub enum Uncertainty {
+    /// The crop's oil content (its field-to-field spread, or ±25 % of a typed figure).
+    OilContent,
+    /// The crop's release rate constant.
+    RateConstant,
+    /// The appliance's efficiency.
+    BoilerEfficiency,
+    /// The oil compounds' vapour-pressure laws.
+    VapourPressures,
+    /// The compounds' water solubilities.
+    Solubilities,
+    /// How close to saturation the steam leaves the charge.
+    VaporisationEfficiency,
+    /// How strongly release follows the steam rate.
+    SteamDependence,
+    /// The condenser's heat-transfer coefficients.
+    CondenserU,
+    /// The still wall's heat-loss coefficient.
+    WallU,
 }
 
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
@@ -384,22 +449,38 @@ fn compute_error(field: &str, value: f64, valid: &str, message: &str) -> Box<Fie
 fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
     let site = site::site(r)?;
     let eq = equilibrium::equilibrium(s, r, &site)?;
-    let mut tl = timeline::timeline(s, r, &site, &eq)?;
+    let knobs = knobs::Knobs::CENTRAL;
+    let mut tl = timeline::timeline(s, r, &site, &eq, &knobs)?;
     let distillate_rate = tl.plan.distillate_steam_rate_kg_per_s;
-    let cond = condenser::condenser(s, r, &site, distillate_rate, tl.plan.time_after_first_drop_s)?;
+    let run_s = tl.plan.time_after_first_drop_s;
+    let cond = condenser::condenser(s, r, &site, distillate_rate, &knobs, run_s)?;
     let t_sep_c = cond.distillate_outlet_c;
     let condenser = cond.plan;
-    let (oil, separator_water) =
-        layering::layering(r, &eq, site.pressure_pa, site.plan.water_boiling_point_c, t_sep_c)?;
+    let boiling_c = site.plan.water_boiling_point_c;
+    let (oil, separator_water) = layering::layering(r, &eq, site.pressure_pa, boiling_c, t_sep_c, true)?;
     // The hydrosol's volume waits for the separator's temperature, which the condenser sets.
     tl.plan.hydrosol_volume_m3 =
         (tl.plan.distillate_steam_kg - tl.returned_kg) / separator_water.density_kg_per_m3;
     let separator = separator::separator(s, &separator_water, distillate_rate, &oil, t_sep_c);
-    let yield_estimate = oil_yield::oil_yield(s, r, &eq, &tl);
-    let stepped = balance::stepped_run(s, r, &site, &eq);
-    let energy =
-        energy::energy(s, r, site.latent_heat_j_per_kg, &tl, yield_estimate.oil_volume_m3.central, &stepped);
+    let balance = oil_yield::oil_balance(r, &eq, &tl, &knobs);
     let water_use = oil_yield::water_use(s, &tl, condenser.cooling_water_per_run_kg);
+    let mut energy =
+        energy::energy(s, r, site.latent_heat_j_per_kg, &tl, balance.separable_kg / r.oil_density_kg_per_m3);
+    let stepped = balance::stepped_run(s, r, &site, &eq, &knobs, run_s);
+    energy.heat_balance_error = balance::gap(&stepped, &tl, energy.useful_heat_j);
+    let central = ranges::Headline {
+        steam_kg: tl.plan.boiler_water_evaporated_kg,
+        run_time_s: run_s,
+        total_time_s: tl.plan.total_time_s,
+        fuel_amount: energy.fuel_amount,
+        cooling_water_kg: water_use.cooling_water_kg,
+        water_total_kg: water_use.total_kg,
+        oil_kg: balance.separable_kg,
+        separator_volume_m3: separator.volume_m3,
+    };
+    let (spreads, failed_ends) = ranges::ranges(s, r, &site, &eq, &central);
+    let ranges = plan_ranges(&spreads, failed_ends);
+    let yield_estimate = yield_plan(s, r, &eq, &balance, &ranges.oil_kg);
     let still_capacity_kg = season::still_capacity_kg(s, r);
     let t_hot_c = eq.temperature_k - 273.15;
     let season =
@@ -427,8 +508,61 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
         yield_estimate,
         water_use,
         season,
+        ranges,
         warnings,
     })
+}
+
+fn plan_ranges(spreads: &[ranges::Spread], failed_ends: u32) -> PlanRanges {
+    let answer = |i: usize| {
+        let sp = &spreads[i];
+        Answer {
+            low: sp.range.low,
+            central: sp.range.central,
+            high: sp.range.high,
+            mostly_from: sp.mostly_from,
+        }
+    };
+    PlanRanges {
+        steam_kg: answer(0),
+        run_time_s: answer(1),
+        total_time_s: answer(2),
+        fuel_amount: answer(3),
+        cooling_water_kg: answer(4),
+        water_total_kg: answer(5),
+        oil_kg: answer(6),
+        separator_volume_m3: answer(7),
+        failed_ends,
+    }
+}
+
+/// The yield as published: the central mass balance with the separable oil's range.
+fn yield_plan(
+    s: &Scenario,
+    r: &Resolved,
+    eq: &equilibrium::Equilibrium,
+    balance: &oil_yield::OilBalance,
+    oil: &Answer,
+) -> YieldPlan {
+    let plant_kg = s.charge.plant_mass_kg;
+    let rho = r.oil_density_kg_per_m3;
+    let dissolved_share =
+        if balance.carried_kg > 0.0 { balance.dissolved_kg / balance.carried_kg } else { 0.0 };
+    YieldPlan {
+        oil_in_charge_kg: eq.oil_in_charge_kg,
+        carried_over_kg: balance.carried_kg,
+        oil_kg: Range { low: oil.low, central: oil.central, high: oil.high },
+        oil_volume_m3: Range { low: oil.low / rho, central: oil.central / rho, high: oil.high / rho },
+        recovery_percent_of_plant: Range {
+            low: 100.0 * oil.low / plant_kg,
+            central: 100.0 * oil.central / plant_kg,
+            high: 100.0 * oil.high / plant_kg,
+        },
+        dissolved_in_hydrosol_kg: balance.dissolved_kg,
+        dissolved_share,
+        hydrosol_is_the_product: dissolved_share > oil_yield::HYDROSOL_PRODUCT_SHARE,
+        cohobation_advised: dissolved_share > oil_yield::COHOBATION_SHARE && !s.run.cohobation,
+    }
 }
 
 /// The library's compounds and crops, for pickers in the page.

@@ -2,13 +2,11 @@
 //! still (time to the first drop), the run to the target recovery, and the boiler's water.
 
 use super::equilibrium::Equilibrium;
+use super::knobs::Knobs;
 use super::site::Site;
 use super::{FieldError, Resolved, RunLimit, RunPlan, compute_error};
 use crate::scenario::Scenario;
 use crate::{heat, recovery, water};
-
-/// Points on the recovery curve the page draws.
-const RECOVERY_CURVE_POINTS: usize = 24;
 
 /// The time line as later stages need it.
 pub(super) struct Timeline {
@@ -42,10 +40,11 @@ pub(super) fn heat_source(s: &Scenario, r: &Resolved, h_fg: f64) -> (f64, f64) {
 
 /// Heat lost through the still's wall at the co-distillation temperature (U A ΔT); zero when
 /// the still's volume is not given.
-pub(super) fn wall_loss_w(s: &Scenario, inside_c: f64) -> f64 {
+pub(super) fn wall_loss_w(s: &Scenario, knobs: &Knobs, inside_c: f64) -> f64 {
     let area =
         s.still.volume_m3.map(|v| heat::cylinder_surface_m2(v, s.still.height_to_diameter)).unwrap_or(0.0);
-    heat::wall_loss_w(s.still.wall_u_w_per_m2_k, area, inside_c, s.site.ambient_temperature_c)
+    let u = s.still.wall_u_w_per_m2_k * knobs.wall_u_factor;
+    heat::wall_loss_w(u, area, inside_c, s.site.ambient_temperature_c)
 }
 
 /// Sensible heat to bring the charge and the still's metal to the co-distillation temperature.
@@ -67,16 +66,58 @@ fn warm_up_heat_j(s: &Scenario, r: &Resolved, t_cd_c: f64) -> (f64, f64) {
     (charge, still)
 }
 
-/// Run length after the first drop: the longer of the plant's release time (first order) and
-/// the time the steam needs to carry the least steam to the target.
-fn run_length(r: &Resolved, eq: &Equilibrium, distillate_rate: f64) -> (f64, RunLimit) {
-    let release_time_s = recovery::time_to_fraction_s(r.rate_constant_per_s, eq.target_fraction);
-    let steam_time_s = eq.plan.min_steam_to_target_kg / distillate_rate;
-    if steam_time_s > release_time_s {
-        (steam_time_s, RunLimit::Steam)
-    } else {
-        (release_time_s, RunLimit::Release)
+/// Least steam per kg of the charge's oil for the next bit of oil, once a share `carried` has
+/// come over: the current cut's least steam over its width, divided by the vapour-pressure knob.
+fn marginal_least_steam(eq: &Equilibrium, knobs: &Knobs, carried: f64) -> f64 {
+    let cuts = &eq.plan.cuts;
+    let cut = cuts.iter().find(|c| carried < c.to_fraction).or(cuts.last());
+    cut.map_or(f64::INFINITY, |c| c.steam_kg_per_kg_oil / (c.to_fraction - c.from_fraction).max(1e-9))
+        / knobs.vapour_pressure_factor
+}
+
+/// The release constant at this run's specific steam rate, and the vaporisation efficiency
+/// after channelling: a charge packed above the still's usual capacity lets steam bypass part
+/// of it, η × capacity / charge (judgement, common practice, no source).
+fn release_and_efficiency(s: &Scenario, r: &Resolved, knobs: &Knobs, distillate_rate: f64) -> (f64, f64) {
+    let q = distillate_rate * 3600.0 / s.charge.plant_mass_kg;
+    let q_ref = r.crop.map_or(q, |c| c.steam_rate_kg_per_h_per_kg);
+    let k = recovery::scaled_rate_constant_per_s(r.rate_constant_per_s, q, q_ref, knobs.kinetic_exponent);
+    let capacity = super::season::still_capacity_kg(s, r);
+    let packing = capacity.map_or(1.0, |cap| (cap / s.charge.plant_mass_kg).min(1.0));
+    (k, knobs.vaporisation_efficiency * packing)
+}
+
+/// Longest run the plan follows, s: a week of steaming.
+const LONGEST_RUN_S: f64 = 7.0 * 24.0 * 3600.0;
+
+/// The run after the first drop, from the coupled release-and-carry model
+/// ([`recovery::carry_over`]).
+fn run_course(
+    s: &Scenario,
+    r: &Resolved,
+    eq: &Equilibrium,
+    knobs: &Knobs,
+    distillate_rate: f64,
+) -> Result<(recovery::CarryOver, f64, f64), Box<FieldError>> {
+    let (k, efficiency) = release_and_efficiency(s, r, knobs, distillate_rate);
+    let steam_per_kg_oil = distillate_rate / eq.oil_in_charge_kg;
+    let course = recovery::carry_over(
+        k,
+        steam_per_kg_oil,
+        efficiency,
+        |c| marginal_least_steam(eq, knobs, c),
+        eq.target_fraction,
+        LONGEST_RUN_S,
+    );
+    if course.time_to_target_s.is_none() {
+        return Err(compute_error(
+            "boiler.heat_input_w",
+            s.boiler.heat_input_w,
+            "enough steam to reach the target within a week",
+            "the steam is far too little for this charge: the run would last more than a week",
+        ));
     }
+    Ok((course, k, efficiency))
 }
 
 /// Water that tops the boiler up: the returned distillate (cohobation, arriving at the
@@ -121,22 +162,13 @@ fn steam_velocity_m_per_s(s: &Scenario, eq: &Equilibrium, distillate_rate: f64) 
     Some(distillate_rate / (rho_v * std::f64::consts::PI * d * d / 4.0))
 }
 
-fn recovery_curve(k_per_s: f64, run_s: f64) -> Vec<(f64, f64)> {
-    let end = run_s.max(1.0);
-    (0..=RECOVERY_CURVE_POINTS)
-        .map(|i| {
-            let t = end * i as f64 / RECOVERY_CURVE_POINTS as f64;
-            (t, recovery::recovered_fraction(k_per_s, t))
-        })
-        .collect()
-}
-
 /// The whole time line, lighting to the end of the run, with the boiler's water balance.
 pub(super) fn timeline(
     s: &Scenario,
     r: &Resolved,
     site: &Site,
     eq: &Equilibrium,
+    knobs: &Knobs,
 ) -> Result<Timeline, Box<FieldError>> {
     let p = site.pressure_pa;
     let h_fg = site.latent_heat_j_per_kg;
@@ -152,7 +184,7 @@ pub(super) fn timeline(
     })?;
     let heat_per_kg_fill_j = site.saturated_liquid_enthalpy_j_per_kg - h_feed;
     let (useful_w, steam_rate) = heat_source(s, r, h_fg);
-    let wall_loss_w = wall_loss_w(s, t_cd_c);
+    let wall_loss_w = wall_loss_w(s, knobs, t_cd_c);
     if wall_loss_w >= 0.9 * useful_w {
         return Err(compute_error(
             "boiler.heat_input_w",
@@ -171,7 +203,9 @@ pub(super) fn timeline(
     let warm_up_s = (charge_heating_j + still_heating_j) / (useful_w - wall_loss_w);
     let time_to_first_drop_s = time_to_boil_s + warm_up_s;
 
-    let (time_after_first_drop_s, limited_by) = run_length(r, eq, distillate_rate);
+    let (course, k, vaporisation_efficiency) = run_course(s, r, eq, knobs, distillate_rate)?;
+    let time_after_first_drop_s = course.time_to_target_s.unwrap_or(LONGEST_RUN_S);
+    let limited_by = if course.steam_limited { RunLimit::Steam } else { RunLimit::Release };
     let distillate_steam_kg = distillate_rate * time_after_first_drop_s;
     let evaporated_kg = startup_condensate_kg
         + wall_loss_w * (warm_up_s + time_after_first_drop_s) / h_fg
@@ -192,7 +226,7 @@ pub(super) fn timeline(
 
     let oil_recovered_kg = eq.oil_in_charge_kg * eq.target_fraction;
     let plan = RunPlan {
-        rate_constant_per_min: r.rate_constant_per_s * 60.0,
+        rate_constant_per_min: k * 60.0,
         steam_rate_kg_per_s: steam_rate,
         distillate_steam_rate_kg_per_s: distillate_rate,
         useful_heat_w: useful_w,
@@ -212,7 +246,9 @@ pub(super) fn timeline(
         boiler_water_evaporated_kg: evaporated_kg,
         boiler_dry_after_s,
         refills,
-        recovery_curve: recovery_curve(r.rate_constant_per_s, time_after_first_drop_s),
+        recovery_curve: course.curve,
+        reference_rate_constant_per_min: r.rate_constant_per_s * 60.0,
+        vaporisation_efficiency,
     };
     Ok(Timeline {
         plan,
