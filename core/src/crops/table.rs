@@ -11,13 +11,19 @@
 //!   iapws 1.5.5). Ranges given as "specific gravity" without a reference temperature are read
 //!   as g/cm³.
 //! - First-order constants derived from a run time use k ≈ 3 / t95 (95 % recovered at t95).
-//! - Heat capacity of the charge: 3800 J/(kg K) for fresh leafy material at about 80-85 %
-//!   water (Zhang, Kaiser, Zhang, Marcelis & Vialet-Chabrand, Plant Methods 2025,
-//!   doi:10.1186/s13007-025-01326-3: 3.2-4.0 kJ/(kg K) for fresh leaves of 13 species; the
-//!   Choi & Okos (1986) food-property model gives 3.81 at 84 % water); 3200 for wilted or
-//!   woody-leaved material at about 60 % water and 2000 for air-dried material at about 10 %
-//!   (Choi & Okos model as given in the ASHRAE Refrigeration Handbook, coefficients from
-//!   memory, dry-matter composition assumed: 3.23 and 2.02 kJ/(kg K)).
+//! - Heat capacity of the charge follows its moisture: `charge_heat_capacity_j_per_kg_k`
+//!   (Siebel's mass-weighted rule) of `moisture_fraction` and dry matter at 1700 J/(kg K)
+//!   (wood 1630). At 84 % water it gives 3.78 kJ/(kg K), inside the 3.2-4.0 measured on fresh
+//!   leaves of 13 species (Zhang, Kaiser, Zhang, Marcelis & Vialet-Chabrand, Plant Methods 2025,
+//!   doi:10.1186/s13007-025-01326-3); at 60 % and 10 % it gives 3.19 and 1.95, against 3.23 and
+//!   2.02 from the Choi & Okos (1986) model (ASHRAE Refrigeration Handbook, coefficients from
+//!   memory).
+//! - Oil content and moisture are on the basis of `charge_condition` (fresh, wilted or dried).
+//!   A figure published on the other basis is converted by the dry matter: × (1 - w_to)/(1 - w_from).
+//! - Run and rate constant agree through t95 = 3/k: where the run time is the better-sourced
+//!   number k is derived from it, otherwise the run is derived from k (the row says which).
+//! - `typical_water_to_oil_ratio` is practice where a figure was found; otherwise it is derived
+//!   from the row itself (steam rate × typical run / oil content), a factor 2 either side.
 //! - Charge (packing) densities other than the lavender one are from memory: fresh leafy herbs
 //!   loosely forked or trodden 100-250 kg/m³, dried herb 80-150, crushed seeds 350-550, wood
 //!   chips 200-300; the middle of the class is taken unless the row says otherwise.
@@ -28,8 +34,8 @@ const fn spread(low: f64, typical: f64, high: f64) -> Spread {
     Spread { low, typical, high }
 }
 
-const WILTED_HEAT_SOURCE: &str = "Wilted or woody-leaved material at about 60 % water: 3200 J/(kg K) (Choi & Okos model, as given in the ASHRAE Refrigeration Handbook, coefficients from memory: 3.23 kJ/(kg K) at 60 %)";
-const DRIED_HEAT_SOURCE: &str = "Air-dried material at about 10 % water: 2000 J/(kg K) (Choi & Okos model, as given in the ASHRAE Refrigeration Handbook, coefficients from memory: 2.02 kJ/(kg K) at 10 %)";
+const WILTED_HEAT_SOURCE: &str = "Wilted or woody-leaved material at about 60 % water, from memory; heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`, dry matter 1700 J/(kg K)): 3.19 kJ/(kg K), against 3.23 from the Choi & Okos model (ASHRAE Refrigeration Handbook, coefficients from memory)";
+const DRIED_HEAT_SOURCE: &str = "Air-dried material at about 10 % water, from memory; heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`, dry matter 1700 J/(kg K)): 1.95 kJ/(kg K), against 2.02 from the Choi & Okos model (ASHRAE Refrigeration Handbook, coefficients from memory)";
 
 const WARM_CONDENSATE_SOURCE: &str = "Oils that crystallise or congeal (peppermint, aniseed, fennel, caraway, rose): keep the condenser worm at 30-40 °C (Roundell, The Still-room, 1903, p. 100); separation is faster and cleaner when warm (Bragantia, Instituto Agronômico de Campinas, 1961)";
 const COOL_CONDENSATE_SOURCE: &str = "About 30 °C: common practice, no source. Warmer condensate separates faster (Bragantia, Instituto Agronômico de Campinas, 1961)";
@@ -55,15 +61,21 @@ pub static CROPS: &[Crop] = &[
         oil_density_source: "d20/20 0.880-0.890 (Surburg & Panten, Common Fragrance and Flavor Materials, French lavender, via ChemicalBook); midpoint × 998.2 kg/m³",
         rate_constant_per_min: spread(0.012, 0.05, 0.08),
         rate_constant_source: "Typical 0.05: yield maximum at 60 min (Zheljazkov, Cantrell, Astatkie & Jeliazkova, J Oleo Sci 62:195-199, 2013), k ≈ 3/60; low 0.012: two points (1 % at 40 min, 2 % at 120 min; Wesołowska, Jadczak & Grzeszczuk, Herba Polonica) fitted to first order, a lower bound; high 0.08: near the exudation constant 0.072 per min measured for lavandin (Cerpa, Mato & Cocero, AIChE J 54:909-917, 2008), rounded up, judgement",
-        typical_run_min: spread(30.0, 45.0, 60.0),
-        typical_run_source: "30-40 min in traditional Provence alembics (terraroma.fr, lavandes.fr, low weight); yield maximum at 60 min (Zheljazkov et al. 2013)",
+        typical_run_min: spread(30.0, 60.0, 90.0),
+        typical_run_source: "Typical 60: yield maximum at 60 min (Zheljazkov et al. 2013), the same source as k; low 30: 30-40 min in traditional Provence alembics, which leave oil behind (terraroma.fr, lavandes.fr, low weight); high 90: from memory",
+        typical_water_to_oil_ratio: spread(10.0, 20.0, 30.0),
+        water_to_oil_source: "At most 20:1 in good practice (E.F.K. Denny, in Lis-Balchin (ed.), Lavender: the genus Lavandula, 2002; attribution from memory); 10 and 30 from memory",
         steam_rate_kg_per_h_per_kg: 0.3,
         steam_rate_source: "Total distillate water:oil should not exceed 20:1 for lavender (text attributed to E.F.K. Denny in Lis-Balchin (ed.), Lavender: the genus Lavandula, 2002; attribution from memory), i.e. at most 0.13-0.3 kg steam per kg charge per run for 0.67-1.5 % oil; 0.3 kg/h per kg (range 0.2-0.6) is a judgement, no source",
         charge_density_kg_per_m3: 165.0,
         charge_density_source: "60 L still packed to the top with 9-11 kg of fresh lavender: 150-183 kg/m³ (ebonyhillsfarm.com.au, low weight); middle taken",
+        charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
-        plant_heat_capacity_j_per_kg_k: 3200.0,
-        thermal_source: "No published moisture at harvest found; lavender is usually wilted 1-2 days before distilling (terraroma.fr, lavandes.fr, low weight); 50-65 % water at cutting from memory, 60 % taken. Heat capacity: Choi & Okos model, as given in the ASHRAE Refrigeration Handbook, coefficients from memory: 3.23 kJ/(kg K) at 60 %",
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.6,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
+        thermal_source: "No published moisture at harvest found; lavender is usually wilted 1-2 days before distilling (terraroma.fr, lavandes.fr, low weight); 50-65 % water at cutting from memory, 60 % taken; heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`, dry matter 1700 J/(kg K))",
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
     },
@@ -88,13 +100,19 @@ pub static CROPS: &[Crop] = &[
         rate_constant_source: "Typical 0.07: exudation constant 0.072 per min, lavandin 'Super', bench steam distillation (Cerpa, Mato & Cocero, AIChE J 54:909-917, 2008); low 0.04: chopped green lavandin in caissons, 1-1.5 h per batch (terraroma.fr, low weight), k ≈ 3/75 rounded; high 0.08: judgement, no source",
         typical_run_min: spread(30.0, 40.0, 90.0),
         typical_run_source: "30-40 min for whole stems in traditional alembics; 60-90 min for chopped green material in mobile caissons (terraroma.fr, low weight)",
+        typical_water_to_oil_ratio: spread(19.0, 25.0, 33.0),
+        water_to_oil_source: "19-33:1 worked out from caisson fuel use, about 200 L fuel oil per hour for about 100 kg oil per caisson over 1-1.5 h (greenandzen blog, terraroma.fr, low weight); 25 taken",
         steam_rate_kg_per_h_per_kg: 0.4,
         steam_rate_source: "Caissons: ≈200 L fuel oil per hour for ≈100 kg oil per caisson over 1-1.5 h (greenandzen blog, terraroma.fr, low weight) gives ≈1.9-2.2 t/h steam (35.8 MJ/L, boiler 70-80 %) and water:oil 19-33:1; 0.4 kg/h per kg for whole stems (0.6 chopped) is a judgement, no source",
         charge_density_kg_per_m3: 165.0,
         charge_density_source: "Taken equal to fresh lavender: 60 L still packed with 9-11 kg, 150-183 kg/m³ (ebonyhillsfarm.com.au, low weight); no lavandin value found",
+        charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
-        plant_heat_capacity_j_per_kg_k: 3200.0,
-        thermal_source: "Taken equal to wilted lavender: 60 % water from memory; heat capacity 3.23 kJ/(kg K) at 60 % (Choi & Okos model, as given in the ASHRAE Refrigeration Handbook, coefficients from memory)",
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.6,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
+        thermal_source: "Taken equal to wilted lavender: 60 % water from memory; heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`, dry matter 1700 J/(kg K))",
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
     },
@@ -112,13 +130,19 @@ pub static CROPS: &[Crop] = &[
         rate_constant_source: "No fitted constant found for peppermint; 0.04 (0.025-0.06) matches a 60-90 min run (run times from memory), judgement",
         typical_run_min: spread(60.0, 75.0, 90.0),
         typical_run_source: "60-90 min after the first drop, from memory (1-1.5 h in a mint tub)",
+        typical_water_to_oil_ratio: spread(60.0, 120.0, 240.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.5 × 75/60 / 0.005 ≈ 120 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.5,
         steam_rate_source: "No published steam rate for peppermint seen; 0.5 kg/h per kg is a judgement close to the 0.54 kg/h per kg of a 300 g rosemary test (kttpmt.ntt.edu.vn, Vietnam)",
         charge_density_kg_per_m3: 175.0,
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.84,
-        plant_heat_capacity_j_per_kg_k: 3800.0,
-        thermal_source: "Fresh peppermint leaves 83.2-84.9 % water, wet basis (Pliestić, Dobričević & Filipović, hrcak.srce.hr/18199); heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025; Choi & Okos model 3.81 at 84 %)",
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.84,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
+        thermal_source: "Fresh peppermint leaves 83.2-84.9 % water, wet basis (Pliestić, Dobričević & Filipović, hrcak.srce.hr/18199); heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`, dry matter 1700 J/(kg K))",
         distillate_temperature_c: 40.0,
         distillate_temperature_source: WARM_CONDENSATE_SOURCE,
     },
@@ -136,13 +160,19 @@ pub static CROPS: &[Crop] = &[
         rate_constant_source: "No fitted constant found; taken equal to peppermint (a 60-90 min run, from memory), judgement",
         typical_run_min: spread(60.0, 75.0, 90.0),
         typical_run_source: "1-1.5 h, from memory",
+        typical_water_to_oil_ratio: spread(85.0, 170.0, 340.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.5 × 75/60 / 0.00375 ≈ 170 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.5,
         steam_rate_source: "Taken equal to peppermint, judgement, no source",
         charge_density_kg_per_m3: 175.0,
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
-        plant_heat_capacity_j_per_kg_k: 3800.0,
-        thermal_source: "Mint (M. spicata) 60-88 % water (ilovetranslation copy of a drying paper, low weight), 80 % taken; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025)",
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.8,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
+        thermal_source: "Mint (M. spicata) 60-88 % water (ilovetranslation copy of a drying paper, low weight), 80 % taken; heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`, dry matter 1700 J/(kg K))",
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
     },
@@ -165,12 +195,18 @@ pub static CROPS: &[Crop] = &[
         rate_constant_source: "No fitted constant found; 0.03 (0.02-0.05) matches the 70 min run of a 300 g test (kttpmt.ntt.edu.vn, Vietnam) and 100 min runs in a steam column (sid.ir), judgement",
         typical_run_min: spread(70.0, 90.0, 120.0),
         typical_run_source: "70 min (kttpmt.ntt.edu.vn, Vietnam); 100 min (sid.ir research-plan abstract, Iran); 120 min upper end from memory",
+        typical_water_to_oil_ratio: spread(15.0, 21.0, 40.0),
+        water_to_oil_source: "21:1 in a 300 g test of dried, blended rosemary (kttpmt.ntt.edu.vn, Vietnam); 15 and 40 from memory",
         steam_rate_kg_per_h_per_kg: 0.5,
         steam_rate_source: "0.045 mL/s distillate from 300 g of dried, blended rosemary = 0.54 kg/h per kg, water:oil ≈ 21:1 (kttpmt.ntt.edu.vn, Vietnam); a lower steam flow gave a higher yield in a small column (sid.ir); 0.5 taken",
         charge_density_kg_per_m3: 175.0,
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
-        plant_heat_capacity_j_per_kg_k: 3200.0,
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.6,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
         thermal_source: WILTED_HEAT_SOURCE,
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
@@ -189,12 +225,18 @@ pub static CROPS: &[Crop] = &[
         rate_constant_source: "No fitted constant found; the leaf oil lies in internal cavities, so slower than surface-gland herbs (from memory); 0.02 (0.01-0.03) matches a 90-150 min run, judgement",
         typical_run_min: spread(90.0, 120.0, 150.0),
         typical_run_source: "1-2 h for fresh leaf, longer in commercial stills, from memory",
+        typical_water_to_oil_ratio: spread(40.0, 80.0, 160.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.4 × 120/60 / 0.01 ≈ 80 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.4,
         steam_rate_source: "No normalised rate found (a pilot unit ran 5.73 g/min, Armijo et al., Rev Per Quím Ing Quím 15(2):19-27, 2012, charge not given); 0.4 kg/h per kg is a judgement, no source",
         charge_density_kg_per_m3: 175.0,
         charge_density_source: "Leaves with twigs, loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
-        plant_heat_capacity_j_per_kg_k: 3200.0,
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.6,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
         thermal_source: WILTED_HEAT_SOURCE,
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
@@ -220,12 +262,18 @@ pub static CROPS: &[Crop] = &[
         rate_constant_source: "Commercial stills 'cook' the cut biomass for up to 2 h (ATTIA, attia.org.au); k ≈ 0.025-0.03 per min if about 95 % is then recovered; high 0.04: judgement, no source",
         typical_run_min: spread(90.0, 105.0, 120.0),
         typical_run_source: "Up to 2 h (ATTIA, attia.org.au); 1.5-2 h per batch (ecoarts.cn, low weight)",
+        typical_water_to_oil_ratio: spread(29.0, 58.0, 120.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.5 × 105/60 / 0.015 ≈ 58 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.5,
         steam_rate_source: "No published steam rate seen; 0.5 kg/h per kg is a judgement, no source",
         charge_density_kg_per_m3: 250.0,
         charge_density_source: "Finely cut leaf and branchlet, packed: upper end of fresh leafy herbs (100-250 kg/m³) and middle of wood chips (200-300 kg/m³), from memory",
+        charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
-        plant_heat_capacity_j_per_kg_k: 3200.0,
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.6,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
         thermal_source: WILTED_HEAT_SOURCE,
         distillate_temperature_c: 40.0,
         distillate_temperature_source: "The condenser brings the mixture to 35-55 °C; the oil then stands 12 h in day tanks (ATTIA, attia.org.au); 40 °C taken",
@@ -236,20 +284,26 @@ pub static CROPS: &[Crop] = &[
         material: "Syzygium aromaticum, dried buds, comminuted",
         oil_content_percent: spread(12.9, 16.0, 21.0),
         oil_content_source: "Buds 12.9-18.5 % (Zachariah et al. 2005, via the book 'Volatiles from herbs and spices', issuhub.com); 15-21 % volatile oil (Merck Index / Leung text, druglead.com); typical 16 %",
-        composition: &[("eugenol", 0.75), ("beta-caryophyllene", 0.085)],
-        composition_source: "Eugenol 60-90 %, eugenyl acetate 2-27 %, β-caryophyllene 5-12 % (Merck Index text, druglead.com/cds/clove.html); midpoints. Not in the library: eugenyl acetate",
+        composition: &[("eugenol", 0.75), ("eugenyl-acetate", 0.145), ("beta-caryophyllene", 0.085)],
+        composition_source: "Eugenol 60-90 %, eugenyl acetate 2-27 %, β-caryophyllene 5-12 % (Merck Index text, druglead.com/cds/clove.html); midpoints",
         oil_density_kg_per_m3: 1046.0,
         oil_density_source: "d25/25 1.038-1.060, heavier than water (Merck Index text, druglead.com); midpoint × 997.0 kg/m³",
-        rate_constant_per_min: spread(0.005, 0.008, 0.015),
-        rate_constant_source: "No fitted constant found; 0.008 (0.005-0.015) matches an 8-12 h run (from memory), judgement. Clove is limited by steam, not by rate: eugenol needs at least about 25 kg water per kg oil (ideal immiscible equilibrium, computed with thermo 0.6.1 and CoolProp 8.0.0)",
+        rate_constant_per_min: spread(0.0042, 0.005, 0.0063),
+        rate_constant_source: "No fitted constant found; derived from the 8-12 h run (from memory) by k = 3/t95: 3/600, 3/720 and 3/480 per min. Clove is limited by steam, not by rate: eugenol needs at least about 25 kg water per kg oil (ideal immiscible equilibrium, computed with thermo 0.6.1 and CoolProp 8.0.0)",
         typical_run_min: spread(480.0, 600.0, 720.0),
         typical_run_source: "8-12 h or more, from memory",
+        typical_water_to_oil_ratio: spread(30.0, 40.0, 60.0),
+        water_to_oil_source: "From memory: 30-60:1 in practice. It cannot be under the ideal minimum, about 25:1 for eugenol alone at one atmosphere (computed with thermo 0.6.1 and CoolProp 8.0.0) and 26.5:1 for this oil with its eugenyl acetate (this program, sea level)",
         steam_rate_kg_per_h_per_kg: 0.5,
         steam_rate_source: "0.5 kg/h per kg is a judgement, no source; the run needs at least 4-5 kg steam per kg buds in total (about 25 kg water per kg eugenol at equilibrium × 16 % oil; computed with thermo 0.6.1 and CoolProp 8.0.0)",
         charge_density_kg_per_m3: 350.0,
         charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; lower end taken for comminuted buds",
+        charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
-        plant_heat_capacity_j_per_kg_k: 2000.0,
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.1,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
         thermal_source: DRIED_HEAT_SOURCE,
         distillate_temperature_c: 30.0,
         distillate_temperature_source: "About 30 °C: common practice, no source. The oil sinks (d25/25 1.038-1.060, Merck Index text): use a separator that draws oil from the bottom",
@@ -272,14 +326,20 @@ pub static CROPS: &[Crop] = &[
         oil_density_source: "Specific gravity 0.860-0.870 (A Treatise on Beverages, 'Oil of Coriander'); USP: 0.863-0.875; midpoint of the first",
         rate_constant_per_min: spread(0.03, 0.05, 0.09),
         rate_constant_source: "Hydrodistillation of crushed fruit: 1.20 % at 15 min, 1.62 % at 2 h (Pol J Food Nutr Sci 68(3):243-249, 2018) gives k ≈ 0.09 per min; steam distillation assumed slower (0.05, low 0.03), judgement",
-        typical_run_min: spread(60.0, 90.0, 120.0),
-        typical_run_source: "A 2 h laboratory run recovered 1.62 % (Pol J Food Nutr Sci 68(3), 2018); 60-120 min, judgement",
+        typical_run_min: spread(35.0, 60.0, 100.0),
+        typical_run_source: "Derived from k by t95 = 3/k (3/0.09, 3/0.05, 3/0.03 min); a 2 h laboratory run recovered 1.62 % (Pol J Food Nutr Sci 68(3), 2018)",
+        typical_water_to_oil_ratio: spread(26.0, 53.0, 110.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.4 × 60/60 / 0.0075 ≈ 53 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.4,
         steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
         charge_density_kg_per_m3: 450.0,
         charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
-        plant_heat_capacity_j_per_kg_k: 2000.0,
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.1,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
         thermal_source: DRIED_HEAT_SOURCE,
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
@@ -304,12 +364,18 @@ pub static CROPS: &[Crop] = &[
         rate_constant_source: "No fitted constant found; taken equal to rosemary (a leafy Lamiaceae herb distilled 70-120 min), judgement",
         typical_run_min: spread(90.0, 120.0, 180.0),
         typical_run_source: "1.5-3 h, from memory",
+        typical_water_to_oil_ratio: spread(24.0, 48.0, 96.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.5 × 120/60 / 0.021 ≈ 48 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.5,
         steam_rate_source: "Taken equal to rosemary (0.54 kg/h per kg in a 300 g test, kttpmt.ntt.edu.vn, Vietnam), judgement",
         charge_density_kg_per_m3: 175.0,
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
-        plant_heat_capacity_j_per_kg_k: 3200.0,
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.6,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
         thermal_source: WILTED_HEAT_SOURCE,
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
@@ -330,16 +396,22 @@ pub static CROPS: &[Crop] = &[
         composition_source: "From memory (carvacrol-type oregano oil): carvacrol about 60-75, p-cymene 5-10, γ-terpinene 3-7, thymol and β-caryophyllene about 2 % each",
         oil_density_kg_per_m3: 948.0,
         oil_density_source: "About 0.935-0.960 at 20 °C, from memory; midpoint",
-        rate_constant_per_min: spread(0.02, 0.03, 0.05),
-        rate_constant_source: "No fitted constant found; taken equal to rosemary, judgement",
+        rate_constant_per_min: spread(0.017, 0.02, 0.025),
+        rate_constant_source: "No fitted constant found; derived from the 2-3 h run (from memory) by k = 3/t95: 3/150, 3/180 and 3/120 per min",
         typical_run_min: spread(120.0, 150.0, 180.0),
         typical_run_source: "2-3 h, from memory",
+        typical_water_to_oil_ratio: spread(22.0, 45.0, 90.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.5 × 150/60 / 0.0275 ≈ 45 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.5,
         steam_rate_source: "Taken equal to rosemary (0.54 kg/h per kg of dried charge in a 300 g test, kttpmt.ntt.edu.vn, Vietnam), judgement",
         charge_density_kg_per_m3: 115.0,
         charge_density_source: "Dried leaves or herb 80-150 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
-        plant_heat_capacity_j_per_kg_k: 2000.0,
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.1,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
         thermal_source: DRIED_HEAT_SOURCE,
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
@@ -354,26 +426,32 @@ pub static CROPS: &[Crop] = &[
         composition_source: "From memory: linalyl acetate about 56-78, linalool 6.5-24, β-caryophyllene about 2 %; midpoints. Not in the library: germacrene D, α-terpineol, sclareol",
         oil_density_kg_per_m3: 899.0,
         oil_density_source: "About 0.890-0.908 at 20 °C, from memory; midpoint",
-        rate_constant_per_min: spread(0.012, 0.05, 0.08),
-        rate_constant_source: "No fitted constant found; taken equal to lavender (flowering tops, Zheljazkov et al., J Oleo Sci 62:195-199, 2013, k ≈ 3/60), judgement",
+        rate_constant_per_min: spread(0.025, 0.033, 0.05),
+        rate_constant_source: "No fitted constant found; derived from the 1-2 h run (from memory) by k = 3/t95: 3/90, 3/120 and 3/60 per min",
         typical_run_min: spread(60.0, 90.0, 120.0),
         typical_run_source: "1-2 h, from memory",
+        typical_water_to_oil_ratio: spread(140.0, 270.0, 540.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.3 × 90/60 / 0.00165 ≈ 270 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.3,
         steam_rate_source: "Taken equal to lavender, judgement, no source",
         charge_density_kg_per_m3: 175.0,
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
-        plant_heat_capacity_j_per_kg_k: 3800.0,
-        thermal_source: "Fresh inflorescences, 80 % water from memory; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025)",
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.8,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
+        thermal_source: "Fresh inflorescences, 80 % water from memory; heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`, dry matter 1700 J/(kg K))",
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
     },
     Crop {
         id: "german-chamomile",
         name: "German chamomile",
-        material: "Matricaria chamomilla, fresh or partly dried flower heads",
-        oil_content_percent: spread(0.3, 0.65, 1.0),
-        oil_content_source: "0.3-1.0 % (Šavikin et al., Lekovite sirovine, abstract); typical = midpoint; a steam distillation reached 3.1 g oil per kg flowers after 720 min (Gawde, Cantrell, Zheljazkov, Astatkie & Schlegel, chamomile kinetics abstract)",
+        material: "Matricaria chamomilla, fresh flower heads",
+        oil_content_percent: spread(0.067, 0.14, 0.22),
+        oil_content_source: "0.3-1.0 % of the dried flower heads (Šavikin et al., Lekovite sirovine, abstract; pharmacopoeial assays are on the dried drug), converted to fresh flowers at 80 % water (fresh) and 10 % (dried): × (1 - 0.8)/(1 - 0.1) = 0.222, giving 0.067-0.22 %; typical = midpoint; a steam distillation reached 3.1 g oil per kg flowers after 720 min (Gawde, Cantrell, Zheljazkov, Astatkie & Schlegel, chamomile kinetics abstract)",
         composition: &[("beta-caryophyllene", 1.0)],
         composition_source: "The main compounds (bisabolol oxides A and B, bisabolone oxide A, chamazulene, (E)-β-farnesene, spiroethers; Gawde et al.; Šavikin et al.) are not in the library. β-Caryophyllene, a C15 sesquiterpene hydrocarbon like (E)-β-farnesene, stands in for the whole oil (fraction 1 by construction): a choice made here, no source; the real oil is less volatile",
         oil_density_kg_per_m3: 930.0,
@@ -382,13 +460,19 @@ pub static CROPS: &[Crop] = &[
         rate_constant_source: "Key constituents plateau after about 240 min, maximum 3.1 g/kg at 720 min (Gawde et al., chamomile steam-distillation kinetics abstract); t95 ≈ 240-480 min gives k ≈ 0.006-0.012 per min",
         typical_run_min: spread(240.0, 360.0, 480.0),
         typical_run_source: "Plateau after about 240 min (Gawde et al.); 6-13 h in practice, from memory",
+        typical_water_to_oil_ratio: spread(850.0, 1700.0, 3400.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.4 × 360/60 / 0.0014 ≈ 1700 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.4,
         steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
         charge_density_kg_per_m3: 175.0,
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
-        plant_heat_capacity_j_per_kg_k: 3800.0,
-        thermal_source: "Fresh flower heads, 80 % water from memory; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025)",
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.8,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
+        thermal_source: "Fresh flower heads, 80 % water from memory; heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`, dry matter 1700 J/(kg K))",
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
     },
@@ -398,44 +482,68 @@ pub static CROPS: &[Crop] = &[
         material: "Rosa damascena, fresh flowers",
         oil_content_percent: spread(0.017, 0.025, 0.067),
         oil_content_source: "1/6000-1/3000 of flower weight, 0.017-0.033 % (Wikipedia 'Rose oil'); typical 0.025: 1 kg oil per about 4000 kg flowers (sonomascentstudio.com, low weight; phyto-aroma.com, low weight); high 0.067 % after 5 h (Sharma & Kumar, J Essent Oil Bear Plants 21:92, 2018)",
-        composition: &[("citronellol", 0.30), ("geraniol", 0.18), ("2-phenylethanol", 0.02)],
-        composition_source: "From memory (ISO 9842-type rose oil): citronellol about 20-40, geraniol 15-22, 2-phenylethanol 1-3 % (most of it stays in the rose water). Not in the library: nerol 5-12 %, the paraffin 'stearoptene' (nonadecane, heneicosane) about 15 %",
+        composition: &[
+            ("citronellol", 0.30),
+            ("geraniol", 0.18),
+            ("nerol", 0.08),
+            ("nonadecane", 0.10),
+            ("heneicosane", 0.04),
+            ("2-phenylethanol", 0.02),
+        ],
+        composition_source: "From memory (ISO 9842-type rose oil): citronellol about 20-40, geraniol 15-22, 2-phenylethanol 1-3 % (most of it stays in the rose water). nerol 5-12 % (8 taken), the paraffin 'stearoptene' about 15 %, mostly nonadecane with some heneicosane (10 + 4 taken). Not in the library: eicosane, methyleugenol, farnesol (a few % each)",
         oil_density_kg_per_m3: 855.0,
         oil_density_source: "About 0.848-0.861 (ISO 9842-type), from memory; midpoint. The oil congeals near 18-23 °C",
         rate_constant_per_min: spread(0.01, 0.03, 0.05),
         rate_constant_source: "Typical 0.03 and high 0.05: the still is fired 60-105 min for the first stage (Wikipedia 'Rose oil'), k ≈ 3/100 and 3/60; low 0.01: maximum oil content reached at 5 h (Sharma & Kumar, J Essent Oil Bear Plants 21:92, 2018), k ≈ 3/300",
         typical_run_min: spread(60.0, 90.0, 300.0),
         typical_run_source: "60-105 min first stage, then cohobation of the waters (Wikipedia 'Rose oil'); 5 h to the maximum (Sharma & Kumar 2018)",
+        typical_water_to_oil_ratio: spread(2000.0, 4000.0, 8000.0),
+        water_to_oil_source: "1 kg oil per 3000-6000 kg flowers (Wikipedia 'Rose oil') with about 1 kg of first distillate per kg flowers (from memory), before cohobation; low and high from memory",
         steam_rate_kg_per_h_per_kg: 0.4,
         steam_rate_source: "No published steam rate seen (rose is traditionally water-distilled); 0.4 kg/h per kg is a judgement, no source",
         charge_density_kg_per_m3: 175.0,
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken for fresh flowers",
+        charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
-        plant_heat_capacity_j_per_kg_k: 3800.0,
-        thermal_source: "Fresh flowers, 80 % water from memory; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025)",
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.8,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
+        thermal_source: "Fresh flowers, 80 % water from memory; heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`, dry matter 1700 J/(kg K))",
         distillate_temperature_c: 40.0,
         distillate_temperature_source: WARM_CONDENSATE_SOURCE,
     },
     Crop {
         id: "juniper-berry",
         name: "Juniper berry",
-        material: "Juniperus communis, ripe or dried berries, crushed",
+        material: "Juniperus communis, dried berries, crushed",
         oil_content_percent: spread(0.5, 1.5, 2.6),
         oil_content_source: "0.5-0.6 % non-fermented, 0.8-1.6 % fermented, dried Italian berries up to 2.6 % (ChemicalBook juniper berry oil, Fenaroli text); typical 1.5, from memory",
-        composition: &[("alpha-pinene", 0.311), ("myrcene", 0.163), ("terpinen-4-ol", 0.035)],
-        composition_source: "A commercial oil: α-pinene 31.1, myrcene 16.3 % (Falcão et al., Ind. Crops Prod. 124:878, 2018); terpinen-4-ol 1-6 %, the main oxygenated compound (Bauer, Garbe & Surburg via ChemicalBook CB5126800), midpoint. Not in the library: sabinene 7.5 %",
+        composition: &[
+            ("alpha-pinene", 0.416),
+            ("beta-pinene", 0.276),
+            ("d-limonene", 0.064),
+            ("terpinen-4-ol", 0.035),
+        ],
+        composition_source: "A laboratory oil: α-pinene 41.6, β-pinene 27.6, limonene 6.4 % (Falcão et al., Ind. Crops Prod. 124:878, 2018; α-pinene 25-45 % in Bauer, Garbe & Surburg via ChemicalBook CB5126800); terpinen-4-ol 1-6 %, the main oxygenated compound (Bauer, Garbe & Surburg), midpoint. A commercial oil in the same paper had α-pinene 31.1, myrcene 16.3, sabinene 7.5 % (sabinene is not in the library)",
         oil_density_kg_per_m3: 865.0,
         oil_density_source: "d20 0.850-0.880 (Bauer, Garbe & Surburg via ChemicalBook CB5126800); midpoint, read as g/cm³",
         rate_constant_per_min: spread(0.01, 0.015, 0.02),
         rate_constant_source: "Washing and diffusion run at the same time in juniper berries (Marković et al., J Chem Technol Biotechnol 91:883-891, 2016), values not seen; 0.015 matches a 3-5 h run, judgement; about 30 % may come off at once from crushed berries, judgement",
         typical_run_min: spread(180.0, 240.0, 300.0),
         typical_run_source: "3-5 h, judgement; 4-8 h, from memory",
+        typical_water_to_oil_ratio: spread(55.0, 110.0, 220.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.4 × 240/60 / 0.015 ≈ 110 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.4,
         steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
         charge_density_kg_per_m3: 450.0,
         charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken for crushed berries",
+        charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
-        plant_heat_capacity_j_per_kg_k: 2000.0,
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.1,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
         thermal_source: DRIED_HEAT_SOURCE,
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
@@ -452,15 +560,21 @@ pub static CROPS: &[Crop] = &[
         oil_density_source: "Specific gravity 0.8725-0.8965 at 25 °C (Nepali producer specifications, alternative.org.np, nripl.net; low weight); midpoint × 997.0 kg/m³",
         rate_constant_per_min: spread(0.009, 0.045, 0.05),
         rate_constant_source: "Typical 0.045: mean k 0.0451 for steam distillation of 100 g (Amenaghawon et al., IJASE 12(2):107-115, 2014; unit presumably per min); low 0.009: hydrodistillation 0.0087-0.0109 per min (Baou et al., Asian J Res Chem 15(3), 2022); high 0.05: judgement",
-        typical_run_min: spread(60.0, 90.0, 180.0),
-        typical_run_source: "Optimum 180 min in a 25-30 kg water-steam still (thuvienso.quangbinhuni.edu.vn); 60-120 min, judgement",
+        typical_run_min: spread(60.0, 70.0, 180.0),
+        typical_run_source: "Optimum 180 min in a 25-30 kg water-steam still (thuvienso.quangbinhuni.edu.vn); typical 70 ≈ 3/k with the measured k 0.045 (Amenaghawon et al. 2014); 60-120 min, judgement",
+        typical_water_to_oil_ratio: spread(110.0, 220.0, 440.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.5 × 70/60 / 0.00265 ≈ 220 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.5,
         steam_rate_source: "No normalised rate found; looser packing and more steam raise yield in 70-1000 kg pilot stills (Koul et al., Indian J Chem Technol 11:135-139, 2004); 0.5 kg/h per kg is a judgement",
         charge_density_kg_per_m3: 175.0,
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
-        plant_heat_capacity_j_per_kg_k: 3800.0,
-        thermal_source: "Fresh leaves, 80 % water from memory; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025)",
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.8,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
+        thermal_source: "Fresh leaves, 80 % water from memory; heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`, dry matter 1700 J/(kg K))",
         distillate_temperature_c: 32.0,
         distillate_temperature_source: "For the related citronella grass the condensate should be 30-35 °C, with losses above 60 °C (haihangindustry.com, low weight); 32 °C taken",
     },
@@ -478,13 +592,19 @@ pub static CROPS: &[Crop] = &[
         rate_constant_source: "No fitted constant found (basil was modelled by single-plate diffusion, Cassel et al., Ind. Crops Prod. 29:171-176, 2009, values not seen); taken equal to peppermint, judgement",
         typical_run_min: spread(60.0, 90.0, 120.0),
         typical_run_source: "1-2 h, from memory",
+        typical_water_to_oil_ratio: spread(180.0, 360.0, 720.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.5 × 90/60 / 0.0021 ≈ 360 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.5,
         steam_rate_source: "Taken equal to peppermint, judgement, no source",
         charge_density_kg_per_m3: 175.0,
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.85,
-        plant_heat_capacity_j_per_kg_k: 3800.0,
-        thermal_source: "Fresh herb, about 85 % water from memory; heat capacity: fresh leafy material 3800 J/(kg K) (Zhang et al., Plant Methods 2025; Choi & Okos model 3.81 at 84 %)",
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.85,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
+        thermal_source: "Fresh herb, about 85 % water from memory; heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`, dry matter 1700 J/(kg K))",
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
     },
@@ -502,13 +622,19 @@ pub static CROPS: &[Crop] = &[
         rate_constant_source: "No fitted constant found; k ≈ 3/t95 for runs of 8 h (0.006), 16 h (0.003) and 48 h (0.001), the run times from memory",
         typical_run_min: spread(480.0, 960.0, 2880.0),
         typical_run_source: "8-48 h, from memory",
+        typical_water_to_oil_ratio: spread(230.0, 460.0, 920.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.4 × 960/60 / 0.014 ≈ 460 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.4,
         steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
         charge_density_kg_per_m3: 250.0,
         charge_density_source: "Wood chips 200-300 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.12,
-        plant_heat_capacity_j_per_kg_k: 1940.0,
-        thermal_source: "Air-dry wood at about 12 % water, from memory; heat capacity by mass-weighted mixing (common practice, no source): 0.88 × 1630 J/(kg K) (ASHRAE woods, computed with ht 1.2.0) + 0.12 × 4180 (water) ≈ 1940",
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.12,
+            DRY_WOOD_HEAT_CAPACITY_J_PER_KG_K,
+        ),
+        thermal_source: "Air-dry wood at about 12 % water, from memory; heat capacity from the moisture by Siebel's rule (`charge_heat_capacity_j_per_kg_k`) with dry wood 1630 J/(kg K) (ASHRAE woods, computed with ht 1.2.0): 0.88 × 1630 + 0.12 × 4180 ≈ 1940",
         distillate_temperature_c: 30.0,
         distillate_temperature_source: COOL_CONDENSATE_SOURCE,
     },
@@ -522,16 +648,22 @@ pub static CROPS: &[Crop] = &[
         composition_source: "From memory: (E)-anethole about 87-94 %, estragole 0.5-5 %",
         oil_density_kg_per_m3: 985.0,
         oil_density_source: "About 0.980-0.990 at 20 °C, from memory; midpoint",
-        rate_constant_per_min: spread(0.03, 0.05, 0.09),
-        rate_constant_source: "No constant seen (Romdhane & Tizaoui 2005 report two regimes, values not seen); taken equal to coriander, judgement",
+        rate_constant_per_min: spread(0.017, 0.025, 0.05),
+        rate_constant_source: "No constant seen (Romdhane & Tizaoui 2005 report two regimes, values not seen); derived from the 1-3 h run (from memory) by k = 3/t95: 3/120, 3/180 and 3/60 per min",
         typical_run_min: spread(60.0, 120.0, 180.0),
         typical_run_source: "1-3 h, from memory",
+        typical_water_to_oil_ratio: spread(16.0, 32.0, 64.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.4 × 120/60 / 0.025 ≈ 32 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.4,
         steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
         charge_density_kg_per_m3: 450.0,
         charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
-        plant_heat_capacity_j_per_kg_k: 2000.0,
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.1,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
         thermal_source: DRIED_HEAT_SOURCE,
         distillate_temperature_c: 40.0,
         distillate_temperature_source: WARM_CONDENSATE_SOURCE,
@@ -546,16 +678,22 @@ pub static CROPS: &[Crop] = &[
         composition_source: "From memory (sweet fennel): (E)-anethole about 70-85 %, limonene about 5 %, estragole 2-6 %. Not in the library: fenchone (a few %), α-phellandrene",
         oil_density_kg_per_m3: 968.0,
         oil_density_source: "About 0.960-0.975 at 20 °C, from memory; midpoint",
-        rate_constant_per_min: spread(0.03, 0.05, 0.09),
-        rate_constant_source: "No constant seen (fennel fits simultaneous washing and diffusion in hydrodistillation, Milojević et al., Hem. Ind. 67(5):843-859, 2013, values not seen); taken equal to coriander, judgement",
+        rate_constant_per_min: spread(0.017, 0.025, 0.05),
+        rate_constant_source: "No constant seen (fennel fits simultaneous washing and diffusion in hydrodistillation, Milojević et al., Hem. Ind. 67(5):843-859, 2013, values not seen); derived from the 1-3 h run (from memory) by k = 3/t95: 3/120, 3/180 and 3/60 per min",
         typical_run_min: spread(60.0, 120.0, 180.0),
         typical_run_source: "1-3 h, from memory",
+        typical_water_to_oil_ratio: spread(10.0, 20.0, 40.0),
+        water_to_oil_source: "No practice figure found: derived from this row, steam rate × typical run / oil content = 0.4 × 120/60 / 0.04 ≈ 20 kg/kg; low and high a factor 2 either side (judgement)",
         steam_rate_kg_per_h_per_kg: 0.4,
         steam_rate_source: "No published steam rate seen; 0.4 kg/h per kg is a judgement, no source",
         charge_density_kg_per_m3: 450.0,
         charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken",
+        charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
-        plant_heat_capacity_j_per_kg_k: 2000.0,
+        plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
+            0.1,
+            DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
+        ),
         thermal_source: DRIED_HEAT_SOURCE,
         distillate_temperature_c: 40.0,
         distillate_temperature_source: WARM_CONDENSATE_SOURCE,
@@ -576,11 +714,12 @@ mod tests {
             && s.bytes().all(|b| b.is_ascii_lowercase() || b.is_ascii_digit() || b == b'-')
     }
 
-    fn spreads(c: &Crop) -> [(&'static str, Spread); 3] {
+    fn spreads(c: &Crop) -> [(&'static str, Spread); 4] {
         [
             ("oil_content_percent", c.oil_content_percent),
             ("rate_constant_per_min", c.rate_constant_per_min),
             ("typical_run_min", c.typical_run_min),
+            ("typical_water_to_oil_ratio", c.typical_water_to_oil_ratio),
         ]
     }
 
@@ -674,6 +813,7 @@ mod tests {
                 ("oil_density_source", c.oil_density_source),
                 ("rate_constant_source", c.rate_constant_source),
                 ("typical_run_source", c.typical_run_source),
+                ("water_to_oil_source", c.water_to_oil_source),
                 ("steam_rate_source", c.steam_rate_source),
                 ("charge_density_source", c.charge_density_source),
                 ("thermal_source", c.thermal_source),
@@ -681,6 +821,59 @@ mod tests {
             ] {
                 assert!(!text.trim().is_empty(), "{}: empty {}", c.id, field);
             }
+        }
+    }
+
+    #[test]
+    fn typical_run_agrees_with_the_rate_constant() {
+        // First-order release: 95 % is out at t95 = 3/k (the convention of the table header).
+        for c in CROPS {
+            let t95 = 3.0 / c.rate_constant_per_min.typical;
+            let run = c.typical_run_min;
+            assert!(
+                run.low <= t95 && t95 <= run.high,
+                "{}: 3/k = {t95:.0} min outside the typical run {:?}",
+                c.id,
+                run
+            );
+            assert!(
+                (run.typical - t95).abs() <= 0.25 * t95,
+                "{}: typical run {} min against 3/k = {t95:.0} min",
+                c.id,
+                run.typical
+            );
+        }
+    }
+
+    #[test]
+    fn moisture_matches_the_charge_condition() {
+        for c in CROPS {
+            let (lo, hi) = c.charge_condition.usual_moisture_fraction();
+            assert!(
+                (lo..=hi).contains(&c.moisture_fraction),
+                "{}: {:?} charge at {} water",
+                c.id,
+                c.charge_condition,
+                c.moisture_fraction
+            );
+        }
+    }
+
+    #[test]
+    fn fresh_charges_have_the_heat_capacity_measured_on_fresh_leaves() {
+        // 3.2-4.0 kJ/(kg K) for fresh leaves of 13 species (Zhang et al., Plant Methods 2025).
+        for c in CROPS.iter().filter(|c| c.charge_condition == ChargeCondition::Fresh) {
+            let cp = c.plant_heat_capacity_j_per_kg_k;
+            assert!((3200.0..=4000.0).contains(&cp), "{}: {cp} J/(kg K)", c.id);
+        }
+    }
+
+    #[test]
+    fn listed_compounds_cover_most_of_the_oil() {
+        // Renormalising over the listed compounds is only fair when they are most of the oil.
+        for c in CROPS {
+            let total: f64 = c.composition.iter().map(|&(_, x)| x).sum();
+            assert!(total >= 0.7, "{}: listed compounds cover only {:.0} %", c.id, total * 100.0);
         }
     }
 }
