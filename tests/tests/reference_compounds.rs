@@ -62,6 +62,13 @@ const HANDBOOK_BOILING_POINTS: &[(&str, f64, f64, &str)] = &[
         632.15,
         "Wikidata 629.25 K; CAS Common Chemistry 629.65 K; CRC Handbook 632.15 K",
     ),
+    (
+        "alpha-terpineol",
+        490.70,
+        492.95,
+        "NIST WebBook 490.70 K; CAS Common Chemistry 492.65 K; Yaws 492.95 K",
+    ),
+    ("geranyl-acetate", 513.15, 513.15, "CAS Common Chemistry; Yaws"),
 ];
 
 /// Correlations known to miss the handbook value by more than 1 K, with the gap allowed and why.
@@ -86,6 +93,13 @@ const KNOWN_DEVIATIONS: &[(&str, f64, &str)] = &[
          Chemistry (the only handbook value in chemicals 1.5.2); the row carries 10 %",
     ),
     (
+        "geranyl-acetate",
+        3.6,
+        "the NIST WebBook set boils at 516.6 K, at the top of its 346.7-516.5 K range, 3.5 K over the \
+         513.15 K of CAS Common Chemistry and Yaws; geranyl acetate decomposes near its boiling \
+         point, and the row carries 10 %",
+    ),
+    (
         "eugenyl-acetate",
         1.5,
         "the Landolt-Börnstein set boils at 555.4 K, 1.2 K over the 554.15 K of the handbooks",
@@ -108,7 +122,7 @@ fn every_measured_correlation_reproduces_its_handbook_boiling_point() {
         );
         checked += 1;
     }
-    assert!(checked >= 27, "only {checked} measured compounds");
+    assert!(checked >= 29, "only {checked} measured compounds");
 }
 
 #[test]
@@ -160,6 +174,9 @@ fn vapour_pressures_at_95_and_100_c_match_the_published_sets() {
         ("methyl-salicylate", 1340.0, 1704.0),
         ("beta-thujone", 2811.0, 3502.0),
         ("cinnamaldehyde", 386.0, 502.0),
+        // NIST WebBook sets as stored in thermo 0.6.1, evaluated with it:
+        ("alpha-terpineol", 1391.7, 1773.5),
+        ("geranyl-acetate", 443.4, 574.1),
     ];
     for &(id, p95, p100) in cases {
         let vp = find(id).unwrap().vapour_pressure;

@@ -7,7 +7,10 @@
 //!   measurement temperature; the decoded value and temperature are given here.
 //! - Vapour-pressure coefficients are copied exactly from the published set named in
 //!   `vapour_pressure_source` (as stored in chemicals 1.5.2; NIST WebBook sets converted back to
-//!   the WebBook's own form log10(p/bar) = A - B/(T/K + C) by A = A'/ln 10 - 5, B = B'/ln 10).
+//!   the WebBook's own form log10(p/bar) = A - B/(T/K + C) by A = A'/ln 10 - 5, B = B'/ln 10,
+//!   except the α-terpineol and geranyl acetate rows, kept in thermo 0.6.1's ln(p/Pa) form).
+//!   Where the sets stored in chemicals 1.5.2 and thermo 0.6.1 differ by more than 10 % at
+//!   100 °C, the row says so and its uncertainty carries the spread.
 //!   `t_min_k`..`t_max_k` is the range the authors fitted.
 //! - `relative_uncertainty` of a measured set used inside its range is 0.02-0.05: that figure is
 //!   common practice, no source. Larger figures are explained in the row.
@@ -194,7 +197,7 @@ pub static COMPOUNDS: &[Compound] = &[
             relative_uncertainty: 0.03, // common practice, no source
             confidence: Confidence::Measured,
         },
-        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 323-434 K (as stored in chemicals 1.5.2)",
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 323-434 K (as stored in chemicals 1.5.2); the NIST WebBook set (thermo 0.6.1) agrees within 0.2 % at 100 °C",
         water_solubility_kg_per_m3: 0.0046,
         water_solubility_relative_uncertainty: 0.5,
         water_solubility_source: "About 4.6 mg/L near 25 °C, from memory (low confidence)",
@@ -214,10 +217,13 @@ pub static COMPOUNDS: &[Compound] = &[
             form: CorrelationForm::AntoineLnPa { a: 22.747768, b: 4622.826408, c: -46.738 },
             t_min_k: 313.0,
             t_max_k: 458.0,
-            relative_uncertainty: 0.03, // common practice, no source
+            // The NIST WebBook set (313.7-452.1 K, as stored in thermo 0.6.1) gives 6758 Pa at
+            // 100 °C against this set's 5352, 26 % more, though it boils at 463.4 K, 3-5 K over
+            // the handbooks; this set reproduces the boiling point. 0.25 carries the spread.
+            relative_uncertainty: 0.25,
             confidence: Confidence::Measured,
         },
-        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 313-458 K (as stored in chemicals 1.5.2)",
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 313-458 K (as stored in chemicals 1.5.2); the NIST WebBook set is 26 % higher at 100 °C",
         water_solubility_kg_per_m3: 0.0095,
         water_solubility_relative_uncertainty: 0.5,
         water_solubility_source: "About 9.5 mg/L near 25 °C, from memory (low confidence)",
@@ -641,6 +647,55 @@ pub static COMPOUNDS: &[Compound] = &[
         water_solubility_source: "About 0.4 g/L near 25 °C, from memory (low confidence)",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.917 g/cm³ at 20 °C, from memory",
     },
+    Compound {
+        id: "alpha-terpineol",
+        name: "α-Terpineol",
+        cas: "98-55-5",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.154249,
+        liquid_density_kg_per_m3: 935.0,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 490.70,
+        boiling_point_source: "NIST WebBook 490.70 K (as tabulated in chemicals 1.5.2); CAS Common Chemistry 492.65 K, Yaws 492.95 K. Melts near 31-38 °C (from memory): a liquid in the still",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 21.710891, b: 4248.182, c: -74.617 },
+            t_min_k: 357.0,
+            t_max_k: 490.1,
+            relative_uncertainty: 0.05, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 357-490.1 K (as stored in thermo 0.6.1, ln(p/Pa) form); the only published set found",
+        water_solubility_kg_per_m3: 2.42,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "2.42 g/L (Wikipedia 'Terpineol' infobox, citing GESTIS, isomer mixture); 7.1 g/L at 25 °C is also quoted (smolecule.com, HSDB-type text): 0.5 for that spread",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: 0.93 g/cm³ (Wikipedia 'Terpineol' infobox, citing GESTIS, isomer mixture); 0.935 at 20 °C for the α-isomer, from memory",
+    },
+    Compound {
+        id: "geranyl-acetate",
+        name: "Geranyl acetate",
+        cas: "105-87-3",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.196286,
+        liquid_density_kg_per_m3: 910.0,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 513.15,
+        boiling_point_source: "CAS Common Chemistry and Yaws, 513.15 K (as tabulated in chemicals 1.5.2); decomposes near its boiling point (from memory)",
+        // The NIST WebBook set boils at 516.6 K, 3.5 K over the handbook value: about 8 % in
+        // pressure at 100 °C, hence 0.1 (judgement). The Landolt-Börnstein set for 105-87-3
+        // (C = +23.8 K) boils at 469 K and gives 4833 Pa at 100 °C: not used.
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 24.059228, b: 6154.9366, c: -25.54 },
+            t_min_k: 346.7,
+            t_max_k: 516.5,
+            relative_uncertainty: 0.1,
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 346.7-516.5 K (as stored in thermo 0.6.1, ln(p/Pa) form); 574 Pa at 100 °C",
+        water_solubility_kg_per_m3: 0.02,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 20 mg/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.907-0.918 g/cm³, from memory; 0.910 at 20 °C taken",
+    },
     // ---------------------------------------------------------------- phenylpropanoids
     Compound {
         id: "eugenol",
@@ -918,7 +973,10 @@ pub static COMPOUNDS: &[Compound] = &[
             },
             t_min_k: 257.85,
             t_max_k: 715.0,
-            relative_uncertainty: 0.03, // common practice, no source
+            // Other published sets at 100 °C (thermo 0.6.1): VDI PPDS 2049, Landolt-Börnstein
+            // 2054, DIPPR (Perry 8th ed.) 2065, NIST WebBook 2215, Wagner (McGarry) 2307 Pa, against
+            // this set's 2086: a 12.6 % spread, carried as 0.1.
+            relative_uncertainty: 0.1,
             confidence: Confidence::Measured,
         },
         vapour_pressure_source: "Poling, Prausnitz & O'Connell, The Properties of Gases and Liquids, 5th ed., Wagner 2.5,5, 257.85-715 K (as stored in chemicals 1.5.2)",
@@ -964,7 +1022,10 @@ pub static COMPOUNDS: &[Compound] = &[
             form: CorrelationForm::AntoineLnPa { a: 21.046088, b: 4450.436468, c: -135.55 },
             t_min_k: 462.0,
             t_max_k: 639.0,
-            relative_uncertainty: 0.1, // 100 °C is 90 K under the fitted range (judgement)
+            // 100 °C is 90 K under the fitted range. Other sets at 100 °C (thermo 0.6.1): Poling
+            // Antoine 10, VDI PPDS 10, DIPPR (Perry 8th ed.) 11, Poling Wagner 12 Pa; 0.2 carries
+            // that spread (the WebBook set, a 306-328 K fit, is left out).
+            relative_uncertainty: 0.2,
             confidence: Confidence::Measured,
         },
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 462-639 K (as stored in chemicals 1.5.2); extrapolated about 90 K below its range near 100 °C",
@@ -987,7 +1048,10 @@ pub static COMPOUNDS: &[Compound] = &[
             form: CorrelationForm::AntoineLnPa { a: 21.483579, b: 4893.223581, c: -138.25 },
             t_min_k: 393.0,
             t_max_k: 630.0,
-            relative_uncertainty: 0.05, // common practice, no source
+            // At 100 °C, 20 K below this set's range, it gives 2 Pa; the NIST WebBook set
+            // (425.8-623.7 K, as stored in thermo 0.6.1) gives 6 Pa. A factor of 3: 0.9, the most
+            // the table allows, and the plan's result hardly depends on it (a few % of rose oil).
+            relative_uncertainty: 0.9,
             confidence: Confidence::Measured,
         },
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 393-630 K (as stored in chemicals 1.5.2)",
