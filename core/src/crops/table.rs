@@ -560,7 +560,7 @@ pub static CROPS: &[Crop] = &[
         oil_content_percent: spread(0.2, 0.265, 0.5),
         oil_content_source: "Typical 0.265: 2.98 mL oil per kg from a 25-30 kg water-steam still, 10 mm cut, 180 min (thuvienso.quangbinhuni.edu.vn) × 0.885 oil density; 0.2-0.5 % of fresh leaves, from memory",
         composition: &[("geranial", 0.75), ("myrcene", 0.10), ("geraniol", 0.03)],
-        composition_source: "From memory: citral (geranial + neral) 65-85 %, myrcene up to 10-20 % in C. citratus, geraniol a few %. Neral is not in the library: all citral is entered as geranial (neral boils about 17 K lower, 485.1 against 502.15 K in the tables of chemicals 1.5.2, so this underestimates the oil's volatility a little)",
+        composition_source: "From memory: citral (geranial + neral) 65-85 %, myrcene up to 10-20 % in C. citratus, geraniol a few %. Neral is not in the library: all citral is entered as geranial (neral is the more volatile isomer; the 485.1 K listed for it in chemicals 1.5.2 is only a Joback group-contribution estimate and no measured vapour pressure was found, so this underestimates the oil's volatility by an unknown, probably small, amount)",
         oil_density_kg_per_m3: 882.0,
         oil_density_source: "Specific gravity 0.8725-0.8965 at 25 °C (Nepali producer specifications, alternative.org.np, nripl.net; low weight); midpoint × 997.0 kg/m³",
         rate_constant_per_min: spread(0.009, 0.045, 0.05),
