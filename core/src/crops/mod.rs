@@ -127,8 +127,12 @@ pub struct Crop {
     pub charge_condition: ChargeCondition,
     /// Water content of the charge as loaded, mass fraction (wet basis).
     pub moisture_fraction: f64,
+    /// Specific heat of the dry matter ([`DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K`] or
+    /// [`DRY_WOOD_HEAT_CAPACITY_J_PER_KG_K`]), for [`charge_heat_capacity_j_per_kg_k`] at
+    /// whatever moisture the grower enters.
+    pub dry_matter_heat_capacity_j_per_kg_k: f64,
     /// Specific heat of the charge as loaded: [`charge_heat_capacity_j_per_kg_k`] of
-    /// `moisture_fraction` and the dry matter's specific heat, so the two never disagree.
+    /// `moisture_fraction` and `dry_matter_heat_capacity_j_per_kg_k`, so they never disagree.
     pub plant_heat_capacity_j_per_kg_k: f64,
     pub thermal_source: &'static str,
     /// Recommended distillate (condenser outlet) temperature; warm for oils that congeal.

@@ -72,6 +72,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "60 L still packed to the top with 9-11 kg of fresh lavender: 150-183 kg/m³ (ebonyhillsfarm.com.au, low weight); middle taken",
         charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.6,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -109,6 +110,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Taken equal to fresh lavender: 60 L still packed with 9-11 kg, 150-183 kg/m³ (ebonyhillsfarm.com.au, low weight); no lavandin value found",
         charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.6,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -139,6 +141,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.84,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.84,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -169,6 +172,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.8,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -205,6 +209,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.6,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -235,6 +240,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Leaves with twigs, loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.6,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -274,6 +280,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Finely cut leaf and branchlet, packed: upper end of fresh leafy herbs (100-250 kg/m³) and middle of wood chips (200-300 kg/m³), from memory",
         charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.6,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -304,6 +311,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; lower end taken for comminuted buds",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.1,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -341,6 +349,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.1,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -377,6 +386,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Wilted,
         moisture_fraction: 0.6,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.6,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -413,6 +423,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Dried leaves or herb 80-150 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.1,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -443,6 +454,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.8,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -473,6 +485,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.8,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -510,6 +523,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken for fresh flowers",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.8,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -545,6 +559,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken for crushed berries",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.1,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -575,6 +590,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.8,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -605,6 +621,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.85,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.85,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -635,6 +652,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Wood chips 200-300 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.12,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_WOOD_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.12,
             DRY_WOOD_HEAT_CAPACITY_J_PER_KG_K,
@@ -665,6 +683,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.1,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -700,6 +719,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.1,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -730,6 +750,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.8,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -766,6 +787,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.75,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.75,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -801,6 +823,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.7,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.7,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -837,6 +860,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Chopped needles and twigs: upper half of fresh leafy material (100-250 kg/m³), from memory",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.65,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.65,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -867,6 +891,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Chopped fresh peel 350-450 kg/m³, from memory",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.78,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.78,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -903,6 +928,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.8,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -940,6 +966,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Dried leaves or herb 80-150 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.1,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -975,6 +1002,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.75,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.75,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -1005,6 +1033,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Crushed seeds 350-550 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.1,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -1040,6 +1069,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Cut grass, partly dried: between dried herb (80-150) and fresh leafy material (100-250 kg/m³), from memory",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.12,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.12,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -1076,6 +1106,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Dried leaves or herb 80-150 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.1,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -1106,6 +1137,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Fresh leafy herbs loosely forked or trodden: 100-250 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Fresh,
         moisture_fraction: 0.8,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.8,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -1136,6 +1168,7 @@ pub static CROPS: &[Crop] = &[
         charge_density_source: "Dried cones, like dried herb 80-150 kg/m³, from memory; middle taken",
         charge_condition: ChargeCondition::Dried,
         moisture_fraction: 0.1,
+        dry_matter_heat_capacity_j_per_kg_k: DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
         plant_heat_capacity_j_per_kg_k: charge_heat_capacity_j_per_kg_k(
             0.1,
             DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K,
@@ -1226,6 +1259,7 @@ mod tests {
                 ("charge_density_kg_per_m3", c.charge_density_kg_per_m3),
                 ("moisture_fraction", c.moisture_fraction),
                 ("plant_heat_capacity_j_per_kg_k", c.plant_heat_capacity_j_per_kg_k),
+                ("dry_matter_heat_capacity_j_per_kg_k", c.dry_matter_heat_capacity_j_per_kg_k),
                 ("distillate_temperature_c", c.distillate_temperature_c),
             ] {
                 assert!(x.is_finite() && x > 0.0, "{}: {} = {}", c.id, field, x);
@@ -1242,6 +1276,7 @@ mod tests {
             assert!((700.0..1200.0).contains(&c.oil_density_kg_per_m3), "{}", c.id);
             assert!((10.0..1000.0).contains(&c.charge_density_kg_per_m3), "{}", c.id);
             assert!((500.0..4200.0).contains(&c.plant_heat_capacity_j_per_kg_k), "{}", c.id);
+            assert!((1000.0..2500.0).contains(&c.dry_matter_heat_capacity_j_per_kg_k), "{}", c.id);
             assert!(c.rate_constant_per_min.high < 1.0, "{}", c.id);
             assert!(c.steam_rate_kg_per_h_per_kg < 5.0, "{}", c.id);
             assert!(c.distillate_temperature_c < 100.0, "{}", c.id);
