@@ -25,16 +25,86 @@ const HANDBOOK_BOILING_POINTS: &[(&str, f64, f64, &str)] = &[
     ("citronellol", 495.2, 497.65, "NIST WebBook 495.2 K; CRC Handbook 497.65 K"),
     ("2-phenylethanol", 491.4, 493.15, "CRC Handbook 493.15 K; NIST WebBook 491.4 K"),
     ("benzyl-alcohol", 478.45, 478.45, "CRC Handbook"),
+    (
+        "camphene",
+        431.65,
+        433.65,
+        "CAS Common Chemistry 431.65 K; Yaws 433.65 K (both as tabulated in chemicals 1.5.2)",
+    ),
+    ("terpinolene", 458.0, 460.15, "NIST WebBook 458 K; CRC Handbook 460.15 K"),
+    ("delta-3-carene", 443.15, 445.04, "CAS Common Chemistry 443.15 K; NIST WebBook 445.04 K"),
+    (
+        "alpha-phellandrene",
+        445.15,
+        448.15,
+        "CAS Common Chemistry 445.15 K; CRC Handbook 448.05 K; Yaws 448.15 K",
+    ),
+    (
+        "bornyl-acetate",
+        494.15,
+        501.15,
+        "CAS Common Chemistry 494.15 K; CRC l-bornyl acetate 496.65 K; CRC endo-racemate 501.15 K",
+    ),
+    ("beta-thujone", 475.65, 476.15, "CAS Common Chemistry β-thujone 475.65 K; Yaws α-thujone 476.15 K"),
+    ("nerol", 498.15, 498.15, "CRC Handbook; CAS Common Chemistry; Yaws"),
+    ("eugenyl-acetate", 554.15, 554.15, "CRC Handbook; CAS Common Chemistry; Yaws"),
+    ("cinnamaldehyde", 519.15, 519.15, "CRC Handbook (trans); CAS Common Chemistry; Yaws"),
+    (
+        "methyl-salicylate",
+        495.15,
+        495.83,
+        "CAS Common Chemistry 495.15 K; CRC Handbook 495.75 K; NIST WebBook 495.83 K",
+    ),
+    ("nonadecane", 602.87, 603.15, "NIST WebBook 602.87 K; CRC Handbook 603.15 K"),
+    (
+        "heneicosane",
+        629.25,
+        632.15,
+        "Wikidata 629.25 K; CAS Common Chemistry 629.65 K; CRC Handbook 632.15 K",
+    ),
+    (
+        "alpha-terpineol",
+        490.70,
+        492.95,
+        "NIST WebBook 490.70 K; CAS Common Chemistry 492.65 K; Yaws 492.95 K",
+    ),
+    ("geranyl-acetate", 513.15, 513.15, "CAS Common Chemistry; Yaws"),
 ];
 
 /// Correlations known to miss the handbook value by more than 1 K, with the gap allowed and why.
 /// Each is still checked, against this wider bound.
-const KNOWN_DEVIATIONS: &[(&str, f64, &str)] = &[(
-    "carvone",
-    2.0,
-    "the NIST WebBook set was fitted up to 500.7 K only and boils at 500.9 K, 1.9 K under the \
-     502.8-504.15 K handbook values; the table carries a 10 % uncertainty for it",
-)];
+const KNOWN_DEVIATIONS: &[(&str, f64, &str)] = &[
+    (
+        "carvone",
+        2.0,
+        "the NIST WebBook set was fitted up to 500.7 K only and boils at 500.9 K, 1.9 K under the \
+         502.8-504.15 K handbook values; the table carries a 10 % uncertainty for it",
+    ),
+    (
+        "nerol",
+        1.5,
+        "the Landolt-Börnstein set boils at 499.6 K, 1.4 K over the 498.15 K of CRC, CAS Common \
+         Chemistry and Yaws; about 2 % in pressure at 100 °C, inside its 5 %",
+    ),
+    (
+        "beta-thujone",
+        1.5,
+        "the Landolt-Börnstein set boils at 474.25 K, 1.4 K under the 475.65 K of CAS Common \
+         Chemistry (the only handbook value in chemicals 1.5.2); the row carries 10 %",
+    ),
+    (
+        "geranyl-acetate",
+        3.6,
+        "the NIST WebBook set boils at 516.6 K, at the top of its 346.7-516.5 K range, 3.5 K over the \
+         513.15 K of CAS Common Chemistry and Yaws; geranyl acetate decomposes near its boiling \
+         point, and the row carries 10 %",
+    ),
+    (
+        "eugenyl-acetate",
+        1.5,
+        "the Landolt-Börnstein set boils at 555.4 K, 1.2 K over the 554.15 K of the handbooks",
+    ),
+];
 
 #[test]
 fn every_measured_correlation_reproduces_its_handbook_boiling_point() {
@@ -52,7 +122,7 @@ fn every_measured_correlation_reproduces_its_handbook_boiling_point() {
         );
         checked += 1;
     }
-    assert!(checked >= 15, "only {checked} measured compounds");
+    assert!(checked >= 29, "only {checked} measured compounds");
 }
 
 #[test]
@@ -93,6 +163,20 @@ fn vapour_pressures_at_95_and_100_c_match_the_published_sets() {
         ("eugenol", 340.0, 442.0),
         ("geraniol", 604.0, 786.0),
         ("e-anethole", 787.0, 1004.0),
+        // Landolt-Börnstein IV/20 sets, evaluated with chemicals 1.5.2:
+        ("camphene", 11894.0, 14413.0),
+        ("terpinolene", 4294.0, 5352.0),
+        ("delta-3-carene", 9193.0, 11170.0),
+        ("alpha-phellandrene", 7286.0, 8914.0),
+        ("nerol", 853.0, 1092.0),
+        ("bornyl-acetate", 1642.0, 2045.0),
+        ("eugenyl-acetate", 92.7, 123.5),
+        ("methyl-salicylate", 1340.0, 1704.0),
+        ("beta-thujone", 2811.0, 3502.0),
+        ("cinnamaldehyde", 386.0, 502.0),
+        // NIST WebBook sets as stored in thermo 0.6.1, evaluated with it:
+        ("alpha-terpineol", 1391.7, 1773.5),
+        ("geranyl-acetate", 443.4, 574.1),
     ];
     for &(id, p95, p100) in cases {
         let vp = find(id).unwrap().vapour_pressure;
@@ -106,7 +190,7 @@ fn vapour_pressures_at_95_and_100_c_match_the_published_sets() {
 #[test]
 fn at_least_twenty_compounds_across_the_families() {
     use stillroom_core::compounds::CompoundClass::*;
-    assert!(COMPOUNDS.len() >= 20);
+    assert!(COMPOUNDS.len() >= 37);
     for class in [MonoterpeneHydrocarbon, OxygenatedMonoterpene, Phenylpropanoid, Sesquiterpene, RoseAlcohol]
     {
         assert!(COMPOUNDS.iter().any(|c| c.class == class), "{class:?} missing");

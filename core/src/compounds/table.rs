@@ -7,7 +7,10 @@
 //!   measurement temperature; the decoded value and temperature are given here.
 //! - Vapour-pressure coefficients are copied exactly from the published set named in
 //!   `vapour_pressure_source` (as stored in chemicals 1.5.2; NIST WebBook sets converted back to
-//!   the WebBook's own form log10(p/bar) = A - B/(T/K + C) by A = A'/ln 10 - 5, B = B'/ln 10).
+//!   the WebBook's own form log10(p/bar) = A - B/(T/K + C) by A = A'/ln 10 - 5, B = B'/ln 10,
+//!   except the α-terpineol and geranyl acetate rows, kept in thermo 0.6.1's ln(p/Pa) form).
+//!   Where the sets stored in chemicals 1.5.2 and thermo 0.6.1 differ by more than 10 % at
+//!   100 °C, the row says so and its uncertainty carries the spread.
 //!   `t_min_k`..`t_max_k` is the range the authors fitted.
 //! - `relative_uncertainty` of a measured set used inside its range is 0.02-0.05: that figure is
 //!   common practice, no source. Larger figures are explained in the row.
@@ -15,7 +18,12 @@
 //!   ln(p/Pa) = A - B/(T/K + C) with an assumed C = -43 K (a value typical of the published
 //!   terpenoid sets above: cineole -43.6, geraniol -42.4, estragole -41.9). The two points, C and
 //!   the resulting A and B are written beside each such row; the fitted range is the span
-//!   between the two points.
+//!   between the two points. Every such law is checked against a measured point it was not
+//!   fitted to (`tests/tests/reference_estimated_laws.rs`), and its uncertainty covers the gap.
+//! - Landolt-Börnstein sets not used because they contradict the handbook boiling point:
+//!   geranyl acetate (105-87-3, C = +23.8 K, boils at 469 K against 513 K), citronellyl
+//!   acetate (490 K against 502-514 K), pulegone (491 K against 497 K) and citral 5392-40-5
+//!   (a 284-312 K fit that boils at 479 K against 502 K); evaluated with chemicals 1.5.2.
 //! - Water solubilities marked "from memory" were not checked against a source; they carry a
 //!   relative uncertainty of 0.5.
 
@@ -156,7 +164,9 @@ pub static COMPOUNDS: &[Compound] = &[
         //                          so that the estimate boils at Tb).
         //   B = ln(101325/7470)/(1/330.15 - 1/413.15) = 4285.0410, A = ln 7470 + B/330.15 = 21.897724.
         // The same Lee-Kesler procedure is within 4 % of the measured α-pinene set at 100 °C, so
-        // 0.1 for this hydrocarbon (judgement from that one check, no source).
+        // 0.1 for this hydrocarbon (judgement from that one check, no source). No measured
+        // reduced-pressure point was found; the law's slope is checked against ΔHvap 51.4 kJ/mol
+        // at 298 K (Gharagheizi compilation in chemicals 1.5.2) in reference_estimated_laws.rs.
         vapour_pressure: VapourPressure {
             form: CorrelationForm::AntoineLnPa { a: 21.897724, b: 4285.0410, c: -43.0 },
             t_min_k: 373.15,
@@ -169,6 +179,101 @@ pub static COMPOUNDS: &[Compound] = &[
         water_solubility_relative_uncertainty: 0.5,
         water_solubility_source: "About 9 mg/L near 25 °C, from memory (low confidence)",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.849 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "camphene",
+        name: "Camphene",
+        cas: "79-92-5",
+        class: CompoundClass::MonoterpeneHydrocarbon,
+        molar_mass_kg_per_mol: 0.136234,
+        liquid_density_kg_per_m3: 842.0,
+        density_temperature_c: 54.0,
+        normal_boiling_point_k: 433.96,
+        boiling_point_source: "431.65 K (CAS Common Chemistry, as tabulated in chemicals 1.5.2) to 433.65 K (Yaws, same); the law below boils at 433.96 K. Melts near 50 °C (from memory): a liquid in the still",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 22.333832, b: 4299.508923, c: -36.143 },
+            t_min_k: 323.0,
+            t_max_k: 434.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 323-434 K (as stored in chemicals 1.5.2); the NIST WebBook set (thermo 0.6.1) agrees within 0.2 % at 100 °C",
+        water_solubility_kg_per_m3: 0.0046,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 4.6 mg/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.842 g/cm³ for the liquid at 54 °C, from memory",
+    },
+    Compound {
+        id: "terpinolene",
+        name: "Terpinolene",
+        cas: "586-62-9",
+        class: CompoundClass::MonoterpeneHydrocarbon,
+        molar_mass_kg_per_mol: 0.136234,
+        liquid_density_kg_per_m3: 863.2,
+        density_temperature_c: 15.0,
+        normal_boiling_point_k: 460.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 458 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 22.747768, b: 4622.826408, c: -46.738 },
+            t_min_k: 313.0,
+            t_max_k: 458.0,
+            // The NIST WebBook set (313.7-452.1 K, as stored in thermo 0.6.1) gives 6758 Pa at
+            // 100 °C against this set's 5352, 26 % more, though it boils at 463.4 K, 3-5 K over
+            // the handbooks; this set reproduces the boiling point. 0.25 carries the spread.
+            relative_uncertainty: 0.25,
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 313-458 K (as stored in chemicals 1.5.2); the NIST WebBook set is 26 % higher at 100 °C",
+        water_solubility_kg_per_m3: 0.0095,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 9.5 mg/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8632 g/cm³ at 15 °C",
+    },
+    Compound {
+        id: "delta-3-carene",
+        name: "δ-3-Carene",
+        cas: "13466-78-9",
+        class: CompoundClass::MonoterpeneHydrocarbon,
+        molar_mass_kg_per_mol: 0.136234,
+        liquid_density_kg_per_m3: 867.0,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 445.04,
+        boiling_point_source: "NIST WebBook 445.04 K (as tabulated in chemicals 1.5.2); CAS Common Chemistry 443.15 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 20.486537, b: 3255.012575, c: -81.627 },
+            t_min_k: 362.0,
+            t_max_k: 445.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 362-445 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 0.005,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 5 mg/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.867 g/cm³ at 20 °C, from memory",
+    },
+    Compound {
+        id: "alpha-phellandrene",
+        name: "α-Phellandrene",
+        cas: "99-83-2",
+        class: CompoundClass::MonoterpeneHydrocarbon,
+        molar_mass_kg_per_mol: 0.136234,
+        liquid_density_kg_per_m3: 841.0,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 448.05,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); CAS Common Chemistry 445.15 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 22.141912, b: 4285.873014, c: -44.643 },
+            t_min_k: 315.0,
+            t_max_k: 448.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 315-448 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 0.005,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 5 mg/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8410 g/cm³ at 20 °C",
     },
     // ---------------------------------------------------------------- oxygenated monoterpenes
     Compound {
@@ -211,6 +316,12 @@ pub static COMPOUNDS: &[Compound] = &[
         //   B = ln(101325/27)/(1/255.15 - 1/428.77) = 5186.0097, A = ln 27 + B/255.15 = 23.621174.
         //   Gives 2733 Pa at 100 °C (2418 Pa with C = 0, 2895 Pa with C = -60).
         // 0.15: about the spread between C = 0 and C = -60 at 100 °C (judgement, no source).
+        // No wide-range published set was found: chemicals 1.5.2 and thermo 0.6.1 carry none for
+        // linalool, and the Antoine constants Espinosa Díaz et al. fitted over 223-468 K were not
+        // seen (abstract only). Checked against points the fit did not use: bp 194-197 °C at
+        // 720 mmHg and 0.17 mmHg at 25 °C (supplier data quoted by ChemicalBook), and
+        // ΔHvap 60.2 kJ/mol at 298 K (Gharagheizi compilation in chemicals 1.5.2); see
+        // tests/tests/reference_estimated_laws.rs.
         vapour_pressure: VapourPressure {
             form: CorrelationForm::AntoineLnPa { a: 23.621174, b: 5186.0097, c: -43.0 },
             t_min_k: 298.15,
@@ -315,6 +426,8 @@ pub static COMPOUNDS: &[Compound] = &[
         //   B = ln(101325/4179)/(1/330.15 - 1/437.15) = 4300.4302, A = ln 4179 + B/330.15 = 21.363513.
         // The same procedure is off by +31 % (cineole), +60 % (geraniol) and -48 % (thymol) at
         // 100 °C against measured sets, hence 0.3 (judgement from that check, no source).
+        // Checked against 67 Pa at 20 °C for (-)-menthone (German Wikipedia infobox, a supplier
+        // value), which the fit did not use: the law gives 65 Pa (reference_estimated_laws.rs).
         vapour_pressure: VapourPressure {
             form: CorrelationForm::AntoineLnPa { a: 21.363513, b: 4300.4302, c: -43.0 },
             t_min_k: 373.15,
@@ -339,19 +452,22 @@ pub static COMPOUNDS: &[Compound] = &[
         normal_boiling_point_k: 478.15,
         boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 481 K",
         // No published correlation. Two-point Antoine, C = -43 K, through
-        //   (478.15 K, 101325 Pa)  normal boiling point (CRC) and
-        //   (373.15 K, 3553 Pa)    Lee-Kesler corresponding-states estimate (computed with
-        //                          chemicals 1.5.2: Tc 670.0 K, Pc 22.00 bar, omega 0.432).
-        //   B = ln(101325/3553)/(1/330.15 - 1/435.15) = 4584.3304, A = ln 3553 + B/330.15 = 22.061146.
-        // 0.3: see menthone.
+        //   (352.65 K, 933 Pa)     bp 79-80 °C at 7 mmHg (as listed by benchchem.com for
+        //                          (R)-citronellal, citing the literature; low weight) and
+        //   (478.15 K, 101325 Pa)  normal boiling point (CRC).
+        //   B = ln(101325/933)/(1/309.65 - 1/435.15) = 5032.6778, A = ln 933 + B/309.65 = 23.091475.
+        // 2560 Pa at 100 °C. The corresponding-states estimate used before (3553 Pa) put the 7 mmHg
+        // boiling point at 71 °C and 2104 Pa at 88 °C, against the 1400 Pa (14 hPa at 88 °C) a
+        // supplier lists (ChemicalBook); this law gives 1441 Pa there (checked in
+        // tests/tests/reference_estimated_laws.rs). 0.2: both points are of low weight (judgement).
         vapour_pressure: VapourPressure {
-            form: CorrelationForm::AntoineLnPa { a: 22.061146, b: 4584.3304, c: -43.0 },
-            t_min_k: 373.15,
+            form: CorrelationForm::AntoineLnPa { a: 23.091475, b: 5032.6778, c: -43.0 },
+            t_min_k: 352.65,
             t_max_k: 478.15,
-            relative_uncertainty: 0.3,
-            confidence: Confidence::Estimated,
+            relative_uncertainty: 0.2,
+            confidence: Confidence::FittedToPublishedPoints,
         },
-        vapour_pressure_source: "Estimate: two-point Antoine (C = -43 K) through Tb 478.15 K (CRC Handbook) and the Lee-Kesler estimate 3553 Pa at 373.15 K (computed with chemicals 1.5.2, Tc/Pc from its tables); no measured correlation found",
+        vapour_pressure_source: "Two-point Antoine (assumed C = -43 K) through bp 79-80 °C at 7 mmHg (benchchem.com, citing the literature; low weight) and Tb 478.15 K (CRC Handbook); no published correlation found",
         water_solubility_kg_per_m3: 0.1,
         water_solubility_relative_uncertainty: 0.5,
         water_solubility_source: "About 0.04-0.2 g/L near 25 °C, from memory (low confidence; 0.1 taken)",
@@ -367,20 +483,27 @@ pub static COMPOUNDS: &[Compound] = &[
         density_temperature_c: 20.0,
         normal_boiling_point_k: 482.15,
         boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2)",
-        // No published correlation. Two-point Antoine, C = -43 K, through
-        //   (482.15 K, 101325 Pa)  normal boiling point (CRC) and
-        //   (373.15 K, 4966 Pa)    Lee-Kesler corresponding-states estimate (computed with
-        //                          chemicals 1.5.2: Tc 744.3 K (Joback), Pc 30.63 bar, omega 0.161).
-        //   B = ln(101325/4966)/(1/330.15 - 1/439.15) = 4011.3309, A = ln 4966 + B/330.15 = 20.660395.
-        // 0.3: see menthone; for an alcohol the estimate probably runs high.
+        // No published correlation and no reduced-pressure boiling point found. Antoine with
+        // C = -43 K through the normal boiling point and with the slope of the enthalpy of
+        // vaporisation 55.5 kJ/mol at 298.15 K (Gharagheizi et al. compilation, as tabulated in
+        // chemicals 1.5.2; a DIPPR-based value that may itself be an estimate):
+        //   ΔH = R B T²/(T + C)²  ->  B = 55500/(R (298.15/255.15)²) = 4888.5529,
+        //   A = ln 101325 + B/(482.15 - 43) = 22.657941; 2568 Pa at 100 °C.
+        // The Lee-Kesler estimate used before (4966 Pa at 100 °C) implies 45.5 kJ/mol, 18 % under
+        // the compiled value; the same estimate runs 60 % high for geraniol against its measured
+        // set, as expected for an alcohol. The same construction applied to 15 compounds with
+        // measured sets lands -49 % to +22 % at 100 °C, and 17-49 % low for the four alcohols
+        // and phenols among them (thymol, 2-phenylethanol, benzyl alcohol, eugenol); checked in
+        // tests/tests/reference_estimated_laws.rs. Hence 0.5, and the true value is more likely
+        // above this law than below. No measured pressure was found to check it directly.
         vapour_pressure: VapourPressure {
-            form: CorrelationForm::AntoineLnPa { a: 20.660395, b: 4011.3309, c: -43.0 },
-            t_min_k: 373.15,
+            form: CorrelationForm::AntoineLnPa { a: 22.657941, b: 4888.5529, c: -43.0 },
+            t_min_k: 298.15,
             t_max_k: 482.15,
-            relative_uncertainty: 0.3,
+            relative_uncertainty: 0.5,
             confidence: Confidence::Estimated,
         },
-        vapour_pressure_source: "Estimate: two-point Antoine (C = -43 K) through Tb 482.15 K (CRC Handbook) and the Lee-Kesler estimate 4966 Pa at 373.15 K (computed with chemicals 1.5.2, Tc/Pc from its tables); no measured correlation found",
+        vapour_pressure_source: "Estimate: Antoine (C = -43 K) through Tb 482.15 K (CRC Handbook) with the slope of ΔHvap 55.5 kJ/mol at 298 K (Gharagheizi et al. compilation, as tabulated in chemicals 1.5.2); no measured vapour pressure found",
         water_solubility_kg_per_m3: 0.7,
         water_solubility_relative_uncertainty: 0.5,
         water_solubility_source: "About 0.4-1 g/L near 25 °C, from memory (low confidence; 0.7 taken)",
@@ -478,6 +601,101 @@ pub static COMPOUNDS: &[Compound] = &[
         water_solubility_source: "About 1.25 g/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.9772 g/cm³ at 20 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
     },
+    Compound {
+        id: "bornyl-acetate",
+        name: "Bornyl acetate",
+        cas: "76-49-3",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.196286,
+        liquid_density_kg_per_m3: 982.0,
+        density_temperature_c: 25.0,
+        normal_boiling_point_k: 496.65,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds, l-bornyl acetate 496.65 K (as tabulated in chemicals 1.5.2); 494.15 K (CAS Common Chemistry) to 501.15 K (CRC, endo-racemate)",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 22.272537, b: 4969.119088, c: -33.952 },
+            t_min_k: 320.0,
+            t_max_k: 496.0,
+            relative_uncertainty: 0.05, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for bornyl acetate 76-49-3, 320-496 K (as stored in chemicals 1.5.2); enantiomers share the curve",
+        water_solubility_kg_per_m3: 0.03,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.02-0.04 g/L near 25 °C, from memory (low confidence; 0.03 taken)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, l-bornyl acetate 0.982 g/cm³ at 25 °C (temperature read from the table's encoding, ±0.001 g/cm³). Melts near 27-29 °C (CRC): a liquid in the still",
+    },
+    Compound {
+        id: "beta-thujone",
+        name: "Thujone (β; α entered as β)",
+        cas: "471-15-8",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.152233,
+        liquid_density_kg_per_m3: 917.0,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 475.65,
+        boiling_point_source: "CAS Common Chemistry (as tabulated in chemicals 1.5.2); α-thujone 476.15 K (Yaws, same)",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 22.720206, b: 4896.626802, c: -36.821 },
+            t_min_k: 311.0,
+            t_max_k: 474.0,
+            relative_uncertainty: 0.1, // the α-diastereomer shares the row (see the source)
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for β-thujone, 311-474 K (as stored in chemicals 1.5.2). Sage oil's α-thujone, its diastereomer (Tb 476.15 K against 475.65 K), is entered as this row: 0.1 for that (judgement)",
+        water_solubility_kg_per_m3: 0.4,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.4 g/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.917 g/cm³ at 20 °C, from memory",
+    },
+    Compound {
+        id: "alpha-terpineol",
+        name: "α-Terpineol",
+        cas: "98-55-5",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.154249,
+        liquid_density_kg_per_m3: 935.0,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 490.70,
+        boiling_point_source: "NIST WebBook 490.70 K (as tabulated in chemicals 1.5.2); CAS Common Chemistry 492.65 K, Yaws 492.95 K. Melts near 31-38 °C (from memory): a liquid in the still",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 21.710891, b: 4248.182, c: -74.617 },
+            t_min_k: 357.0,
+            t_max_k: 490.1,
+            relative_uncertainty: 0.05, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 357-490.1 K (as stored in thermo 0.6.1, ln(p/Pa) form); the only published set found",
+        water_solubility_kg_per_m3: 2.42,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "2.42 g/L (Wikipedia 'Terpineol' infobox, citing GESTIS, isomer mixture); 7.1 g/L at 25 °C is also quoted (smolecule.com, HSDB-type text): 0.5 for that spread",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: 0.93 g/cm³ (Wikipedia 'Terpineol' infobox, citing GESTIS, isomer mixture); 0.935 at 20 °C for the α-isomer, from memory",
+    },
+    Compound {
+        id: "geranyl-acetate",
+        name: "Geranyl acetate",
+        cas: "105-87-3",
+        class: CompoundClass::OxygenatedMonoterpene,
+        molar_mass_kg_per_mol: 0.196286,
+        liquid_density_kg_per_m3: 910.0,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 513.15,
+        boiling_point_source: "CAS Common Chemistry and Yaws, 513.15 K (as tabulated in chemicals 1.5.2); decomposes near its boiling point (from memory)",
+        // The NIST WebBook set boils at 516.6 K, 3.5 K over the handbook value: about 8 % in
+        // pressure at 100 °C, hence 0.1 (judgement). The Landolt-Börnstein set for 105-87-3
+        // (C = +23.8 K) boils at 469 K and gives 4833 Pa at 100 °C: not used.
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 24.059228, b: 6154.9366, c: -25.54 },
+            t_min_k: 346.7,
+            t_max_k: 516.5,
+            relative_uncertainty: 0.1,
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "NIST Chemistry WebBook Antoine, 346.7-516.5 K (as stored in thermo 0.6.1, ln(p/Pa) form); 574 Pa at 100 °C",
+        water_solubility_kg_per_m3: 0.02,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 20 mg/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.907-0.918 g/cm³, from memory; 0.910 at 20 °C taken",
+    },
     // ---------------------------------------------------------------- phenylpropanoids
     Compound {
         id: "eugenol",
@@ -516,14 +734,17 @@ pub static COMPOUNDS: &[Compound] = &[
         boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook gives 508.7 K; melts near 21-22 °C",
         // The Landolt-Börnstein set filed under (E)-anethole 4180-23-8 (293-363 K) is a
         // low-temperature fit that puts Tb near 457 K; the set for anethole 104-46-1 is used.
+        // Near 100 °C the two Landolt-Börnstein sets disagree: 1004 Pa (104-46-1, used) against
+        // 1159 Pa (4180-23-8, 293-363 K, 10 K extrapolated), 15 % apart (evaluated with
+        // chemicals 1.5.2); 0.1 carries that spread (judgement).
         vapour_pressure: VapourPressure {
             form: CorrelationForm::AntoineLnPa { a: 22.94533, b: 5371.491228, c: -38.144 },
             t_min_k: 335.0,
             t_max_k: 508.0,
-            relative_uncertainty: 0.05, // common practice, no source
+            relative_uncertainty: 0.1,
             confidence: Confidence::Measured,
         },
-        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for anethole 104-46-1 (4-propenylanisole, mixed stereoisomers), 335-508 K (as stored in chemicals 1.5.2)",
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for anethole 104-46-1 (4-propenylanisole, mixed stereoisomers), 335-508 K (as stored in chemicals 1.5.2); the set filed under 4180-23-8 is 15 % higher at 100 °C",
         water_solubility_kg_per_m3: 0.11,
         water_solubility_relative_uncertainty: 0.5,
         water_solubility_source: "About 0.11 g/L near 25 °C, from memory",
@@ -552,6 +773,52 @@ pub static COMPOUNDS: &[Compound] = &[
         water_solubility_source: "About 0.18 g/L near 25 °C, from memory (low confidence)",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.965 g/cm³ at 25 °C",
     },
+    Compound {
+        id: "eugenyl-acetate",
+        name: "Eugenyl acetate",
+        cas: "93-28-7",
+        class: CompoundClass::Phenylpropanoid,
+        molar_mass_kg_per_mol: 0.206238,
+        liquid_density_kg_per_m3: 1080.6,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 554.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); the law below boils 1.2 K higher",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 24.031643, b: 6526.371202, c: -33.501 },
+            t_min_k: 374.0,
+            t_max_k: 555.0,
+            relative_uncertainty: 0.05, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 374-555 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 0.4,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.4 g/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0806 g/cm³ at 20 °C",
+    },
+    Compound {
+        id: "cinnamaldehyde",
+        name: "(E)-Cinnamaldehyde",
+        cas: "14371-10-9",
+        class: CompoundClass::Phenylpropanoid,
+        molar_mass_kg_per_mol: 0.132159,
+        liquid_density_kg_per_m3: 1049.7,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 519.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds, trans-cinnamaldehyde (as tabulated in chemicals 1.5.2); CAS Common Chemistry and Yaws give 519.15 K for 104-55-2",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 24.06259, b: 6164.225224, c: -27.704 },
+            t_min_k: 349.0,
+            t_max_k: 519.0,
+            relative_uncertainty: 0.05, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for cinnamaldehyde 104-55-2, 349-519 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 1.1,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 1.1 g/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0497 g/cm³ at 20 °C",
+    },
     // ---------------------------------------------------------------- sesquiterpenes
     Compound {
         id: "beta-caryophyllene",
@@ -561,22 +828,26 @@ pub static COMPOUNDS: &[Compound] = &[
         molar_mass_kg_per_mol: 0.204351,
         liquid_density_kg_per_m3: 907.5,
         density_temperature_c: 20.0,
-        normal_boiling_point_k: 535.5,
-        boiling_point_source: "About 262-264 °C, from memory (handbook-type value); the 402.65 K listed by CAS Common Chemistry is a reduced-pressure boiling point",
-        // No published correlation. Two-point Antoine, C = -43 K, through
-        //   (535.5 K, 101325 Pa)   normal boiling point (from memory) and
-        //   (373.15 K, 1589 Pa)    Lee-Kesler corresponding-states estimate (computed with
-        //                          chemicals 1.5.2: Tc 802.3 K (Joback), Pc 20.27 bar, omega 0.117).
-        //   B = ln(101325/1589)/(1/330.15 - 1/492.5) = 4161.5981, A = ln 1589 + B/330.15 = 19.976034.
-        // 0.3: see menthone; the boiling point itself is from memory.
+        normal_boiling_point_k: 529.6,
+        boiling_point_source: "529.1 K at 100.7 kPa, the pure-caryophyllene end of an isobaric VLE study (J. Chem. Eng. Data 65 (2020) 3770-3777), 529.6 K at 101.325 kPa by the law below. Handbook values spread over 256-264 °C (529-537 K): 256-259 °C (The Good Scents Company), 262-264 °C (Wikipedia infobox); the 402.65 K of CAS Common Chemistry is the 14 mmHg boiling point",
+        // Antoine ln(p/Pa) = A - B/(T/K + C), C = -43 K assumed (see the header), A and B fitted
+        // here by least squares in ln p to three measured points:
+        //   (391.65 K, 1293 Pa)    bp 118-119 °C at 9.7 mmHg, Merck Index (drugfuture.com text)
+        //   (402.65 K, 1867 Pa)    bp 129-130 °C at 14 mmHg, Merck Index (same entry)
+        //   (529.1 K, 100700 Pa)   J. Chem. Eng. Data 65 (2020) 3770 (boiling temperature at 100.7 kPa)
+        //   giving A = 22.674945, B = 5425.4970; residuals -5 %, +6 %, -1 % in p.
+        // 514 Pa (3.9 mmHg) at 100 °C. Two-point laws through other pairs of these points and the
+        // handbook 263 °C give 474-562 Pa at 100 °C, hence 0.2 (judgement from that spread).
+        // Checked against the handbook normal boiling points, which the fit did not use
+        // (tests/tests/reference_estimated_laws.rs).
         vapour_pressure: VapourPressure {
-            form: CorrelationForm::AntoineLnPa { a: 19.976034, b: 4161.5981, c: -43.0 },
-            t_min_k: 373.15,
-            t_max_k: 535.5,
-            relative_uncertainty: 0.3,
-            confidence: Confidence::Estimated,
+            form: CorrelationForm::AntoineLnPa { a: 22.674945, b: 5425.4970, c: -43.0 },
+            t_min_k: 391.65,
+            t_max_k: 529.6,
+            relative_uncertainty: 0.2,
+            confidence: Confidence::FittedToPublishedPoints,
         },
-        vapour_pressure_source: "Estimate: two-point Antoine (C = -43 K) through Tb 535.5 K (from memory) and the Lee-Kesler estimate 1589 Pa at 373.15 K (computed with chemicals 1.5.2, Tc/Pc from its tables); no measured correlation found",
+        vapour_pressure_source: "Fitted here (Antoine, C = -43 K, least squares) to bp 118-119 °C at 9.7 mmHg and 129-130 °C at 14 mmHg (Merck Index) and 529.1 K at 100.7 kPa (J. Chem. Eng. Data 65 (2020) 3770); no published correlation found",
         water_solubility_kg_per_m3: 0.00003,
         water_solubility_relative_uncertainty: 0.5,
         water_solubility_source: "About 0.01-0.05 mg/L, from memory (low confidence; 0.03 mg/L taken)",
@@ -617,12 +888,13 @@ pub static COMPOUNDS: &[Compound] = &[
         normal_boiling_point_k: 495.2,
         boiling_point_source: "NIST Chemistry WebBook (as tabulated in chemicals 1.5.2); 497.65 K in chemicals' default table",
         // Two published sets disagree by 15 % at 100 °C (WebBook 929 Pa, Landolt-Börnstein IV/20
-        // 807 Pa, 366-499 K), hence 0.1 (judgement, no source).
+        // 807 Pa, 366-499 K; evaluated with chemicals 1.5.2), hence 0.15, the whole spread
+        // (judgement, no source).
         vapour_pressure: VapourPressure {
             form: CorrelationForm::AntoineLog10Bar { a: 5.79249, b: 2711.958016, c: -26.552 },
             t_min_k: 339.6,
             t_max_k: 494.7,
-            relative_uncertainty: 0.1,
+            relative_uncertainty: 0.15,
             confidence: Confidence::Measured,
         },
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 339.6-494.7 K (as stored in chemicals 1.5.2, converted to log10 bar); the Landolt-Börnstein IV/20 set (366-499 K) is 13 % lower at 100 °C",
@@ -656,6 +928,29 @@ pub static COMPOUNDS: &[Compound] = &[
         water_solubility_source: "About 20-22 g/L near 25 °C, from memory (21 taken)",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0202 g/cm³ at 20 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
     },
+    Compound {
+        id: "nerol",
+        name: "Nerol",
+        cas: "106-25-2",
+        class: CompoundClass::RoseAlcohol,
+        molar_mass_kg_per_mol: 0.154249,
+        liquid_density_kg_per_m3: 875.6,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 498.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); the law below boils 1.4 K higher",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 24.09676, b: 5999.901239, c: -22.294 },
+            t_min_k: 335.0,
+            t_max_k: 499.0,
+            relative_uncertainty: 0.05, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for nerol ((Z)-3,7-dimethyl-2,6-octadien-1-ol), 335-499 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 1.3,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 1.3 g/L near 25 °C, from memory (low confidence)",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8756 g/cm³ at 20 °C",
+    },
     // ---------------------------------------------------------------- other
     Compound {
         id: "benzyl-alcohol",
@@ -678,7 +973,10 @@ pub static COMPOUNDS: &[Compound] = &[
             },
             t_min_k: 257.85,
             t_max_k: 715.0,
-            relative_uncertainty: 0.03, // common practice, no source
+            // Other published sets at 100 °C (thermo 0.6.1): VDI PPDS 2049, Landolt-Börnstein
+            // 2054, DIPPR (Perry 8th ed.) 2065, NIST WebBook 2215, Wagner (McGarry) 2307 Pa, against
+            // this set's 2086: a 12.6 % spread, carried as 0.1.
+            relative_uncertainty: 0.1,
             confidence: Confidence::Measured,
         },
         vapour_pressure_source: "Poling, Prausnitz & O'Connell, The Properties of Gases and Liquids, 5th ed., Wagner 2.5,5, 257.85-715 K (as stored in chemicals 1.5.2)",
@@ -686,6 +984,81 @@ pub static COMPOUNDS: &[Compound] = &[
         water_solubility_relative_uncertainty: 0.5,
         water_solubility_source: "About 40-43 g/L near 25 °C, from memory (42 taken)",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0419 g/cm³ at 24 °C",
+    },
+    Compound {
+        id: "methyl-salicylate",
+        name: "Methyl salicylate",
+        cas: "119-36-8",
+        class: CompoundClass::Other,
+        molar_mass_kg_per_mol: 0.152147,
+        liquid_density_kg_per_m3: 1181.2,
+        density_temperature_c: 25.0,
+        normal_boiling_point_k: 495.75,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook 495.83 K",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 21.245101, b: 4032.49655, c: -81.032 },
+            t_min_k: 327.0,
+            t_max_k: 496.0,
+            relative_uncertainty: 0.03, // common practice, no source
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 327-496 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 0.7,
+        water_solubility_relative_uncertainty: 0.5,
+        water_solubility_source: "About 0.7 g/L near 25 °C, from memory",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.1812 g/cm³ at 25 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
+    },
+    Compound {
+        id: "nonadecane",
+        name: "Nonadecane (rose stearoptene)",
+        cas: "629-92-5",
+        class: CompoundClass::Other,
+        molar_mass_kg_per_mol: 0.268521,
+        liquid_density_kg_per_m3: 785.5,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 603.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); NIST WebBook 602.87 K. Melts at 304.65 K (CRC)",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 21.046088, b: 4450.436468, c: -135.55 },
+            t_min_k: 462.0,
+            t_max_k: 639.0,
+            // 100 °C is 90 K under the fitted range. Other sets at 100 °C (thermo 0.6.1): Poling
+            // Antoine 10, VDI PPDS 10, DIPPR (Perry 8th ed.) 11, Poling Wagner 12 Pa; 0.2 carries
+            // that spread (the WebBook set, a 306-328 K fit, is left out).
+            relative_uncertainty: 0.2,
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 462-639 K (as stored in chemicals 1.5.2); extrapolated about 90 K below its range near 100 °C",
+        water_solubility_kg_per_m3: 1e-06,
+        water_solubility_relative_uncertainty: 1.0,
+        water_solubility_source: "Practically insoluble (long-chain alkane, well under 1 mg/L), from memory",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.7855 g/cm³ at 20 °C (temperature read from the table's encoding)",
+    },
+    Compound {
+        id: "heneicosane",
+        name: "Heneicosane (rose stearoptene)",
+        cas: "629-94-7",
+        class: CompoundClass::Other,
+        molar_mass_kg_per_mol: 0.296574,
+        liquid_density_kg_per_m3: 791.9,
+        density_temperature_c: 20.0,
+        normal_boiling_point_k: 632.15,
+        boiling_point_source: "CRC Handbook, Physical Constants of Organic Compounds (as tabulated in chemicals 1.5.2); CAS Common Chemistry 629.65 K, NIST WebBook 629.84 K. Melts at 313.55 K (CRC)",
+        vapour_pressure: VapourPressure {
+            form: CorrelationForm::AntoineLnPa { a: 21.483579, b: 4893.223581, c: -138.25 },
+            t_min_k: 393.0,
+            t_max_k: 630.0,
+            // At 100 °C, 20 K below this set's range, it gives 2 Pa; the NIST WebBook set
+            // (425.8-623.7 K, as stored in thermo 0.6.1) gives 6 Pa. A factor of 3: 0.9, the most
+            // the table allows, and the plan's result hardly depends on it (a few % of rose oil).
+            relative_uncertainty: 0.9,
+            confidence: Confidence::Measured,
+        },
+        vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 393-630 K (as stored in chemicals 1.5.2)",
+        water_solubility_kg_per_m3: 1e-06,
+        water_solubility_relative_uncertainty: 1.0,
+        water_solubility_source: "Practically insoluble (long-chain alkane, well under 1 mg/L), from memory",
+        property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.7919 g/cm³ at 20 °C (temperature read from the table's encoding)",
     },
 ];
 
