@@ -93,13 +93,14 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
     if let Some(m) = s.charge.moisture_percent {
         ck.range("charge.moisture_percent", m, 0.0, 95.0, "%");
     }
-    // Without a crop or a value: a mass-weighted mix of water (4180) and dry plant matter (about
-    // 1500 J/kg K, from memory), the Siebel-type estimate.
-    let cp_charge = s
-        .charge
-        .heat_capacity_j_per_kg_k
-        .or(crop.map(|c| c.plant_heat_capacity_j_per_kg_k))
-        .unwrap_or(4180.0 * moisture + 1500.0 * (1.0 - moisture));
+    // Without a value: water and the crop's dry matter mixed by mass at the charge's moisture,
+    // so a grower's own moisture figure moves the heat capacity (crops::charge_heat_capacity).
+    let cp_charge = s.charge.heat_capacity_j_per_kg_k.unwrap_or_else(|| {
+        let dry = crop.map_or(crops::DRY_PLANT_MATTER_HEAT_CAPACITY_J_PER_KG_K, |c| {
+            c.dry_matter_heat_capacity_j_per_kg_k
+        });
+        crops::charge_heat_capacity_j_per_kg_k(moisture, dry)
+    });
     ck.range("charge.heat_capacity_j_per_kg_k", cp_charge, 500.0, 4500.0, "J/(kg K)");
     let charge_temperature_c = s.charge.temperature_c.unwrap_or(s.site.ambient_temperature_c);
     ck.range("charge.temperature_c", charge_temperature_c, -10.0, 60.0, "°C");

@@ -8,9 +8,6 @@ use super::{
 use crate::compounds::Confidence;
 use crate::scenario::Scenario;
 
-/// Practice: total distillate water to oil of about 20-30:1 (Denny, for lavender: at most
-/// 20:1; lavandin caissons 19-33:1 by arithmetic on published fuel use).
-const WATER_TO_OIL_PRACTICE_MAX: f64 = 30.0;
 /// Steam rising through the charge: droplets of 100 µm and more fall back below about
 /// 0.2-0.3 m/s (terminal velocities computed with fluids 1.3.1); above, the steam carries
 /// water up and finds channels (judgement, no published limit).
@@ -173,16 +170,7 @@ fn run_warnings(f: &Facts, list: &mut Vec<Warning>) {
             ),
         );
     }
-    if run.water_to_oil_ratio > WATER_TO_OIL_PRACTICE_MAX {
-        warn(
-            list,
-            "water_to_oil_high",
-            format!(
-                "About {:.0} kg of distillate water per kg of oil: practice is 20-30. Less steam per hour (a smaller flame) or a shorter run would save fuel and water for little oil.",
-                run.water_to_oil_ratio
-            ),
-        );
-    }
+    water_to_oil_warning(f, list);
     if let Some(v) = f.timeline.steam_velocity_m_per_s
         && v > STEAM_VELOCITY_LIMIT_M_PER_S
     {
@@ -195,6 +183,32 @@ fn run_warnings(f: &Facts, list: &mut Vec<Warning>) {
             ),
         );
     }
+}
+
+/// Distillate water per kg of oil above what practice gives for this crop. The advice follows
+/// the cause: a steam-limited oil needs its steam; a fast flame wastes it; a long tail costs most.
+fn water_to_oil_warning(f: &Facts, list: &mut Vec<Warning>) {
+    let run = &f.timeline.plan;
+    let Some(crop) = f.resolved.crop else { return };
+    let practice = crop.typical_water_to_oil_ratio;
+    if run.water_to_oil_ratio <= practice.high {
+        return;
+    }
+    let advice = if run.limited_by == RunLimit::Steam {
+        "This oil needs that much steam to come over: more steam per hour shortens the run but does not save water. Returning the waters (cohobation) saves some."
+    } else if run.specific_steam_rate_kg_per_h_per_kg > 1.25 * crop.steam_rate_kg_per_h_per_kg {
+        "The steam runs faster than the crop usually needs: a smaller flame would save fuel and water for little oil."
+    } else {
+        "The last few per cent of the oil cost the most water: a lower target recovery saves water and fuel."
+    };
+    warn(
+        list,
+        "water_to_oil_high",
+        format!(
+            "About {:.0} kg of distillate water per kg of oil, above the {:.0}-{:.0} usual for {}. {advice}",
+            run.water_to_oil_ratio, practice.low, practice.high, crop.name
+        ),
+    );
 }
 
 fn heat_and_cooling_warnings(f: &Facts, list: &mut Vec<Warning>) {
