@@ -55,7 +55,9 @@ fn fallback(key: &str, state: &AppState) -> String {
         ("oil_density", Some(c)) => format!("{} (crop)", c.oil_density_kg_per_m3 / 1000.0),
         ("rate_constant", Some(c)) => format!("{} (crop)", c.rate_constant_per_min.typical),
         ("distillate_out", Some(c)) => format!("{} (crop)", c.distillate_temperature_c),
-        ("efficiency", _) => format!("{} (typical)", state.fuel.get().usual_appliance().data().typical_efficiency * 100.0),
+        ("efficiency", _) => {
+            format!("{} (typical)", state.fuel.get().usual_appliance().data().typical_efficiency * 100.0)
+        }
         _ => String::new(),
     }
 }

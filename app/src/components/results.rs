@@ -3,7 +3,7 @@
 use crate::state::AppState;
 use crate::units;
 use leptos::prelude::*;
-use stillroom_core::plan::{OilLayer, RunLimit};
+use stillroom_core::plan::{Answer, OilLayer, RunLimit, Uncertainty};
 use stillroom_core::scenario::CondenserKind;
 use stillroom_core::{Plan, ScenarioErrors};
 
@@ -42,7 +42,13 @@ fn Card(
     }
 }
 
-/// The numbers that decide the run, right under the essential inputs.
+/// "likely A to B" for a range, in the answer's own format.
+fn likely(a: &Answer, show: impl Fn(f64) -> String) -> String {
+    format!("likely {} to {}", show(a.low), show(a.high))
+}
+
+/// The card's four answers first (steam, water, boiling point, separator), then time, fuel, oil
+/// and hydrosol: each with its likely range where the core gives one.
 #[component]
 pub fn Headline() -> impl IntoView {
     let state = expect_context::<AppState>();
@@ -57,45 +63,141 @@ pub fn Headline() -> impl IntoView {
                 </p>
             </Show>
             <div class="cards">
-                <Card label="Air pressure at the still" out="pressure"
-                    value=from_plan(plan, |p| units::kpa(p.site.pressure_pa))
-                    note=from_plan(plan, |p| match p.site.pressure_from {
-                        stillroom_core::plan::PressureFrom::StandardAtmosphere => "standard air at this altitude".into(),
-                        stillroom_core::plan::PressureFrom::StationBarometer => "from your barometer".into(),
-                        stillroom_core::plan::PressureFrom::SeaLevelBarometer => "weather report, brought to your altitude".into(),
-                    }) />
-                <Card label="Water boils at" out="water_boiling_point"
+                <Card label="Steam for the run" out="steam_total"
+                    value=from_plan(plan, |p| units::mass(p.ranges.steam_kg.central))
+                    note=from_plan(plan, |p| format!("{} kg/h from the boiler; {}", units::sig3(p.run.steam_rate_kg_per_s * 3600.0), likely(&p.ranges.steam_kg, units::mass))) />
+                <Card label="Water used" out="water_total"
+                    value=from_plan(plan, |p| units::volume(p.ranges.water_total_kg.central / 1000.0))
+                    note=from_plan(plan, |p| format!("boiler {} + cooling {}", units::volume(p.water_use.boiler_feed_kg / 1000.0), units::volume(p.water_use.cooling_water_kg / 1000.0))) />
+                <Card label="Water boils here at" out="water_boiling_point"
                     value=from_plan(plan, |p| units::celsius(p.site.water_boiling_point_c))
-                    note=from_plan(plan, |p| format!("{} from sea level", units::kelvin_shift(p.site.boiling_point_shift_k))) />
-                <Card label="Oil and water boil together at" out="codistillation_temperature"
-                    value=from_plan(plan, |p| units::celsius(p.codistillation.temperature_c))
-                    note=from_plan(plan, |p| format!("{} below water alone", units::fixed(p.codistillation.lowering_k, 1) + " K")) />
-                <Card label="Least steam per kg of oil" out="steam_per_kg_oil"
-                    value=from_plan(plan, |p| format!("{} kg", units::sig3(p.codistillation.min_steam_per_kg_oil)))
-                    note=Signal::derive(|| "the thermodynamic minimum, at the start".to_string()) />
-                <Card label="Least steam for this charge" out="min_steam_charge"
-                    value=from_plan(plan, |p| units::mass(p.codistillation.min_steam_whole_charge_kg))
-                    note=from_plan(plan, |p| format!("{} to reach the target", units::mass(p.codistillation.min_steam_to_target_kg))) />
+                    note=from_plan(plan, |p| format!("{} from sea level, at {}", units::kelvin_shift(p.site.boiling_point_shift_k), units::kpa(p.site.pressure_pa))) />
+                <Card label="Separator" out="separator_size"
+                    value=from_plan(plan, |p| units::volume(p.separator.volume_m3))
+                    note=from_plan(plan, |p| match (p.separator.diameter_m, p.separator.height_m) {
+                        (Some(d), Some(h)) => format!("{} wide × {} high; oil at the {}", units::length(d), units::length(h), layer_word(p.separator.oil_outlet)),
+                        _ => "the oil will not part by gravity".to_string(),
+                    }) />
                 <Card label="First drop after" out="first_drop"
                     value=from_plan(plan, |p| units::duration(p.run.time_to_first_drop_s))
-                    note=from_plan(plan, |p| format!("boiler boils after {}", units::duration(p.run.time_to_boil_s))) />
+                    note=from_plan(plan, |p| format!("the boiler boils after {}", units::duration(p.run.time_to_boil_s))) />
                 <Card label="Whole run" out="total_time"
                     value=from_plan(plan, |p| units::duration(p.run.total_time_s))
-                    note=from_plan(plan, |p| format!("{} of distilling", units::duration(p.run.time_after_first_drop_s))) />
-                <Card label="Oil expected" out="oil_volume"
-                    value=from_plan(plan, |p| units::volume(p.yield_estimate.oil_volume_m3.central))
-                    note=from_plan(plan, |p| format!("likely {} – {}", units::volume(p.yield_estimate.oil_volume_m3.low), units::volume(p.yield_estimate.oil_volume_m3.high))) />
+                    note=from_plan(plan, |p| format!("{} of distilling, {}", units::duration(p.run.time_after_first_drop_s), likely(&p.ranges.run_time_s, units::duration))) />
+                <Card label="Fuel for the run" out="fuel_total"
+                    value=from_plan(plan, |p| format!("{} {}", units::sig3(p.energy.fuel_amount), p.energy.fuel_unit))
+                    note=from_plan(plan, |p| likely(&p.ranges.fuel_amount, |v| format!("{} {}", units::sig3(v), p.energy.fuel_unit))) />
+                <Card label="Oil to expect" out="oil_volume"
+                    value=from_plan(plan, |p| if p.yield_estimate.hydrosol_is_the_product {
+                        "almost none".to_string()
+                    } else {
+                        units::volume(p.yield_estimate.oil_volume_m3.central)
+                    })
+                    note=from_plan(plan, |p| if p.yield_estimate.hydrosol_is_the_product {
+                        format!("{} stays dissolved: the hydrosol is the product", units::mass(p.yield_estimate.dissolved_in_hydrosol_kg))
+                    } else {
+                        format!("separable oil, likely {} to {}", units::volume(p.yield_estimate.oil_volume_m3.low), units::volume(p.yield_estimate.oil_volume_m3.high))
+                    }) />
+                <Card label="Hydrosol" out="hydrosol_total"
+                    value=from_plan(plan, |p| units::volume(p.run.hydrosol_volume_m3))
+                    note=from_plan(plan, |p| if p.run.returned_to_boiler_kg > 0.0 {
+                        format!("kept, after {} returned to the boiler", units::volume(p.run.returned_to_boiler_kg / 1000.0))
+                    } else {
+                        "distillate water, kept".to_string()
+                    }) />
             </div>
+            <HowSure />
         </section>
     }
 }
 
-/// Warnings from the plan, each in plain words.
+fn layer_word(layer: OilLayer) -> &'static str {
+    match layer {
+        OilLayer::Top => "top",
+        OilLayer::Bottom => "bottom",
+    }
+}
+
+/// What a grower can do about the biggest source of doubt.
+fn doubt_words(u: Uncertainty) -> &'static str {
+    match u {
+        Uncertainty::OilContent => "the crop's oil content: log a run to narrow it",
+        Uncertainty::RateConstant => "how fast this crop gives up its oil: log a run to narrow it",
+        Uncertainty::BoilerEfficiency => {
+            "how much of the burner's heat reaches the water: measure a steam rate to narrow it"
+        }
+        Uncertainty::VapourPressures => "the oil compounds' published vapour pressures",
+        Uncertainty::Solubilities => "how much oil the water dissolves (published solubilities)",
+        Uncertainty::VaporisationEfficiency => "how close the steam comes to carrying its full load of oil",
+        Uncertainty::SteamDependence => "how strongly this crop's release follows the steam rate",
+        Uncertainty::CondenserU => "how well the condenser passes heat",
+        Uncertainty::WallU => "how much heat the still's wall loses: lagging it narrows this",
+    }
+}
+
+/// Warning codes about the data rather than about the run: they belong with the ranges.
+const DATA_NOTES: [&str; 2] = ["correlation_out_of_range", "estimated_vapour_pressure"];
+
+/// How sure the answers are: the biggest source of doubt, and notes about the data.
+#[component]
+fn HowSure() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let plan = state.plan;
+    let lines = move || {
+        plan.with(|r| {
+            r.as_ref()
+                .map(|p| {
+                    let mut out = vec![
+                        (
+                            "doubt_run",
+                            format!("Run length: mostly {}.", doubt_words(p.ranges.run_time_s.mostly_from)),
+                        ),
+                        ("doubt_oil", format!("Oil: mostly {}.", doubt_words(p.ranges.oil_kg.mostly_from))),
+                        (
+                            "doubt_fuel",
+                            format!("Fuel: mostly {}.", doubt_words(p.ranges.fuel_amount.mostly_from)),
+                        ),
+                    ];
+                    out.extend(
+                        p.warnings
+                            .iter()
+                            .filter(|w| DATA_NOTES.contains(&w.code.as_str()))
+                            .map(|w| ("data_note", w.message.clone())),
+                    );
+                    out
+                })
+                .unwrap_or_default()
+        })
+    };
+    view! {
+        <Show when=move || !lines().is_empty()>
+            <details class="how-sure" data-out="how_sure">
+                <summary>"How sure is this?"</summary>
+                <p>"Ranges are likely lows and highs (about 1 in 10 either side) from the uncertainty of the published data and of your entries."</p>
+                <ul>{move || lines().into_iter().map(|(k, t)| view! { <li data-note=k>{t}</li> }).collect_view()}</ul>
+            </details>
+        </Show>
+    }
+}
+
+/// Warnings from the plan that the grower can act on, each in plain words.
 #[component]
 pub fn Warnings() -> impl IntoView {
     let state = expect_context::<AppState>();
     let plan = state.plan;
-    let list = move || plan.with(|r| r.as_ref().map(|p| p.warnings.clone()).unwrap_or_default());
+    let list = move || {
+        plan.with(|r| {
+            r.as_ref()
+                .map(|p| {
+                    p.warnings
+                        .iter()
+                        .filter(|w| !DATA_NOTES.contains(&w.code.as_str()))
+                        .cloned()
+                        .collect::<Vec<_>>()
+                })
+                .unwrap_or_default()
+        })
+    };
     view! {
         <Show when=move || !list().is_empty()>
             <section class="warnings" aria-labelledby="h-warnings">
@@ -142,9 +244,14 @@ fn RecoveryChart() -> impl IntoView {
                 <text x="14" y="124" class="tick">"first drop"</text>
                 <text x="288" y="124" class="tick end">{end_label}</text>
             </svg>
-            <figcaption>"Share of the recoverable oil over time after the first drop (first-order release)."</figcaption>
+            <figcaption>"Share of the charge's oil carried over after the first drop: the plant's release, held back where the steam cannot carry it faster."</figcaption>
         </figure>
     }
+}
+
+/// A height in millimetres.
+fn mm(m: f64) -> String {
+    format!("{} mm", units::fixed(m * 1000.0, 0))
 }
 
 /// The full plan, panel by panel.
@@ -159,6 +266,10 @@ pub fn Details() -> impl IntoView {
 
             <h3>"Steam and time"</h3>
             <dl>
+                <Row label="Air pressure at the still" out="pressure" value=p(|p| units::kpa(p.site.pressure_pa)) />
+                <Row label="Oil and water boil together at" out="codistillation_temperature" value=p(|p| format!("{} ({} below water alone)", units::celsius(p.codistillation.temperature_c), units::fixed(p.codistillation.lowering_k, 1) + " K")) />
+                <Row label="Least steam per kg of oil (a lower bound, at the start)" out="steam_per_kg_oil" value=p(|p| format!("{} kg", units::sig3(p.codistillation.min_steam_per_kg_oil))) />
+                <Row label="Least steam for this charge (a lower bound)" out="min_steam_charge" value=p(|p| format!("{} to the target, {} for all of it", units::mass(p.codistillation.min_steam_to_target_kg), units::mass(p.codistillation.min_steam_whole_charge_kg))) />
                 <Row label="Steam raised" out="steam_rate" value=p(|p| format!("{} kg/h", units::sig3(p.run.steam_rate_kg_per_s * 3600.0))) />
                 <Row label="Steam through the plant" out="specific_steam" value=p(|p| format!("{} kg/h per kg of charge", units::sig3(p.run.specific_steam_rate_kg_per_h_per_kg))) />
                 <Row label="Steam condensed warming the charge and still" out="startup_condensate" value=p(|p| units::mass(p.run.startup_condensate_kg)) />
@@ -168,7 +279,8 @@ pub fn Details() -> impl IntoView {
                     RunLimit::Release => "oil leaving the plant".to_string(),
                     RunLimit::Steam => "the steam's carrying power".to_string(),
                 }) />
-                <Row label="Recovery rate used" out="rate_constant" value=p(|p| format!("{} per min", units::sig3(p.run.rate_constant_per_min))) />
+                <Row label="Release rate at this steam rate" out="rate_constant" value=p(|p| format!("{} per min (crop: {} per min at its usual steam)", units::sig3(p.run.rate_constant_per_min), units::sig3(p.run.reference_rate_constant_per_min))) />
+                <Row label="Steam's share of a full load of oil" out="vaporisation_efficiency" value=p(|p| units::percent(p.run.vaporisation_efficiency)) />
                 <Row label="Boiler water turned to steam" out="evaporated" value=p(|p| units::mass(p.run.boiler_water_evaporated_kg)) />
                 <Row label="Top up the boiler" out="refill" value=p(|p| match p.run.boiler_dry_after_s {
                     Some(t) => format!("before {} after lighting ({} refill(s))", units::duration(t), p.run.refills),
@@ -203,6 +315,9 @@ pub fn Details() -> impl IntoView {
                 }) />
                 <Row label="Tub warms over the run, without a feed" out="tub_rise" value=p(|p| p.condenser.tub_rise_over_run_k
                     .map(|k| format!("{} K", units::fixed(k, 0))).unwrap_or_else(|| "– (jacketed condenser)".into())) />
+                <Row label="Tub at the end of the run" out="tub_end" value=p(|p| p.condenser.tub_end_c
+                    .map(units::celsius).unwrap_or_else(|| "– (jacketed condenser)".into())) />
+                <Row label="Distillate leaves at" out="distillate_outlet" value=p(|p| units::celsius(p.condenser.distillate_outlet_c)) />
                 <Row label="Cooling area needed" out="condenser_area" value=p(|p| units::area(p.condenser.area_m2)) />
                 <Row label="Tube length" out="tube_length" value=p(|p| units::length(p.condenser.tube_length_m)) />
                 <Row label="Water for the run, boiler and cooling" out="total_water" value=p(|p| units::volume(p.water_use.total_kg / 1000.0)) />
@@ -221,13 +336,20 @@ pub fn Details() -> impl IntoView {
                 <Row label="Least surface area" out="separator_area" value=p(|p| p.separator.plan_area_m2.map(units::area).unwrap_or_else(|| "no gravity separation".into())) />
                 <Row label="A vessel that works: diameter" out="separator_diameter" value=p(|p| p.separator.diameter_m.map(units::length).unwrap_or_else(|| "–".into())) />
                 <Row label="Volume for the standing time" out="separator_volume" value=p(|p| units::volume(p.separator.volume_m3)) />
-                <Row label="and liquid height" out="separator_height" value=p(|p| p.separator.height_m.map(units::length).unwrap_or_else(|| "–".into())) />
+                <Row label="and liquid height (top outlet)" out="separator_height" value=p(|p| p.separator.height_m.map(units::length).unwrap_or_else(|| "–".into())) />
+                <Row label="Gooseneck outlet height" out="gooseneck_height" value=p(|p| p.separator.gooseneck_height_m.map(mm).unwrap_or_else(|| "–".into())) />
+                <Row label="Oil-water interface at" out="interface_height" value=p(|p| p.separator.interface_height_m.map(|h| format!("{} ({} to {} over the cuts)", mm(h),
+                    mm(p.separator.interface_low_m.unwrap_or(h)), mm(p.separator.interface_high_m.unwrap_or(h)))).unwrap_or_else(|| "–".into())) />
+                <Row label="Interface moves per mm of gooseneck" out="interface_sensitivity" value=p(|p| p.separator.interface_per_gooseneck.map(|k| format!("{} mm", units::sig3(k))).unwrap_or_else(|| "–".into())) />
+                <Row label="Oil density at the separator" out="oil_density_separator" value=p(|p| format!("{} g/mL{}", units::fixed(p.oil.density_at_separator_kg_per_m3 / 1000.0, 3),
+                    p.oil.inversion_temperature_c.map(|t| format!("; as dense as water at {}", units::celsius(t))).unwrap_or_default())) />
             </dl>
 
             <h3>"Oil and hydrosol"</h3>
             <dl>
                 <Row label="Oil in the charge" out="oil_in_charge" value=p(|p| units::mass(p.yield_estimate.oil_in_charge_kg)) />
-                <Row label="Oil recovered" out="oil_mass" value=p(|p| units::range(units::mass(p.yield_estimate.oil_kg.central), units::mass(p.yield_estimate.oil_kg.low), units::mass(p.yield_estimate.oil_kg.high))) />
+                <Row label="Oil carried over" out="oil_carried" value=p(|p| units::mass(p.yield_estimate.carried_over_kg)) />
+                <Row label="Oil that separates" out="oil_mass" value=p(|p| units::range(units::mass(p.yield_estimate.oil_kg.central), units::mass(p.yield_estimate.oil_kg.low), units::mass(p.yield_estimate.oil_kg.high))) />
                 <Row label="As share of the plant" out="oil_share" value=p(|p| format!("{} %", units::sig3(p.yield_estimate.recovery_percent_of_plant.central))) />
                 <Row label="Water to oil" out="water_to_oil" value=p(|p| format!("{} : 1", units::sig3(p.run.water_to_oil_ratio))) />
                 <Row label="Oil dissolved in the hydrosol" out="dissolved" value=p(|p| format!("{} ({})", units::mass(p.yield_estimate.dissolved_in_hydrosol_kg), units::percent(p.yield_estimate.dissolved_share))) />
@@ -273,6 +395,7 @@ pub fn Details() -> impl IntoView {
                 <dl>
                     <Row label="The still holds, at usual packing" out="still_capacity" value=p(|p| p.season.as_ref().and_then(|s| s.still_capacity_kg).map(units::mass).unwrap_or_else(|| "give the still volume".into())) />
                     <Row label="Charges" out="season_charges" value=p(|p| p.season.as_ref().map(|s| s.charges.to_string()).unwrap_or_default()) />
+                    <Row label="First charge, from cold / each later one, hot" out="season_charge_times" value=p(|p| p.season.as_ref().map(|s| format!("{} / {}", units::duration(s.first_charge_time_s), units::duration(s.later_charge_time_s))).unwrap_or_default()) />
                     <Row label="Still time, with turnarounds" out="season_time" value=p(|p| p.season.as_ref().map(|s| format!("{} h", units::sig3(s.total_time_s / 3600.0))).unwrap_or_default()) />
                     <Row label="Fuel" out="season_fuel" value=p(|p| p.season.as_ref().map(|s| format!("{} {}", units::sig3(s.fuel_amount), p.energy.fuel_unit)).unwrap_or_default()) />
                     <Row label="Water" out="season_water" value=p(|p| p.season.as_ref().map(|s| units::volume(s.water_kg / 1000.0)).unwrap_or_default()) />
