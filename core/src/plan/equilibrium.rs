@@ -14,7 +14,6 @@ pub(super) struct Equilibrium {
     pub plan: CodistillationPlan,
     pub components: Vec<ComponentShare>,
     pub temperature_k: f64,
-    pub oil_in_charge_kg: f64,
     pub target_fraction: f64,
     /// Least steam to the target per kg of oil in the charge.
     pub steam_to_target_kg_per_kg_oil: f64,
@@ -55,7 +54,6 @@ pub(super) fn equilibrium(s: &Scenario, r: &Resolved, site: &Site) -> Result<Equ
         plan,
         components,
         temperature_k: eq.temperature_k,
-        oil_in_charge_kg,
         target_fraction: target,
         steam_to_target_kg_per_kg_oil: depletion.steam_to_target_kg_per_kg_oil,
         late_out_of_range: depletion.any_out_of_range,

@@ -462,7 +462,7 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
     tl.plan.hydrosol_volume_m3 =
         (tl.plan.distillate_steam_kg - tl.returned_kg) / separator_water.density_kg_per_m3;
     let separator = separator::separator(s, &separator_water, distillate_rate, &oil, t_sep_c);
-    let balance = oil_yield::oil_balance(r, &eq, &tl, &knobs);
+    let balance = oil_yield::oil_balance(s, r, &eq, &tl, &knobs);
     let water_use = oil_yield::water_use(s, &tl, condenser.cooling_water_per_run_kg);
     let mut energy =
         energy::energy(s, r, site.latent_heat_j_per_kg, &tl, balance.separable_kg / r.oil_density_kg_per_m3);
@@ -480,7 +480,7 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
     };
     let (spreads, failed_ends) = ranges::ranges(s, r, &site, &eq, &central);
     let ranges = plan_ranges(&spreads, failed_ends);
-    let yield_estimate = yield_plan(s, r, &eq, &balance, &ranges.oil_kg);
+    let yield_estimate = yield_plan(s, r, &balance, &ranges.oil_kg);
     let still_capacity_kg = season::still_capacity_kg(s, r);
     let t_hot_c = eq.temperature_k - 273.15;
     let season =
@@ -513,6 +513,11 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
     })
 }
 
+/// Oil the charge holds: plant mass times the resolved oil content (which the ranges swing).
+pub(crate) fn oil_in_charge_kg(s: &Scenario, r: &Resolved) -> f64 {
+    s.charge.plant_mass_kg * r.oil_content_fraction
+}
+
 fn plan_ranges(spreads: &[ranges::Spread], failed_ends: u32) -> PlanRanges {
     let answer = |i: usize| {
         let sp = &spreads[i];
@@ -537,19 +542,13 @@ fn plan_ranges(spreads: &[ranges::Spread], failed_ends: u32) -> PlanRanges {
 }
 
 /// The yield as published: the central mass balance with the separable oil's range.
-fn yield_plan(
-    s: &Scenario,
-    r: &Resolved,
-    eq: &equilibrium::Equilibrium,
-    balance: &oil_yield::OilBalance,
-    oil: &Answer,
-) -> YieldPlan {
+fn yield_plan(s: &Scenario, r: &Resolved, balance: &oil_yield::OilBalance, oil: &Answer) -> YieldPlan {
     let plant_kg = s.charge.plant_mass_kg;
     let rho = r.oil_density_kg_per_m3;
     let dissolved_share =
         if balance.carried_kg > 0.0 { balance.dissolved_kg / balance.carried_kg } else { 0.0 };
     YieldPlan {
-        oil_in_charge_kg: eq.oil_in_charge_kg,
+        oil_in_charge_kg: oil_in_charge_kg(s, r),
         carried_over_kg: balance.carried_kg,
         oil_kg: Range { low: oil.low, central: oil.central, high: oil.high },
         oil_volume_m3: Range { low: oil.low / rho, central: oil.central / rho, high: oil.high / rho },

@@ -28,8 +28,14 @@ pub(super) struct OilBalance {
 /// and-carry model reaches it); dissolved = Σ x_i S_i × kept hydrosol volume (Raoult's law for
 /// the solubility of each compound from an ideal oil, S_i the pure compound's solubility);
 /// separable = carried over − dissolved, never below zero.
-pub(super) fn oil_balance(r: &Resolved, eq: &Equilibrium, tl: &Timeline, knobs: &Knobs) -> OilBalance {
-    let carried_kg = eq.oil_in_charge_kg * eq.target_fraction;
+pub(super) fn oil_balance(
+    s: &Scenario,
+    r: &Resolved,
+    eq: &Equilibrium,
+    tl: &Timeline,
+    knobs: &Knobs,
+) -> OilBalance {
+    let carried_kg = super::oil_in_charge_kg(s, r) * eq.target_fraction;
     let mole_fractions = r.oil.mole_fractions();
     let solubility: f64 =
         r.oil.components.iter().zip(&mole_fractions).map(|(c, x)| x * c.water_solubility_kg_per_m3).sum();

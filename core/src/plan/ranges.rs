@@ -84,7 +84,7 @@ pub(super) fn downstream(
         layering::layering(r, eq, site.pressure_pa, boiling_c, cond.distillate_outlet_c, false)?;
     tl.plan.hydrosol_volume_m3 = (tl.plan.distillate_steam_kg - tl.returned_kg) / water.density_kg_per_m3;
     let sep = separator::separator(s, &water, rate, &oil, cond.distillate_outlet_c);
-    let balance = oil_yield::oil_balance(r, eq, &tl, knobs);
+    let balance = oil_yield::oil_balance(s, r, eq, &tl, knobs);
     let water_use = oil_yield::water_use(s, &tl, cond.plan.cooling_water_per_run_kg);
     let fuel = energy::energy(s, r, site.latent_heat_j_per_kg, &tl, 0.0).fuel_amount;
     Ok(Headline {

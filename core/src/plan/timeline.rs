@@ -100,7 +100,7 @@ fn run_course(
     distillate_rate: f64,
 ) -> Result<(recovery::CarryOver, f64, f64), Box<FieldError>> {
     let (k, efficiency) = release_and_efficiency(s, r, knobs, distillate_rate);
-    let steam_per_kg_oil = distillate_rate / eq.oil_in_charge_kg;
+    let steam_per_kg_oil = distillate_rate / super::oil_in_charge_kg(s, r);
     let course = recovery::carry_over(
         k,
         steam_per_kg_oil,
@@ -224,7 +224,7 @@ pub(super) fn timeline(
     let refill_reheat_s = makeup_water_heating_j / useful_w;
     let total_time_s = time_to_first_drop_s + time_after_first_drop_s + refill_reheat_s;
 
-    let oil_recovered_kg = eq.oil_in_charge_kg * eq.target_fraction;
+    let oil_recovered_kg = super::oil_in_charge_kg(s, r) * eq.target_fraction;
     let plan = RunPlan {
         rate_constant_per_min: k * 60.0,
         steam_rate_kg_per_s: steam_rate,
