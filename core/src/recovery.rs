@@ -128,7 +128,10 @@ pub fn carry_over(
         let released = in_plant * (1.0 - keep);
         in_plant -= released;
         film += released;
-        let capacity = efficiency * steam_per_kg_oil_per_s * dt / least_steam(carried).max(1e-12);
+        // Least steam read at the middle of the step's oil, as it rises while the oil depletes.
+        let first_guess = film.min(efficiency * steam_per_kg_oil_per_s * dt / least_steam(carried).max(1e-12));
+        let capacity =
+            efficiency * steam_per_kg_oil_per_s * dt / least_steam(carried + 0.5 * first_guess).max(1e-12);
         let moved = film.min(capacity);
         steam_limited = capacity < film;
         film -= moved;
@@ -141,7 +144,7 @@ pub fn carry_over(
             break;
         }
         if in_plant < 1e-9 {
-            // All released: the rest goes at the steam's pace alone, in steps of 0.5 % of the oil.
+            // All released: the rest goes at the steam's pace alone, in steps of 0.1 % of the oil.
             reached = finish_at_steam_pace(&mut samples, film, carried, target, max_s, |c| {
                 least_steam(c) / (efficiency * steam_per_kg_oil_per_s)
             });
@@ -151,7 +154,8 @@ pub fn carry_over(
     CarryOver { time_to_target_s: reached, steam_limited, curve: resample(&samples, 24) }
 }
 
-/// Carries the waiting film at the steam's pace, dt = dC · s(C) / (η ṁ), recording samples.
+/// Carries the waiting film at the steam's pace, dt = dC · s(C) / (η ṁ) (midpoint, steps of
+/// 0.1 % of the oil), recording samples.
 fn finish_at_steam_pace(
     samples: &mut Vec<(f64, f64)>,
     film: f64,
@@ -163,7 +167,7 @@ fn finish_at_steam_pace(
     let (mut t, mut c) = *samples.last()?;
     let end = (carried + film).min(target);
     while c < end && t < max_s {
-        let step = 0.005f64.min(end - c);
+        let step = 0.001f64.min(end - c);
         t += step * seconds_per_share(c + 0.5 * step);
         c += step;
         samples.push((t, c));
