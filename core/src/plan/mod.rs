@@ -14,6 +14,7 @@ use crate::scenario::*;
 use crate::{condenser, recovery, season, separator, water};
 use serde::{Deserialize, Serialize};
 
+pub mod sanity;
 mod validate;
 
 pub use validate::validate;
@@ -279,7 +280,8 @@ const SEA_LEVEL_BOILING_C: f64 = 99.974_3;
 /// ```
 pub fn plan(scenario: &Scenario) -> Result<Plan, ScenarioErrors> {
     let resolved = validate(scenario)?;
-    compute(scenario, &resolved).map_err(|e| ScenarioErrors { errors: vec![*e] })
+    let plan = compute(scenario, &resolved).map_err(|e| ScenarioErrors { errors: vec![*e] })?;
+    sanity::checked(plan)
 }
 
 /// The scenario with every default filled in, ready to compute.
