@@ -128,9 +128,13 @@ fn sweep_values(from: &str, to: &str, step: &str) -> Result<(f64, f64, u64), Str
     // The small allowance keeps TO itself when (TO - FROM) / STEP is whole but rounds below.
     let intervals = ((to - from) / step + 1e-9).floor();
     if !(intervals.is_finite() && intervals < MAX_SWEEP_ROWS as f64) {
-        let rows = if intervals.is_finite() { format!("{}", intervals + 1.0) } else { "endless".into() };
+        let rows = if intervals.is_finite() {
+            format!("{} rows", intervals + 1.0)
+        } else {
+            "rows without end".into()
+        };
         return Err(format!(
-            "the sweep would print {rows} rows; at most {MAX_SWEEP_ROWS}: choose a larger STEP or a narrower range"
+            "the sweep would print {rows}; at most {MAX_SWEEP_ROWS} rows: choose a larger STEP or a narrower range"
         ));
     }
     Ok((from, step, intervals as u64 + 1))
