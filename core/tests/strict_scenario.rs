@@ -161,8 +161,7 @@ fn sound() -> CustomVapourPressure {
 }
 
 fn with_own(list: Vec<CustomCompound>, oil: &str) -> Scenario {
-    let mut s = Scenario::default();
-    s.custom_compounds = list;
+    let mut s = Scenario { custom_compounds: list, ..Scenario::default() };
     s.oil.composition = OilComposition::Compound { id: oil.into() };
     s
 }
