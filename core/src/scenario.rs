@@ -588,19 +588,26 @@ pub(crate) fn fmt_num(v: f64) -> String {
 /// tree search rather than a scan of the list. On a repeated id the first one counts (a repeat
 /// is reported as an error anyway).
 pub(crate) struct CustomIndex<'a> {
-    by_id: std::collections::BTreeMap<&'a str, &'a CustomCompound>,
+    list: &'a [CustomCompound],
+    /// Id -> position of its first compound in `list`.
+    by_id: std::collections::BTreeMap<&'a str, usize>,
 }
 
 impl<'a> CustomIndex<'a> {
-    pub fn new(custom: &'a [CustomCompound]) -> Self {
+    pub fn new(list: &'a [CustomCompound]) -> Self {
         let mut by_id = std::collections::BTreeMap::new();
-        for c in custom {
-            by_id.entry(c.id.as_str()).or_insert(c);
+        for (i, c) in list.iter().enumerate() {
+            by_id.entry(c.id.as_str()).or_insert(i);
         }
-        CustomIndex { by_id }
+        CustomIndex { list, by_id }
     }
 
     pub fn get(&self, id: &str) -> Option<&'a CustomCompound> {
+        self.position(id).map(|i| &self.list[i])
+    }
+
+    /// Position of the first compound with this id.
+    pub fn position(&self, id: &str) -> Option<usize> {
         self.by_id.get(id).copied()
     }
 

@@ -349,7 +349,8 @@ fn check_composition(
             ),
         },
         OilComposition::Compound { id } => {
-            if !ck.text("oil.composition.id", id, limits::MAX_ID_CHARS) {
+            if !ck.text("oil.composition", id, limits::MAX_ID_CHARS) {
+                // Too long to be any id: reported as such.
             } else if custom.exists(id) {
                 parts.push((id.clone(), 1.0));
             } else {
@@ -438,6 +439,7 @@ fn check_custom_compounds<'a>(ck: &mut Checker, list: &'a [CustomCompound]) -> C
         if c.id.trim().is_empty() {
             ck.push(&id_field, "empty".into(), "a short name".into(), "give the compound an id".into());
         } else if !ck.text(&id_field, &c.id, limits::MAX_ID_CHARS) {
+            // Too long to be any id: reported as such.
         } else if crate::compounds::find(&c.id).is_some() {
             ck.push(
                 &id_field,
@@ -445,7 +447,7 @@ fn check_custom_compounds<'a>(ck: &mut Checker, list: &'a [CustomCompound]) -> C
                 "an id not used by the library".into(),
                 "the library already has a compound with this id; give yours another".into(),
             );
-        } else if let Some(first) = list.iter().position(|o| o.id == c.id)
+        } else if let Some(first) = index.position(&c.id)
             && first < i
         {
             ck.push(
