@@ -47,6 +47,7 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
         atmosphere::MAX_ALTITUDE_M,
         "m",
     );
+    // Outdoor work: -20 °C to 50 °C covers the climates stills are run in (common practice).
     ck.range("site.ambient_temperature_c", s.site.ambient_temperature_c, -20.0, 50.0, "°C");
     let mut pressure = None;
     let mut pressure_from = PressureFrom::StandardAtmosphere;
@@ -59,6 +60,8 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
         Some(b) => match b.reference {
             BarometerReference::Station => {
                 pressure_from = PressureFrom::StationBarometer;
+                // Station pressure: 40 kPa is about 7200 m (standard atmosphere), above any
+                // farm; 110 kPa a valley below sea level on a high-pressure day.
                 if ck.range("site.barometer.pressure_pa", b.pressure_pa, 40_000.0, 110_000.0, "Pa") {
                     pressure = Some(b.pressure_pa);
                 }
@@ -139,8 +142,10 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
         .heat_capacity_j_per_kg_k
         .or(crop.map(|c| c.plant_heat_capacity_j_per_kg_k))
         .unwrap_or(4180.0 * moisture + 1500.0 * (1.0 - moisture));
+    // Dry plant matter (about 1200, from memory) up to water (4180) with some margin.
     ck.range("charge.heat_capacity_j_per_kg_k", cp_charge, 500.0, 4500.0, "J/(kg K)");
     let charge_temperature_c = s.charge.temperature_c.unwrap_or(s.site.ambient_temperature_c);
+    // Frozen to sun-warmed material as loaded (common practice).
     ck.range("charge.temperature_c", charge_temperature_c, -10.0, 60.0, "°C");
 
     // Own compounds first: the oil may name them.
@@ -154,8 +159,11 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
         // 1 L: a laboratory flask; 50 m³: past the largest field stills (common practice).
         ck.range("still.volume_m3", v, 0.001, 50.0, "m³");
     }
+    // A shallow pan (0.3) to a tall column (5); outside that the wall-area formula means little.
     ck.range("still.height_to_diameter", s.still.height_to_diameter, 0.3, 5.0, "");
+    // None (a still whose warming is not counted) up to a 20 t industrial vessel.
     ck.range("still.metal_mass_kg", s.still.metal_mass_kg, 0.0, 20_000.0, "kg");
+    // Perfect lagging (0) to a bare wall in wind (about 25-50 W/(m² K), from memory).
     ck.range("still.wall_u_w_per_m2_k", s.still.wall_u_w_per_m2_k, 0.0, 50.0, "W/(m² K)");
 
     // Boiler.
@@ -169,22 +177,28 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
             ck.range("boiler.heat_input_w", s.boiler.heat_input_w, 0.0, 5.0e6, "W");
         }
         None => {
+            // 100 W: a laboratory heating mantle; 5 MW: a large industrial boiler.
             ck.range("boiler.heat_input_w", s.boiler.heat_input_w, 100.0, 5.0e6, "W");
         }
     }
+    // 5 %: an open fire in wind; 100 %: an electric element.
     ck.range("boiler.efficiency", efficiency, 0.05, 1.0, "");
     // 100 g: a laboratory flask's water; 100 t: an industrial boiler.
     ck.range("boiler.usable_water_kg", s.boiler.usable_water_kg, 0.1, 100_000.0, "kg");
     let feed_c = s.boiler.feed_temperature_c.unwrap_or(s.site.ambient_temperature_c.max(1.0));
     let hot_limit = boiling_c.map(|b| b - 1.0).unwrap_or(90.0);
+    // Liquid water, below boiling at the site (and below 90 °C, hotter feed is not tap water).
     ck.range("boiler.feed_temperature_c", feed_c, 1.0, hot_limit.min(90.0), "°C");
 
     // Run.
+    // The first-order law never reaches 100 %; under 1 % is not a run.
     ck.range("run.target_recovery_percent", s.run.target_recovery_percent, 1.0, 99.9, "%");
     let k_crop = crop.map(|c| c.rate_constant_per_min);
     let k_per_min = s.run.rate_constant_per_min.or(k_crop.map(|k| k.typical));
     match k_per_min {
         Some(k) => {
+            // Published first-order constants span about 0.002 to 0.3 per min (Milojević et al. 2013
+            // and the crop table); the bounds are wider by a factor of four or so.
             ck.range("run.rate_constant_per_min", k, 0.0005, 1.0, "per min");
         }
         None => ck.push(
@@ -194,11 +208,13 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
             "give the recovery rate, or pick a crop".into(),
         ),
     }
+    // Up to a day between runs.
     ck.range("run.turnaround_min", s.run.turnaround_min, 0.0, 1440.0, "min");
 
     // Condenser.
     let c = &s.condenser;
     let t_d = c.distillate_outlet_c.or(crop.map(|c| c.distillate_temperature_c)).unwrap_or(30.0);
+    // Liquid water that can still cool: just above freezing to 40 °C.
     ck.range("condenser.cooling_water_inlet_c", c.cooling_water_inlet_c, 0.5, 40.0, "°C");
     if let Some(b) = boiling_c {
         ck.range(
@@ -216,8 +232,11 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
             "°C",
         );
     }
+    // Overall coefficients of water-cooled condensers and coolers run from tens to a few
+    // thousand W/(m² K) (Incropera, typical ranges); 10 to 10 000 keeps both ends.
     ck.range("condenser.condensing_u_w_per_m2_k", c.condensing_u_w_per_m2_k, 10.0, 10_000.0, "W/(m² K)");
     ck.range("condenser.cooling_u_w_per_m2_k", c.cooling_u_w_per_m2_k, 10.0, 10_000.0, "W/(m² K)");
+    // Capillary (2 mm) to a 100 mm pipe.
     ck.range("condenser.tube_outer_diameter_m", c.tube_outer_diameter_m, 0.002, 0.1, "m");
     if c.kind == CondenserKind::CoilInTub {
         // 1 kg: a bucket round a small coil; 100 t: a cooling pond.
@@ -226,8 +245,11 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
 
     // Separator.
     let sp = &s.separator;
+    // 10 µm to 2 mm: Stokes' law holds at the small end; API 421 designs for 150 µm.
     ck.range("separator.droplet_diameter_m", sp.droplet_diameter_m, 10e-6, 2e-3, "m");
+    // 10 s to a day.
     ck.range("separator.residence_time_s", sp.residence_time_s, 10.0, 86_400.0, "s");
+    // API 421 uses factors from about 1.07 to 1.74 (from memory); up to 3 for a rough build.
     ck.range("separator.turbulence_factor", sp.turbulence_factor, 1.0, 3.0, "");
 
     // Costs and season.
@@ -238,10 +260,12 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
         ("costs.labour_per_hour", s.costs.labour_per_hour),
     ] {
         if let Some(v) = v {
+            // Prices: free up to a million per unit, in any currency.
             ck.range(field, v, 0.0, 1.0e6, "");
         }
     }
     if let Some(h) = s.season.harvest_kg {
+        // Up to 10 000 t a season.
         ck.range("season.harvest_kg", h, 0.0, 1.0e7, "kg");
     }
 
@@ -268,6 +292,7 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
     }
     let oil_density = match (&oil, s.oil.density_kg_per_m3) {
         (_, Some(d)) => {
+            // Light terpene oils (about 840) to heavy phenolic ones (about 1070) with margin.
             ck.range("oil.density_kg_per_m3", d, 600.0, 1500.0, "kg/m³");
             d
         }
@@ -458,6 +483,9 @@ fn check_custom_compounds<'a>(ck: &mut Checker, list: &'a [CustomCompound]) -> C
             );
         }
         ck.text(&format!("{f}.name"), &c.name, limits::MAX_NAME_CHARS);
+        // Essential-oil compounds weigh 0.07 to 0.3 kg/mol; 0.02 (neon) to 1 leave room for others.
+        // Liquids from a light ether (about 600) to heavy halogenated oils (about 2000 kg/m³).
+        // Solubility: insoluble (0) up to 100 kg/m³, past the most soluble oil alcohols.
         ck.range(&format!("{f}.molar_mass_kg_per_mol"), c.molar_mass_kg_per_mol, 0.02, 1.0, "kg/mol");
         ck.range(
             &format!("{f}.liquid_density_kg_per_m3"),
