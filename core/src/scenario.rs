@@ -524,6 +524,9 @@ impl Checker {
         }
         let message = if !value.is_finite() {
             "must be a number".to_string()
+        } else if value <= 0.0 && min > 0.0 {
+            // Said plainly where the quantity cannot be zero at all; the range gives the bound.
+            "must be more than zero".to_string()
         } else if value < min {
             format!("must be at least {} {unit}", fmt_num(min))
         } else {

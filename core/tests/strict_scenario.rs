@@ -298,6 +298,12 @@ fn a_tiny_positive_value_is_refused_not_planned_into_nulls() {
             assert!(err.value.contains('e'), "shown as a number, not 0: {}", err.value);
         }
     }
+    // At or below zero the message says so plainly; the range still gives the bound.
+    for field in POSITIVE_FIELDS {
+        let e = plan_err(&set(&Scenario::default(), field, -4.0));
+        assert_eq!(e.on(field).unwrap().message, "must be more than zero", "{field}");
+        assert!(e.on(field).unwrap().min.is_some_and(|m| m > 0.0), "{field}");
+    }
     let e = plan_err(&mixture(&[100.0 - 1e-300, 1e-300]));
     assert!(has(&e, "oil.composition.parts.1.mass_percent"), "{e}");
 }

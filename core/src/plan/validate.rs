@@ -101,9 +101,9 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
     let mut oil_content_ok = false;
     match oil_content_percent {
         Some(v) => {
-            // 0.001 %: well under rose (about 0.02 %, the poorest crop in the table); 50 %: over
-            // twice clove bud, the richest (about 21 %).
-            oil_content_ok = ck.range("charge.oil_content_percent", v, 0.001, 50.0, "%");
+            // 0.001 %: well under rose (about 0.02 %, the poorest crop in the table); 100 %: the
+            // oil is part of the charge (and with the water, below, no more than all of it).
+            oil_content_ok = ck.range("charge.oil_content_percent", v, 0.001, 100.0, "%");
         }
         None => ck.push(
             "charge.oil_content_percent",
