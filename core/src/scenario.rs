@@ -10,12 +10,34 @@ use serde::{Deserialize, Serialize};
 
 /// The scenario format's version. Bump it when a field changes meaning.
 pub const SCENARIO_VERSION: u32 = 1;
+/// The oldest format version still read. A file of an older version than today's is opened as
+/// it is (every field it lacks takes its default); a newer one is refused, by name, rather than
+/// half-read.
+pub const OLDEST_SCENARIO_VERSION: u32 = 1;
+
+/// Size limits, checked before anything else so a pasted monster is refused at once. A real
+/// analysis lists a few dozen compounds (a GC report of a crop oil names some 20-60, common
+/// practice, no source); the limits leave room for that and refuse what no still needs.
+pub mod limits {
+    /// Parts of an oil given as a mixture.
+    pub const MAX_MIXTURE_PARTS: usize = 64;
+    /// Compounds of the user's own in one scenario.
+    pub const MAX_CUSTOM_COMPOUNDS: usize = 32;
+    /// Characters in an id (crop, compound): ids are short keys, not prose.
+    pub const MAX_ID_CHARS: usize = 64;
+    /// Characters in a display name.
+    pub const MAX_NAME_CHARS: usize = 128;
+    /// Characters in a currency label ("EUR", "kr", "US$").
+    pub const MAX_CURRENCY_CHARS: usize = 16;
+    /// Bytes of scenario JSON: the largest scenario the other limits allow is some 20 kB.
+    pub const MAX_SCENARIO_JSON_BYTES: usize = 256 * 1024;
+}
 
 macro_rules! schema {
     ($($item:item)*) => { $(
         #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
         #[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
-        #[serde(default)]
+        #[serde(default, deny_unknown_fields)]
         $item
     )* };
 }
@@ -163,6 +185,7 @@ schema! {
 /// A barometer reading at the site.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
+#[serde(deny_unknown_fields)]
 pub struct Barometer {
     pub pressure_pa: f64,
     pub reference: BarometerReference,
@@ -182,7 +205,7 @@ pub enum BarometerReference {
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
 #[derive(Default)]
-#[serde(tag = "kind", rename_all = "snake_case")]
+#[serde(deny_unknown_fields, tag = "kind", rename_all = "snake_case")]
 pub enum OilComposition {
     /// The crop preset's typical composition.
     #[default]
@@ -207,6 +230,7 @@ pub enum CondenserKind {
 /// A compound of the user's own.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
+#[serde(deny_unknown_fields)]
 pub struct CustomCompound {
     pub id: String,
     pub name: String,
@@ -220,7 +244,7 @@ pub struct CustomCompound {
 /// A vapour-pressure law given by the user.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
-#[serde(tag = "kind", rename_all = "snake_case")]
+#[serde(deny_unknown_fields, tag = "kind", rename_all = "snake_case")]
 pub enum CustomVapourPressure {
     /// log_b(p/unit) = A - B / (T/unit + C), with the units the coefficients were published in.
     Antoine {
@@ -514,6 +538,9 @@ impl Checker {
         }
         let message = if !value.is_finite() {
             "must be a number".to_string()
+        } else if value <= 0.0 && min > 0.0 {
+            // Said plainly where the quantity cannot be zero at all; the range gives the bound.
+            "must be more than zero".to_string()
         } else if value < min {
             format!("must be at least {} {unit}", fmt_num(min))
         } else {
@@ -524,28 +551,28 @@ impl Checker {
         false
     }
 
-    fn set_range(&mut self, min: f64, max: f64) {
+    /// Checks a text's length in characters; returns whether it passed.
+    pub fn text(&mut self, field: &str, value: &str, max_chars: usize) -> bool {
+        let n = value.chars().count();
+        if n <= max_chars {
+            return true;
+        }
+        let shown: String = value.chars().take(24).collect();
+        self.push(
+            field,
+            format!("{shown}…"),
+            format!("up to {max_chars} characters"),
+            format!("too long: {n} characters, at most {max_chars}"),
+        );
+        false
+    }
+
+    /// Gives the last error its range's ends, for a page to restate in its own unit.
+    pub fn set_range(&mut self, min: f64, max: f64) {
         if let Some(e) = self.errors.last_mut() {
             e.min = Some(min);
             e.max = Some(max);
         }
-    }
-
-    /// Checks min < value ≤ max: for quantities that must be strictly positive.
-    pub fn positive(&mut self, field: &str, value: f64, max: f64, unit: &str) -> bool {
-        if value.is_finite() && value > 0.0 && value <= max {
-            return true;
-        }
-        let message = if !value.is_finite() {
-            "must be a number".to_string()
-        } else if value <= 0.0 {
-            "must be more than zero".to_string()
-        } else {
-            format!("must be at most {} {unit}", fmt_num(max))
-        };
-        self.push(field, fmt_num(value), format!("more than 0, up to {} {unit}", fmt_num(max)), message);
-        self.set_range(0.0, max);
-        false
     }
 
     pub fn push(&mut self, field: &str, value: String, valid: String, message: String) {
@@ -560,17 +587,313 @@ impl Checker {
     }
 }
 
-/// A number printed without needless digits.
+/// A number printed without needless digits (in exponent form when six decimals would show
+/// nothing, or the digits would run on).
 pub(crate) fn fmt_num(v: f64) -> String {
     if !v.is_finite() {
         return format!("{v}");
+    }
+    if v != 0.0 && (v.abs() < 1e-6 || v.abs() >= 1e15) {
+        return format!("{v:e}");
     }
     let s = format!("{:.6}", v);
     let s = s.trim_end_matches('0').trim_end_matches('.');
     s.to_string()
 }
 
-/// Whether `id` names a library compound or one of the scenario's own.
-pub(crate) fn compound_exists(id: &str, custom: &[CustomCompound]) -> bool {
-    compounds::find(id).is_some() || custom.iter().any(|c| c.id == id)
+/// The scenario's own compounds by id, built once, so looking up each part of a mixture is a
+/// tree search rather than a scan of the list. On a repeated id the first one counts (a repeat
+/// is reported as an error anyway).
+pub(crate) struct CustomIndex<'a> {
+    list: &'a [CustomCompound],
+    /// Id -> position of its first compound in `list`.
+    by_id: std::collections::BTreeMap<&'a str, usize>,
+}
+
+impl<'a> CustomIndex<'a> {
+    pub fn new(list: &'a [CustomCompound]) -> Self {
+        let mut by_id = std::collections::BTreeMap::new();
+        for (i, c) in list.iter().enumerate() {
+            by_id.entry(c.id.as_str()).or_insert(i);
+        }
+        CustomIndex { list, by_id }
+    }
+
+    pub fn get(&self, id: &str) -> Option<&'a CustomCompound> {
+        self.position(id).map(|i| &self.list[i])
+    }
+
+    /// Position of the first compound with this id.
+    pub fn position(&self, id: &str) -> Option<usize> {
+        self.by_id.get(id).copied()
+    }
+
+    /// Whether `id` names a library compound or one of the scenario's own.
+    pub fn exists(&self, id: &str) -> bool {
+        compounds::find(id).is_some() || self.by_id.contains_key(id)
+    }
+}
+
+#[cfg(feature = "json")]
+pub use json::{parse_scenario_json, scenario_from_json_value};
+
+/// Reading a scenario from JSON strictly: every error names its field and what it expects.
+#[cfg(feature = "json")]
+mod json {
+    use super::{FieldError, OLDEST_SCENARIO_VERSION, SCENARIO_VERSION, Scenario, ScenarioErrors, limits};
+    use serde_json::Value;
+
+    /// The only places a scenario holds a list; anywhere else a list would be a section written
+    /// by position, which the format does not allow (a reordered field would change meaning).
+    const LIST_FIELDS: [&str; 2] = ["custom_compounds", "oil.composition.parts"];
+    /// Deeper than any scenario goes (five levels); a bound for the walk over a caller's value.
+    const MAX_DEPTH: usize = 16;
+
+    fn one(field: &str, value: String, valid: &str, message: String) -> ScenarioErrors {
+        ScenarioErrors {
+            errors: vec![FieldError {
+                field: field.to_string(),
+                value,
+                valid: valid.to_string(),
+                message,
+                min: None,
+                max: None,
+            }],
+        }
+    }
+
+    /// Reads a scenario from JSON text.
+    ///
+    /// Strict: an unknown or misspelt field, a section written as a list, a value of the wrong
+    /// type, a repeated key or a format version this build does not read is an error naming the
+    /// field (dotted path, list items by index: `custom_compounds.1.id`) and what it expects.
+    /// Text over [`limits::MAX_SCENARIO_JSON_BYTES`] is refused before it is parsed.
+    ///
+    /// ```
+    /// use stillroom_core::scenario::parse_scenario_json;
+    /// let s = parse_scenario_json(r#"{"charge": {"plant_mass_kg": 40}}"#).unwrap();
+    /// assert_eq!(s.charge.plant_mass_kg, 40.0);
+    /// let e = parse_scenario_json(r#"{"charge": {"plant_mass": 40}}"#).unwrap_err();
+    /// assert_eq!(e.errors[0].field, "charge.plant_mass");
+    /// let e = parse_scenario_json(r#"{"charge": {"plant_mass_kg": "forty"}}"#).unwrap_err();
+    /// assert_eq!(e.errors[0].field, "charge.plant_mass_kg");
+    /// assert_eq!(e.errors[0].valid, "a number");
+    /// ```
+    pub fn parse_scenario_json(text: &str) -> Result<Scenario, ScenarioErrors> {
+        if text.len() > limits::MAX_SCENARIO_JSON_BYTES {
+            return Err(one(
+                "scenario",
+                format!("{} bytes", text.len()),
+                &format!("at most {} bytes", limits::MAX_SCENARIO_JSON_BYTES),
+                "the scenario text is far larger than any scenario".into(),
+            ));
+        }
+        let value: Value = serde_json::from_str(text)
+            .map_err(|e| one("scenario", String::new(), "JSON text", format!("not readable as JSON: {e}")))?;
+        check_shape(&value)?;
+        // From the text rather than the value, so that a key given twice is caught as well.
+        let de = &mut serde_json::Deserializer::from_str(text);
+        serde_path_to_error::deserialize(de).map_err(|e| from_serde(&value, e))
+    }
+
+    /// Reads a scenario from a JSON value, with the same checks as [`parse_scenario_json`].
+    ///
+    /// ```
+    /// use stillroom_core::scenario::scenario_from_json_value;
+    /// let v = serde_json::json!({"site": [300, null, 20]});
+    /// assert_eq!(scenario_from_json_value(v).unwrap_err().errors[0].field, "site");
+    /// ```
+    pub fn scenario_from_json_value(value: Value) -> Result<Scenario, ScenarioErrors> {
+        check_shape(&value)?;
+        let original = value.clone();
+        serde_path_to_error::deserialize(value).map_err(|e| from_serde(&original, e))
+    }
+
+    /// The checks serde's derive does not make: an object at the top, a version this build reads,
+    /// and no section written as a list.
+    fn check_shape(value: &Value) -> Result<(), ScenarioErrors> {
+        let Value::Object(map) = value else {
+            return Err(one(
+                "scenario",
+                kind_of(value).into(),
+                "a JSON object of named sections, {…}",
+                "a scenario is an object of named sections".into(),
+            ));
+        };
+        if let Some(v) = map.get("version") {
+            let readable = v.as_u64().is_some_and(|n| {
+                (u64::from(OLDEST_SCENARIO_VERSION)..=u64::from(SCENARIO_VERSION)).contains(&n)
+            });
+            if !readable {
+                let range = version_range();
+                let message = if v.as_u64().is_some_and(|n| n > u64::from(SCENARIO_VERSION)) {
+                    format!(
+                        "this scenario was written by a newer version of the format; this build reads {range}"
+                    )
+                } else {
+                    format!("not a format version this build reads ({range})")
+                };
+                return Err(one("version", v.to_string(), &range, message));
+            }
+        }
+        let mut errors = Vec::new();
+        walk_lists(value, &mut String::new(), 0, &mut errors);
+        if errors.is_empty() { Ok(()) } else { Err(ScenarioErrors { errors }) }
+    }
+
+    fn version_range() -> String {
+        if OLDEST_SCENARIO_VERSION == SCENARIO_VERSION {
+            format!("version {SCENARIO_VERSION}")
+        } else {
+            format!("versions {OLDEST_SCENARIO_VERSION} to {SCENARIO_VERSION}")
+        }
+    }
+
+    fn kind_of(v: &Value) -> &'static str {
+        match v {
+            Value::Null => "null",
+            Value::Bool(_) => "true or false",
+            Value::Number(_) => "a number",
+            Value::String(_) => "text",
+            Value::Array(_) => "a list",
+            Value::Object(_) => "an object",
+        }
+    }
+
+    /// Reports every list outside [`LIST_FIELDS`] (and any nesting deeper than [`MAX_DEPTH`]).
+    fn walk_lists(v: &Value, path: &mut String, depth: usize, errors: &mut Vec<FieldError>) {
+        if depth > MAX_DEPTH {
+            errors.push(field_error(
+                path,
+                "nested deeper than any scenario",
+                "sections nested as the format has them",
+            ));
+            return;
+        }
+        let len = path.len();
+        match v {
+            Value::Object(map) => {
+                for (k, x) in map {
+                    if !path.is_empty() {
+                        path.push('.');
+                    }
+                    path.push_str(k);
+                    walk_lists(x, path, depth + 1, errors);
+                    path.truncate(len);
+                }
+            }
+            Value::Array(items) => {
+                // A list field by name (its indices left out: `custom_compounds.0.x` ->
+                // `custom_compounds.x`), and never a list straight inside a list.
+                let bare: Vec<&str> = path.split('.').filter(|s| s.parse::<usize>().is_err()).collect();
+                let in_list = path.rsplit('.').next().is_some_and(|s| s.parse::<usize>().is_ok());
+                if in_list || !LIST_FIELDS.contains(&bare.join(".").as_str()) {
+                    errors.push(field_error(
+                        path,
+                        "a list",
+                        "an object with named fields, {…}; sections are never written by position",
+                    ));
+                    return;
+                }
+                for (i, x) in items.iter().enumerate() {
+                    path.push_str(&format!(".{i}"));
+                    walk_lists(x, path, depth + 1, errors);
+                    path.truncate(len);
+                }
+            }
+            _ => {}
+        }
+    }
+
+    fn field_error(path: &str, value: &str, valid: &str) -> FieldError {
+        FieldError {
+            field: if path.is_empty() { "scenario".into() } else { path.to_string() },
+            value: value.to_string(),
+            valid: valid.to_string(),
+            message: format!("expected {valid}"),
+            min: None,
+            max: None,
+        }
+    }
+
+    /// Turns serde's error (with the path it failed at) into a field error: the dotted path,
+    /// what was expected, in words.
+    fn from_serde(value: &Value, e: serde_path_to_error::Error<serde_json::Error>) -> ScenarioErrors {
+        let mut field = dotted(e.path());
+        let inner = e.into_inner();
+        let text = inner.to_string();
+        // serde_json appends " at line L column C"; the field path says more, keep it apart.
+        let (message, place) = match text.rfind(" at line ") {
+            Some(i) => (text[..i].to_string(), Some(text[i + 1..].to_string())),
+            None => (text.clone(), None),
+        };
+        // Inside a tagged section serde loses the path; find the failing part by reading the
+        // parts again on their own.
+        if field == "oil.composition"
+            && let Some(parts) = value.pointer("/oil/composition/parts")
+            && let Err(pe) = serde_path_to_error::deserialize::<_, Vec<super::OilPart>>(parts)
+        {
+            let sub = dotted(pe.path());
+            field = if sub == "scenario" {
+                "oil.composition.parts".into()
+            } else {
+                format!("oil.composition.parts.{sub}")
+            };
+        }
+        // A missing, unknown or repeated field is named in the message; add it to the path.
+        for lead in ["missing field `", "unknown field `", "duplicate field `"] {
+            if let Some(rest) = message.strip_prefix(lead)
+                && let Some(name) = rest.split('`').next()
+                && !field.ends_with(name)
+            {
+                field = if field == "scenario" { name.to_string() } else { format!("{field}.{name}") };
+            }
+        }
+        let (found, valid) = match message.split_once(", expected ") {
+            Some((head, expected)) => (
+                head.strip_prefix("invalid type: ")
+                    .or(head.strip_prefix("invalid value: "))
+                    .unwrap_or("")
+                    .to_string(),
+                plain_expected(expected),
+            ),
+            None => (String::new(), String::new()),
+        };
+        let message = match place {
+            Some(place) => format!("{} ({place})", plain_message(&message)),
+            None => plain_message(&message),
+        };
+        ScenarioErrors {
+            errors: vec![FieldError { field, value: found, valid, message, min: None, max: None }],
+        }
+    }
+
+    fn dotted(path: &serde_path_to_error::Path) -> String {
+        let parts: Vec<String> = path
+            .iter()
+            .filter_map(|seg| match seg {
+                serde_path_to_error::Segment::Seq { index } => Some(index.to_string()),
+                serde_path_to_error::Segment::Map { key } => Some(key.clone()),
+                serde_path_to_error::Segment::Enum { .. } | serde_path_to_error::Segment::Unknown => None,
+            })
+            .collect();
+        if parts.is_empty() { "scenario".into() } else { parts.join(".") }
+    }
+
+    /// serde names Rust types; say what a user would type.
+    fn plain_expected(expected: &str) -> String {
+        match expected {
+            "f64" => "a number".into(),
+            "u32" => "a whole number, 0 or more".into(),
+            "a string" => "text".into(),
+            other => other.to_string(),
+        }
+    }
+
+    fn plain_message(message: &str) -> String {
+        match message.split_once(", expected ") {
+            Some((head, expected)) => format!("{head}, expected {}", plain_expected(expected)),
+            None => message.to_string(),
+        }
+    }
 }

@@ -4,8 +4,11 @@
 use proptest::prelude::*;
 use stillroom_core::crops::CROPS;
 use stillroom_core::plan::OilLayer;
-use stillroom_core::scenario::{OilComposition, Scenario};
+use stillroom_core::scenario::{Barometer, BarometerReference, CondenserKind, OilComposition, Scenario};
 use stillroom_core::{Plan, plan};
+
+#[path = "../../core/tests/common/plan_numbers.rs"]
+mod plan_numbers;
 
 fn all_numbers_finite(v: &serde_json::Value, path: &str) -> Result<(), String> {
     match v {
@@ -80,7 +83,11 @@ proptest! {
                 prop_assert!(p.yield_estimate.oil_kg.central <= p.yield_estimate.oil_kg.high + 1e-12);
                 prop_assert!(p.codistillation.temperature_c < p.site.water_boiling_point_c);
             }
-            Err(e) => prop_assert!(!e.errors.is_empty()),
+            // Inputs inside their ranges never fall through to the plan's last check.
+            Err(e) => prop_assert!(
+                !e.errors.is_empty() && !e.errors[0].field.starts_with("plan."),
+                "{e}"
+            ),
         }
     }
 
@@ -165,4 +172,139 @@ fn tub_warming_rise_and_time_tell_the_same_story() {
     let allowed = s.condenser.cooling_water_outlet_c - s.condenser.cooling_water_inlet_c;
     let implied = rise * lasts / p.run.time_after_first_drop_s;
     assert!((implied - allowed).abs() < 1e-6 * allowed, "{implied} vs {allowed}");
+}
+
+type Setter = fn(&mut Scenario, f64);
+
+/// Every number input of a scenario: its path, a span of ordinary values, and how to set it.
+const NUMBER_INPUTS: &[(&str, f64, f64, Setter)] = &[
+    ("site.altitude_m", -400.0, 5800.0, |s, v| s.site.altitude_m = v),
+    ("site.ambient_temperature_c", -15.0, 45.0, |s, v| s.site.ambient_temperature_c = v),
+    ("site.barometer.pressure_pa", 50_000.0, 108_000.0, |s, v| {
+        s.site.barometer = Some(Barometer { pressure_pa: v, reference: BarometerReference::Station })
+    }),
+    ("charge.plant_mass_kg", 0.1, 5000.0, |s, v| s.charge.plant_mass_kg = v),
+    ("charge.oil_content_percent", 0.01, 20.0, |s, v| s.charge.oil_content_percent = Some(v)),
+    ("charge.moisture_percent", 0.0, 90.0, |s, v| s.charge.moisture_percent = Some(v)),
+    ("charge.heat_capacity_j_per_kg_k", 600.0, 4400.0, |s, v| s.charge.heat_capacity_j_per_kg_k = Some(v)),
+    ("charge.temperature_c", -5.0, 55.0, |s, v| s.charge.temperature_c = Some(v)),
+    ("oil.density_kg_per_m3", 650.0, 1400.0, |s, v| s.oil.density_kg_per_m3 = Some(v)),
+    ("still.volume_m3", 0.002, 40.0, |s, v| s.still.volume_m3 = Some(v)),
+    ("still.height_to_diameter", 0.4, 4.5, |s, v| s.still.height_to_diameter = v),
+    ("still.metal_mass_kg", 0.0, 15_000.0, |s, v| s.still.metal_mass_kg = v),
+    ("still.wall_u_w_per_m2_k", 0.0, 40.0, |s, v| s.still.wall_u_w_per_m2_k = v),
+    ("boiler.heat_input_w", 200.0, 4.0e6, |s, v| s.boiler.heat_input_w = v),
+    ("boiler.efficiency", 0.1, 1.0, |s, v| s.boiler.efficiency = Some(v)),
+    ("boiler.usable_water_kg", 0.5, 50_000.0, |s, v| s.boiler.usable_water_kg = v),
+    ("boiler.feed_temperature_c", 2.0, 80.0, |s, v| s.boiler.feed_temperature_c = Some(v)),
+    ("boiler.steam_rate_kg_per_h", 0.05, 10_000.0, |s, v| s.boiler.steam_rate_kg_per_h = Some(v)),
+    ("run.target_recovery_percent", 5.0, 99.5, |s, v| s.run.target_recovery_percent = v),
+    ("run.rate_constant_per_min", 0.001, 0.9, |s, v| s.run.rate_constant_per_min = Some(v)),
+    ("run.turnaround_min", 0.0, 1000.0, |s, v| s.run.turnaround_min = v),
+    ("condenser.cooling_water_inlet_c", 1.0, 35.0, |s, v| s.condenser.cooling_water_inlet_c = v),
+    ("condenser.cooling_water_outlet_c", 20.0, 90.0, |s, v| s.condenser.cooling_water_outlet_c = v),
+    ("condenser.distillate_outlet_c", 10.0, 90.0, |s, v| s.condenser.distillate_outlet_c = Some(v)),
+    ("condenser.condensing_u_w_per_m2_k", 20.0, 9000.0, |s, v| s.condenser.condensing_u_w_per_m2_k = v),
+    ("condenser.cooling_u_w_per_m2_k", 20.0, 9000.0, |s, v| s.condenser.cooling_u_w_per_m2_k = v),
+    ("condenser.tube_outer_diameter_m", 0.003, 0.09, |s, v| s.condenser.tube_outer_diameter_m = v),
+    ("condenser.tub_water_kg", 2.0, 50_000.0, |s, v| s.condenser.tub_water_kg = v),
+    ("separator.droplet_diameter_m", 20e-6, 1.5e-3, |s, v| s.separator.droplet_diameter_m = v),
+    ("separator.residence_time_s", 20.0, 80_000.0, |s, v| s.separator.residence_time_s = v),
+    ("separator.turbulence_factor", 1.0, 2.9, |s, v| s.separator.turbulence_factor = v),
+    ("costs.fuel_price_per_unit", 0.0, 1e5, |s, v| s.costs.fuel_price_per_unit = Some(v)),
+    ("costs.plant_value_per_kg", 0.0, 1e5, |s, v| s.costs.plant_value_per_kg = Some(v)),
+    ("costs.labour_per_hour", 0.0, 1e5, |s, v| s.costs.labour_per_hour = Some(v)),
+    ("season.harvest_kg", 0.0, 1e6, |s, v| s.season.harvest_kg = Some(v)),
+];
+
+/// Values no field should choke on: the edges of f64 and of sense.
+const EXTREMES: &[f64] = &[
+    0.0,
+    -0.0,
+    5e-324,
+    -5e-324,
+    1e-300,
+    1e-12,
+    1e-6,
+    1e-3,
+    1.0,
+    1e6,
+    1e12,
+    1e15,
+    1e300,
+    f64::MAX,
+    -1e-300,
+    -1.0,
+    -1e6,
+    -f64::MAX,
+    f64::NAN,
+    f64::INFINITY,
+    f64::NEG_INFINITY,
+];
+
+prop_compose! {
+    /// Mostly ordinary values, and at most two extreme ones: an extreme value hides behind
+    /// no other field's error.
+    fn extreme_scenario()(
+        picks in prop::collection::vec(prop::option::weighted(0.15, 0.0f64..=1.0), NUMBER_INPUTS.len()),
+        extremes in prop::collection::vec((0..NUMBER_INPUTS.len(), 0..EXTREMES.len()), 0..=2),
+        crop in prop::option::of(0..CROPS.len()),
+        tube in any::<bool>(),
+    ) -> Scenario {
+        let mut s = Scenario::default();
+        s.charge.crop = crop.map(|c| CROPS[c].id.to_string());
+        if s.charge.crop.is_none() {
+            // Without a preset these have no default.
+            s.oil.composition = OilComposition::Compound { id: "linalool".into() };
+            s.charge.oil_content_percent = Some(1.0);
+            s.run.rate_constant_per_min = Some(0.05);
+        }
+        if tube {
+            s.condenser.kind = CondenserKind::TubeInTube;
+        }
+        for ((_, lo, hi, set), p) in NUMBER_INPUTS.iter().zip(&picks) {
+            if let Some(u) = p {
+                set(&mut s, lo + u * (hi - lo));
+            }
+        }
+        for (field, value) in extremes {
+            (NUMBER_INPUTS[field].3)(&mut s, EXTREMES[value]);
+        }
+        s
+    }
+}
+
+proptest! {
+    #![proptest_config(ProptestConfig { cases: 512, ..ProptestConfig::default() })]
+
+    /// A plan is all finite numbers within ±1e15, each `null` where the published schema allows
+    /// one, or it is a list of field errors; never a panic.
+    #[test]
+    fn a_plan_is_sound_or_an_error_even_at_the_extremes(s in extreme_scenario()) {
+        match plan(&s) {
+            Ok(p) => {
+                let v = serde_json::to_value(&p).unwrap();
+                let schema = plan_numbers::plan_schema();
+                prop_assert!(plan_numbers::check(&v, &schema).is_ok(), "{:?}", plan_numbers::check(&v, &schema));
+            }
+            Err(e) => prop_assert!(!e.errors.is_empty()),
+        }
+    }
+}
+
+#[test]
+fn the_schema_check_sees_a_nan_written_as_null() {
+    // The check above is only worth something if it can fail: a NaN in a plain number field
+    // (written as null) and a number past the bound are both caught.
+    let schema = plan_numbers::plan_schema();
+    let mut v = serde_json::to_value(plan(&Scenario::default()).unwrap()).unwrap();
+    assert_eq!(plan_numbers::check(&v, &schema), Ok(()));
+    v["run"]["total_time_s"] = serde_json::Value::Null;
+    assert!(plan_numbers::check(&v, &schema).unwrap_err().contains("plan.run.total_time_s"));
+    v["run"]["total_time_s"] = serde_json::json!(2e15);
+    assert!(plan_numbers::check(&v, &schema).is_err());
+    // An optional field may be null.
+    v["run"]["total_time_s"] = serde_json::json!(1.0);
+    v["run"]["boiler_dry_after_s"] = serde_json::Value::Null;
+    assert_eq!(plan_numbers::check(&v, &schema), Ok(()));
 }

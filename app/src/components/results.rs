@@ -267,7 +267,8 @@ pub fn Details() -> impl IntoView {
             <h3>"Steam and time"</h3>
             <dl>
                 <Row label="Air pressure at the still" out="pressure" value=p(|p| units::kpa(p.site.pressure_pa)) />
-                <Row label="Oil and water boil together at" out="codistillation_temperature" value=p(|p| format!("{} ({} below water alone)", units::celsius(p.codistillation.temperature_c), units::fixed(p.codistillation.lowering_k, 1) + " K")) />
+                <Row label="Oil and water boil together at" out="codistillation_temperature" value=p(|p| units::celsius(p.codistillation.temperature_c)) />
+                <Row label="below water's own boiling point by" out="codistillation_lowering" value=p(|p| format!("{} K", units::fixed(p.codistillation.lowering_k, 1))) />
                 <Row label="Least steam per kg of oil (a lower bound, at the start)" out="steam_per_kg_oil" value=p(|p| format!("{} kg", units::sig3(p.codistillation.min_steam_per_kg_oil))) />
                 <Row label="Least steam for this charge (a lower bound)" out="min_steam_charge" value=p(|p| format!("{} to the target, {} for all of it", units::mass(p.codistillation.min_steam_to_target_kg), units::mass(p.codistillation.min_steam_whole_charge_kg))) />
                 <Row label="Steam raised" out="steam_rate" value=p(|p| format!("{} kg/h", units::sig3(p.run.steam_rate_kg_per_s * 3600.0))) />

@@ -30,6 +30,7 @@ mod season;
 mod separator;
 mod site;
 mod timeline;
+pub mod sanity;
 mod validate;
 mod warnings;
 
@@ -410,7 +411,8 @@ const SEA_LEVEL_BOILING_C: f64 = 99.974_3;
 /// ```
 pub fn plan(scenario: &Scenario) -> Result<Plan, ScenarioErrors> {
     let resolved = validate(scenario)?;
-    compute(scenario, &resolved).map_err(|e| ScenarioErrors { errors: vec![*e] })
+    let plan = compute(scenario, &resolved).map_err(|e| ScenarioErrors { errors: vec![*e] })?;
+    sanity::checked(plan)
 }
 
 /// The scenario with every default filled in, ready to compute.
