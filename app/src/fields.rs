@@ -523,7 +523,7 @@ pub const FIELDS: &[NumField] = &[
     },
     NumField {
         key: "own_p1",
-        path: "custom_compounds.0.vapour_pressure.p1",
+        path: "custom_compounds.0.vapour_pressure.p1_pa",
         label: "First point: vapour pressure",
         unit: "kPa",
         hint: "",
@@ -535,7 +535,7 @@ pub const FIELDS: &[NumField] = &[
     },
     NumField {
         key: "own_t2",
-        path: "custom_compounds.0.vapour_pressure.t2",
+        path: "custom_compounds.0.vapour_pressure.t2_c",
         label: "Second point: temperature",
         unit: "°C",
         hint: "The normal boiling point is a good second point.",
@@ -547,7 +547,7 @@ pub const FIELDS: &[NumField] = &[
     },
     NumField {
         key: "own_p2",
-        path: "custom_compounds.0.vapour_pressure.p2",
+        path: "custom_compounds.0.vapour_pressure.p2_pa",
         label: "Second point: vapour pressure",
         unit: "kPa",
         hint: "101.325 kPa at the normal boiling point.",
