@@ -145,3 +145,29 @@ fn hundreds_of_idle_connections_do_not_block_a_fresh_request() {
     drop(idle);
     std::fs::remove_dir_all(&d).unwrap();
 }
+
+#[test]
+fn a_client_that_stops_reading_is_cut_off() {
+    let d = small_site("stall");
+    // Far more than the socket buffers on both ends hold, so the server's writes block.
+    let size = 64 << 20;
+    std::fs::write(d.join("big.bin"), vec![0x5au8; size]).unwrap();
+    let stall = Duration::from_secs(2);
+    // One connection at a time: the stalled one must give its place up.
+    let limits = Limits { write_stall_timeout: stall, max_connections: 1, ..Limits::default() };
+    let s = Server::start_with(&d, std::net::TcpListener::bind(("127.0.0.1", 0)).unwrap(), limits).unwrap();
+
+    let mut stuck = TcpStream::connect(s.addr()).unwrap();
+    stuck.write_all(b"GET /big.bin HTTP/1.1\r\nHost: x\r\n\r\n").unwrap();
+    // Never read; meanwhile a second client waits for the only place.
+    let t = Instant::now();
+    let r = serve_http::get(s.addr(), "/", &[]);
+    let waited = t.elapsed();
+    assert_eq!(r.status(), 200);
+    assert!(waited >= stall - Duration::from_millis(500), "answered after {waited:?}: was the big one sent?");
+    assert!(waited < stall + Duration::from_secs(5), "answered after {waited:?}");
+    // The stalled client, reading at last, finds its response cut short.
+    let (got, _) = until_closed(stuck, Duration::from_secs(10));
+    assert!(got.len() < size, "{} bytes of {size}", got.len());
+    std::fs::remove_dir_all(&d).unwrap();
+}

@@ -3,8 +3,9 @@
 //!
 //! - A failed `accept` (out of file handles, say) is logged and waited out; it never stops the server.
 //! - A client has [`Limits::header_read_timeout`] to send each request head, idle keep-alive
-//!   connections included, and at most [`Limits::max_connections`] are served at once; the rest
-//!   wait in the kernel's backlog.
+//!   connections included; one that stops reading the response is cut off after
+//!   [`Limits::write_stall_timeout`]; at most [`Limits::max_connections`] are served at once, the
+//!   rest wait in the kernel's backlog.
 //! - Nothing outside the served folder is read: every path is resolved (symlinks included) and
 //!   refused with 404 unless it stays inside.
 //! - A request head over [`Limits::max_header_bytes`] (or over 100 fields) gets 431.
@@ -25,6 +26,7 @@ use std::net::{SocketAddr, TcpListener};
 use std::path::{Path, PathBuf};
 use std::pin::Pin;
 use std::sync::Arc;
+use std::task::{Context, Poll};
 use std::thread::JoinHandle;
 use std::time::Duration;
 use tokio::sync::{Semaphore, oneshot};
@@ -56,6 +58,9 @@ pub struct Limits {
     /// Time to send a whole request head, counted from when the server starts waiting for it
     /// (after accept, and after each response on a kept-alive connection).
     pub header_read_timeout: Duration,
+    /// Time a response write may stay blocked (the client stopped reading) before the
+    /// connection is dropped.
+    pub write_stall_timeout: Duration,
     /// Largest request head (request line and fields), in bytes; more gets 431.
     pub max_header_bytes: usize,
     /// Connections served at once.
@@ -66,6 +71,7 @@ impl Default for Limits {
     fn default() -> Self {
         Limits {
             header_read_timeout: Duration::from_secs(10),
+            write_stall_timeout: Duration::from_secs(30),
             max_header_bytes: 16 * 1024,
             max_connections: 512,
         }
@@ -167,6 +173,92 @@ async fn answer(
     Ok(resp)
 }
 
+/// A connection whose writes must make progress: a write that stays blocked for `limit` fails
+/// with `TimedOut`, which ends the connection. hyper has a deadline for reading a request head
+/// but none for a client that stops reading the response.
+struct WriteDeadline<T> {
+    io: T,
+    limit: Duration,
+    /// Armed when a write blocks, cleared when one goes through.
+    stalled: Option<Pin<Box<tokio::time::Sleep>>>,
+}
+
+impl<T> WriteDeadline<T> {
+    fn new(io: T, limit: Duration) -> Self {
+        WriteDeadline { io, limit, stalled: None }
+    }
+
+    /// After a blocked write: still waiting, or out of time.
+    fn blocked<R>(&mut self, cx: &mut Context<'_>) -> Poll<io::Result<R>> {
+        let limit = self.limit;
+        let timer = self.stalled.get_or_insert_with(|| Box::pin(tokio::time::sleep(limit)));
+        match timer.as_mut().poll(cx) {
+            Poll::Ready(()) => Poll::Ready(Err(io::Error::new(
+                io::ErrorKind::TimedOut,
+                "the client stopped reading the response",
+            ))),
+            Poll::Pending => Poll::Pending,
+        }
+    }
+
+    fn progressed<R>(&mut self, r: Poll<io::Result<R>>) -> Poll<io::Result<R>> {
+        self.stalled = None;
+        r
+    }
+}
+
+impl<T: hyper::rt::Read + Unpin> hyper::rt::Read for WriteDeadline<T> {
+    fn poll_read(
+        self: Pin<&mut Self>,
+        cx: &mut Context<'_>,
+        buf: hyper::rt::ReadBufCursor<'_>,
+    ) -> Poll<io::Result<()>> {
+        Pin::new(&mut self.get_mut().io).poll_read(cx, buf)
+    }
+}
+
+impl<T: hyper::rt::Write + Unpin> hyper::rt::Write for WriteDeadline<T> {
+    fn poll_write(self: Pin<&mut Self>, cx: &mut Context<'_>, buf: &[u8]) -> Poll<io::Result<usize>> {
+        let this = self.get_mut();
+        match Pin::new(&mut this.io).poll_write(cx, buf) {
+            Poll::Pending => this.blocked(cx),
+            done => this.progressed(done),
+        }
+    }
+
+    fn poll_write_vectored(
+        self: Pin<&mut Self>,
+        cx: &mut Context<'_>,
+        bufs: &[io::IoSlice<'_>],
+    ) -> Poll<io::Result<usize>> {
+        let this = self.get_mut();
+        match Pin::new(&mut this.io).poll_write_vectored(cx, bufs) {
+            Poll::Pending => this.blocked(cx),
+            done => this.progressed(done),
+        }
+    }
+
+    fn is_write_vectored(&self) -> bool {
+        self.io.is_write_vectored()
+    }
+
+    fn poll_flush(self: Pin<&mut Self>, cx: &mut Context<'_>) -> Poll<io::Result<()>> {
+        let this = self.get_mut();
+        match Pin::new(&mut this.io).poll_flush(cx) {
+            Poll::Pending => this.blocked(cx),
+            done => this.progressed(done),
+        }
+    }
+
+    fn poll_shutdown(self: Pin<&mut Self>, cx: &mut Context<'_>) -> Poll<io::Result<()>> {
+        let this = self.get_mut();
+        match Pin::new(&mut this.io).poll_shutdown(cx) {
+            Poll::Pending => this.blocked(cx),
+            done => this.progressed(done),
+        }
+    }
+}
+
 /// Does this `accept` failure mean a shortage that only time frees?
 fn is_shortage(e: &io::Error) -> bool {
     const EMFILE: i32 = 24;
@@ -224,7 +316,8 @@ async fn serve_loop(
                 .header_read_timeout(limits.header_read_timeout)
                 .max_header_size(limits.max_header_bytes);
             // A client that goes away or times out ends only its own connection.
-            let _ = http.serve_connection(TokioIo::new(stream), service).await;
+            let io = WriteDeadline::new(TokioIo::new(stream), limits.write_stall_timeout);
+            let _ = http.serve_connection(io, service).await;
         });
     }
 }
