@@ -315,8 +315,8 @@ async fn serve_loop(
             http.timer(TokioTimer::new())
                 .header_read_timeout(limits.header_read_timeout)
                 .max_header_size(limits.max_header_bytes);
-            // A client that goes away or times out ends only its own connection.
             let io = WriteDeadline::new(TokioIo::new(stream), limits.write_stall_timeout);
+            // A client that goes away or times out ends only its own connection.
             let _ = http.serve_connection(io, service).await;
         });
     }
@@ -421,6 +421,31 @@ mod tests {
         assert!(is_shortage(&io::Error::from_raw_os_error(24)));
         assert!(is_shortage(&io::Error::from_raw_os_error(23)));
         assert!(!is_shortage(&io::Error::from(io::ErrorKind::ConnectionAborted)));
+    }
+
+    #[test]
+    fn dropping_the_server_stops_it() {
+        use std::io::{Read, Write};
+        let d = std::env::temp_dir().join(format!("stillroom-serve-drop-{}", std::process::id()));
+        std::fs::create_dir_all(&d).unwrap();
+        std::fs::write(d.join("index.html"), "<p>hi</p>").unwrap();
+        let server = Server::start(&d).unwrap();
+        let addr = server.addr();
+        assert_eq!(server.url(), format!("http://{addr}/"));
+        assert!(addr.ip().is_loopback());
+        let fetch = || -> io::Result<Vec<u8>> {
+            let mut s = std::net::TcpStream::connect_timeout(&addr, Duration::from_millis(500))?;
+            s.set_read_timeout(Some(Duration::from_secs(5)))?;
+            s.write_all(b"GET / HTTP/1.1\r\nHost: x\r\nConnection: close\r\n\r\n")?;
+            let mut v = Vec::new();
+            s.read_to_end(&mut v)?;
+            Ok(v)
+        };
+        let answer = fetch().unwrap();
+        assert!(answer.starts_with(b"HTTP/1.1 200 OK") && answer.ends_with(b"<p>hi</p>"));
+        drop(server);
+        assert!(fetch().map_or(true, |v| v.is_empty()), "answered after being dropped");
+        std::fs::remove_dir_all(&d).unwrap();
     }
 
     #[test]
