@@ -90,6 +90,30 @@ pub fn fill(text: &str, token: &str, value: &str, file: &str) -> Result<String> 
     Ok(text.replace(token, value))
 }
 
+/// Next to each compressible file under `dir`, write `NAME.gz` and `NAME.br`, each only if it is
+/// smaller than the file. A host sends one of them, with `Content-Encoding`, to a browser that
+/// accepts it. Returns the copies written, relative to `dir`.
+pub fn write_compressed_copies(dir: &Path) -> Result<Vec<String>> {
+    let mut written = Vec::new();
+    for rel in list_files(dir)? {
+        let path = dir.join(&rel);
+        if !crate::compress::is_compressible(&path) {
+            continue;
+        }
+        let bytes = io_ctx(std::fs::read(&path), path.display())?;
+        for (suffix, packed) in
+            [("gz", crate::compress::gzip(&bytes)), ("br", crate::compress::brotli(&bytes))]
+        {
+            if packed.len() < bytes.len() {
+                let copy = format!("{rel}.{suffix}");
+                io_ctx(std::fs::write(dir.join(&copy), packed), &copy)?;
+                written.push(copy);
+            }
+        }
+    }
+    Ok(written)
+}
+
 /// Build the release page into `<root>/dist` and measure it.
 pub fn build(root: &Path, tools: &BuildTools) -> Result<Built> {
     run(proc::cargo_command().current_dir(root).args([
@@ -153,6 +177,10 @@ pub fn build(root: &Path, tools: &BuildTools) -> Result<Built> {
     let sw = fill(&sw, PRECACHE_TOKEN, &precache_entries(&files), "public/sw.js")?;
     io_ctx(std::fs::write(&sw_path, sw), "dist/sw.js")?;
 
+    // Last, so the copies are neither precached (the browser decodes them transparently) nor part
+    // of the build id (they follow from the files it covers).
+    write_compressed_copies(&dist)?;
+
     let sizes = io_ctx(FirstLoad::measure(&dist), "measuring dist/")?;
     Ok(Built { dist, build_id: id, sizes })
 }
@@ -182,6 +210,32 @@ mod tests {
         assert_eq!(fill("const C = 'x-__T__';", "__T__", "abc", "f").unwrap(), "const C = 'x-abc';");
         let e = fill("nothing", "__T__", "abc", "public/sw.js").unwrap_err();
         assert!(e.0.contains("public/sw.js") && e.0.contains("__T__"), "{e}");
+    }
+
+    #[test]
+    fn compressed_copies_decode_to_their_file() {
+        use std::io::Read;
+        let d = std::env::temp_dir().join(format!("stillroom-packed-{}", std::process::id()));
+        let _ = std::fs::remove_dir_all(&d);
+        std::fs::create_dir_all(d.join("sub")).unwrap();
+        let text = "fn steam() { return 42; }\n".repeat(200);
+        std::fs::write(d.join("sub/a.js"), &text).unwrap();
+        std::fs::write(d.join("tiny.css"), "p{}").unwrap();
+        std::fs::write(d.join("pic.png"), vec![7u8; 5000]).unwrap();
+        let written = write_compressed_copies(&d).unwrap();
+        // The png is not a compressible type; three bytes of css do not shrink.
+        assert_eq!(written, ["sub/a.js.gz", "sub/a.js.br"]);
+        let mut gz = String::new();
+        flate2::read::GzDecoder::new(&std::fs::read(d.join("sub/a.js.gz")).unwrap()[..])
+            .read_to_string(&mut gz)
+            .unwrap();
+        assert_eq!(gz, text);
+        let mut br = String::new();
+        brotli::Decompressor::new(&std::fs::read(d.join("sub/a.js.br")).unwrap()[..], 4096)
+            .read_to_string(&mut br)
+            .unwrap();
+        assert_eq!(br, text);
+        std::fs::remove_dir_all(&d).unwrap();
     }
 
     #[test]

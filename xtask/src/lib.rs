@@ -7,6 +7,7 @@
 
 pub mod build;
 pub mod buildid;
+pub mod compress;
 pub mod proc;
 pub mod serve;
 pub mod setup;

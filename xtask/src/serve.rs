@@ -1,194 +1,356 @@
-//! A small static file server for `dist/`: GET and HEAD only, loopback use, correct MIME types
-//! (browsers refuse to stream-compile wasm served as anything but `application/wasm`).
+//! The static file server for `dist/`: hyper's HTTP/1.1 on tokio, with tower-http's `ServeDir` for
+//! the files. Loopback only. What it promises (each has a test in `tests/tests/serve_*.rs`):
+//!
+//! - A failed `accept` (out of file handles, say) is logged and waited out; it never stops the server.
+//! - A client has [`Limits::header_read_timeout`] to send each request head, idle keep-alive
+//!   connections included; one that stops reading the response is cut off after
+//!   [`Limits::write_stall_timeout`]; at most [`Limits::max_connections`] are served at once, the
+//!   rest wait in the kernel's backlog.
+//! - Nothing outside the served folder is read: every path is resolved (symlinks included) and
+//!   refused with 404 unless it stays inside.
+//! - A request head over [`Limits::max_header_bytes`] (or over 100 fields) gets 431.
+//! - Lines ending in a bare LF are accepted as well as CRLF.
+//! - Every response the service writes carries [`CONTENT_SECURITY_POLICY`], `nosniff` and
+//!   [`CACHE_CONTROL`]; files carry their MIME type and, if the build wrote `NAME.br` / `NAME.gz`,
+//!   the best one the browser accepts is sent with `Content-Encoding` and `Vary: Accept-Encoding`.
+//!   (The 400/431 hyper writes itself for an unreadable head bypasses the service and has no body.)
 
-use std::io::{self, Read, Write};
-use std::net::{Shutdown, SocketAddr, TcpListener, TcpStream};
-use std::path::{Component, Path, PathBuf};
+use http::header::{self, HeaderValue};
+use http::{Request, Response};
+use hyper::body::Incoming;
+use hyper_util::rt::{TokioIo, TokioTimer};
+use std::convert::Infallible;
+use std::future::Future;
+use std::io;
+use std::net::{SocketAddr, TcpListener};
+use std::path::{Path, PathBuf};
+use std::pin::Pin;
 use std::sync::Arc;
-use std::sync::atomic::{AtomicBool, Ordering};
+use std::task::{Context, Poll};
 use std::thread::JoinHandle;
 use std::time::Duration;
+use tokio::sync::{Semaphore, oneshot};
+use tower_http::services::fs::{
+    Backend, DefaultServeDirFallback, ServeDir, ServeFileSystemResponseBody, TokioBackend, TokioFile,
+};
+use tower_service::Service;
 
-/// The largest request head accepted.
-const MAX_HEAD: usize = 16 * 1024;
+/// The page's Content-Security-Policy: its own scripts, styles, images (and `data:` images), wasm
+/// compilation, its manifest and service worker; nothing else, no framing, no forms, no `<base>`.
+/// The page carries the same policy in a `<meta>` tag; a host should send this header.
+pub const CONTENT_SECURITY_POLICY: &str = "default-src 'none'; script-src 'self' 'wasm-unsafe-eval'; \
+     style-src 'self'; img-src 'self' data:; connect-src 'self'; manifest-src 'self'; \
+     worker-src 'self'; base-uri 'none'; form-action 'none'; frame-ancestors 'none'";
 
-/// The MIME type for a file, from its extension.
-pub fn mime_for(path: &Path) -> &'static str {
+/// The build keeps file names stable (the service worker lists them), so no name is
+/// content-hashed and nothing may be cached without asking: every response says `no-cache`, and
+/// the browser revalidates with `If-None-Match` (ETag) or `If-Modified-Since` (Last-Modified),
+/// getting a bodiless 304 when nothing changed.
+pub const CACHE_CONTROL: &str = "no-cache";
+
+/// How long a failed `accept` waits before the next try when the cause is a shortage (file
+/// handles, memory) that only time frees; any other failure is retried at once.
+pub const ACCEPT_BACKOFF: Duration = Duration::from_millis(250);
+
+/// The server's bounds on what a client may hold.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub struct Limits {
+    /// Time to send a whole request head, counted from when the server starts waiting for it
+    /// (after accept, and after each response on a kept-alive connection).
+    pub header_read_timeout: Duration,
+    /// Time a response write may stay blocked (the client stopped reading) before the
+    /// connection is dropped.
+    pub write_stall_timeout: Duration,
+    /// Largest request head (request line and fields), in bytes; more gets 431.
+    pub max_header_bytes: usize,
+    /// Connections served at once.
+    pub max_connections: usize,
+}
+
+impl Default for Limits {
+    fn default() -> Self {
+        Limits {
+            header_read_timeout: Duration::from_secs(10),
+            write_stall_timeout: Duration::from_secs(30),
+            max_header_bytes: 16 * 1024,
+            max_connections: 512,
+        }
+    }
+}
+
+/// The MIME type for a file, from its extension; `None` for one not in this table.
+pub fn mime_for(path: &Path) -> Option<&'static str> {
     let ext = path.extension().and_then(|e| e.to_str()).map(|e| e.to_ascii_lowercase());
-    match ext.as_deref() {
-        Some("html" | "htm") => "text/html; charset=utf-8",
-        Some("js" | "mjs") => "text/javascript; charset=utf-8",
-        Some("css") => "text/css; charset=utf-8",
-        Some("wasm") => "application/wasm",
-        Some("webmanifest") => "application/manifest+json",
-        Some("json") => "application/json",
-        Some("svg") => "image/svg+xml",
-        Some("png") => "image/png",
-        Some("ico") => "image/x-icon",
-        Some("txt") => "text/plain; charset=utf-8",
-        Some("csv") => "text/csv; charset=utf-8",
-        Some("woff2") => "font/woff2",
-        _ => "application/octet-stream",
-    }
+    Some(match ext.as_deref()? {
+        "html" | "htm" => "text/html; charset=utf-8",
+        "js" | "mjs" => "text/javascript; charset=utf-8",
+        "css" => "text/css; charset=utf-8",
+        "wasm" => "application/wasm",
+        "webmanifest" => "application/manifest+json",
+        "json" => "application/json",
+        "svg" => "image/svg+xml",
+        "png" => "image/png",
+        "ico" => "image/x-icon",
+        "txt" => "text/plain; charset=utf-8",
+        "csv" => "text/csv; charset=utf-8",
+        "woff2" => "font/woff2",
+        _ => return None,
+    })
 }
 
-/// Decode `%XX` escapes. `None` for a malformed escape or a result that is not UTF-8.
-pub fn percent_decode(s: &str) -> Option<String> {
-    let b = s.as_bytes();
-    let mut out = Vec::with_capacity(b.len());
-    let mut i = 0;
-    while i < b.len() {
-        if b[i] == b'%' {
-            let hex = b.get(i + 1..i + 3)?;
-            let hex = std::str::from_utf8(hex).ok()?;
-            out.push(u8::from_str_radix(hex, 16).ok()?);
-            i += 3;
-        } else {
-            out.push(b[i]);
-            i += 1;
-        }
-    }
-    String::from_utf8(out).ok()
+/// The MIME type for a request path: a folder (`/`, `/sub/`) is served as its `index.html`.
+fn mime_for_target(target: &str) -> Option<&'static str> {
+    if target.ends_with('/') { mime_for(Path::new("index.html")) } else { mime_for(Path::new(target)) }
 }
 
-/// Map a request target (`/a/b.js?x=1`) to a path under `root`. `None` for anything that could leave
-/// `root` (`..`, backslashes, NUL) or that is not an origin-form target.
-pub fn resolve(root: &Path, target: &str) -> Option<PathBuf> {
-    let path = target.split(['?', '#']).next().unwrap_or("");
-    if !path.starts_with('/') {
-        return None;
-    }
-    let decoded = percent_decode(path)?;
-    if decoded.contains('\\') || decoded.contains('\0') {
-        return None;
-    }
-    let mut out = root.to_path_buf();
-    for seg in decoded.split('/') {
-        match seg {
-            "" | "." => {}
-            ".." => return None,
-            s => {
-                // A segment must be one plain name (no prefix or root hidden inside it).
-                let mut comps = Path::new(s).components();
-                match (comps.next(), comps.next()) {
-                    (Some(Component::Normal(_)), None) => out.push(s),
-                    _ => return None,
-                }
+/// A `ServeDir` file system that answers "not found" for any path whose real location (every
+/// symlink resolved) is outside `root`. `ServeDir` itself refuses `..` but follows symlinks.
+#[derive(Clone, Debug)]
+struct Confined {
+    /// Canonical.
+    root: Arc<PathBuf>,
+}
+
+type Boxed<T> = Pin<Box<dyn Future<Output = io::Result<T>> + Send>>;
+
+impl Confined {
+    fn inside(&self, path: PathBuf) -> impl Future<Output = io::Result<PathBuf>> + Send + 'static {
+        let root = Arc::clone(&self.root);
+        async move {
+            let real = tokio::fs::canonicalize(&path).await?;
+            if real.starts_with(root.as_path()) {
+                Ok(real)
+            } else {
+                Err(io::Error::new(io::ErrorKind::NotFound, "resolves outside the served folder"))
             }
         }
     }
-    if out.is_dir() {
-        out.push("index.html");
-    }
-    Some(out)
 }
 
-struct Response {
-    status: &'static str,
-    content_type: &'static str,
-    body: Vec<u8>,
-}
+impl Backend for Confined {
+    type File = TokioFile;
+    type Metadata = std::fs::Metadata;
+    type OpenFuture = Boxed<TokioFile>;
+    type MetadataFuture = Boxed<std::fs::Metadata>;
 
-impl Response {
-    fn text(status: &'static str, msg: &str) -> Self {
-        Response { status, content_type: "text/plain; charset=utf-8", body: format!("{msg}\n").into_bytes() }
+    fn open(&self, path: PathBuf) -> Self::OpenFuture {
+        let real = self.inside(path);
+        Box::pin(async move { TokioBackend.open(real.await?).await })
     }
-}
 
-fn respond(root: &Path, method: &str, target: &str) -> Response {
-    if method != "GET" && method != "HEAD" {
-        return Response::text("405 Method Not Allowed", "only GET and HEAD are served");
-    }
-    let Some(path) = resolve(root, target) else {
-        return Response::text("400 Bad Request", "bad path");
-    };
-    match std::fs::read(&path) {
-        Ok(body) => Response { status: "200 OK", content_type: mime_for(&path), body },
-        Err(e) if e.kind() == io::ErrorKind::NotFound => Response::text("404 Not Found", "not found"),
-        Err(_) => Response::text("403 Forbidden", "cannot read"),
+    fn metadata(&self, path: PathBuf) -> Self::MetadataFuture {
+        let real = self.inside(path);
+        Box::pin(async move { TokioBackend.metadata(real.await?).await })
     }
 }
 
-/// Read the request head (up to the blank line).
-fn read_head(stream: &mut TcpStream) -> io::Result<Option<String>> {
-    let mut buf = Vec::with_capacity(1024);
-    let mut chunk = [0u8; 1024];
+type Files = ServeDir<DefaultServeDirFallback, Confined>;
+
+fn files(dir: &Path) -> io::Result<Files> {
+    let root = std::fs::canonicalize(dir)
+        .map_err(|e| io::Error::new(e.kind(), format!("cannot serve {}: {e}", dir.display())))?;
+    Ok(ServeDir::with_backend(&root, Confined { root: Arc::new(root.clone()) })
+        .precompressed_br()
+        .precompressed_gzip())
+}
+
+/// One request: the file service, then the headers every response carries.
+async fn answer(
+    mut files: Files,
+    req: Request<Incoming>,
+) -> Result<Response<ServeFileSystemResponseBody>, Infallible> {
+    let mime = mime_for_target(req.uri().path());
+    let mut resp = files.call(req).await?;
+    let h = resp.headers_mut();
+    if let Some(mime) = mime
+        && h.contains_key(header::CONTENT_TYPE)
+    {
+        h.insert(header::CONTENT_TYPE, HeaderValue::from_static(mime));
+    }
+    h.insert(header::CONTENT_SECURITY_POLICY, HeaderValue::from_static(CONTENT_SECURITY_POLICY));
+    h.insert(header::X_CONTENT_TYPE_OPTIONS, HeaderValue::from_static("nosniff"));
+    h.insert(header::CACHE_CONTROL, HeaderValue::from_static(CACHE_CONTROL));
+    Ok(resp)
+}
+
+/// A connection whose writes must make progress: a write that stays blocked for `limit` fails
+/// with `TimedOut`, which ends the connection. hyper has a deadline for reading a request head
+/// but none for a client that stops reading the response.
+struct WriteDeadline<T> {
+    io: T,
+    limit: Duration,
+    /// Armed when a write blocks, cleared when one goes through.
+    stalled: Option<Pin<Box<tokio::time::Sleep>>>,
+}
+
+impl<T> WriteDeadline<T> {
+    fn new(io: T, limit: Duration) -> Self {
+        WriteDeadline { io, limit, stalled: None }
+    }
+
+    /// After a blocked write: still waiting, or out of time.
+    fn blocked<R>(&mut self, cx: &mut Context<'_>) -> Poll<io::Result<R>> {
+        let limit = self.limit;
+        let timer = self.stalled.get_or_insert_with(|| Box::pin(tokio::time::sleep(limit)));
+        match timer.as_mut().poll(cx) {
+            Poll::Ready(()) => Poll::Ready(Err(io::Error::new(
+                io::ErrorKind::TimedOut,
+                "the client stopped reading the response",
+            ))),
+            Poll::Pending => Poll::Pending,
+        }
+    }
+
+    fn progressed<R>(&mut self, r: Poll<io::Result<R>>) -> Poll<io::Result<R>> {
+        self.stalled = None;
+        r
+    }
+}
+
+impl<T: hyper::rt::Read + Unpin> hyper::rt::Read for WriteDeadline<T> {
+    fn poll_read(
+        self: Pin<&mut Self>,
+        cx: &mut Context<'_>,
+        buf: hyper::rt::ReadBufCursor<'_>,
+    ) -> Poll<io::Result<()>> {
+        Pin::new(&mut self.get_mut().io).poll_read(cx, buf)
+    }
+}
+
+impl<T: hyper::rt::Write + Unpin> hyper::rt::Write for WriteDeadline<T> {
+    fn poll_write(self: Pin<&mut Self>, cx: &mut Context<'_>, buf: &[u8]) -> Poll<io::Result<usize>> {
+        let this = self.get_mut();
+        match Pin::new(&mut this.io).poll_write(cx, buf) {
+            Poll::Pending => this.blocked(cx),
+            done => this.progressed(done),
+        }
+    }
+
+    fn poll_write_vectored(
+        self: Pin<&mut Self>,
+        cx: &mut Context<'_>,
+        bufs: &[io::IoSlice<'_>],
+    ) -> Poll<io::Result<usize>> {
+        let this = self.get_mut();
+        match Pin::new(&mut this.io).poll_write_vectored(cx, bufs) {
+            Poll::Pending => this.blocked(cx),
+            done => this.progressed(done),
+        }
+    }
+
+    fn is_write_vectored(&self) -> bool {
+        self.io.is_write_vectored()
+    }
+
+    fn poll_flush(self: Pin<&mut Self>, cx: &mut Context<'_>) -> Poll<io::Result<()>> {
+        let this = self.get_mut();
+        match Pin::new(&mut this.io).poll_flush(cx) {
+            Poll::Pending => this.blocked(cx),
+            done => this.progressed(done),
+        }
+    }
+
+    fn poll_shutdown(self: Pin<&mut Self>, cx: &mut Context<'_>) -> Poll<io::Result<()>> {
+        let this = self.get_mut();
+        match Pin::new(&mut this.io).poll_shutdown(cx) {
+            Poll::Pending => this.blocked(cx),
+            done => this.progressed(done),
+        }
+    }
+}
+
+/// Does this `accept` failure mean a shortage that only time frees?
+fn is_shortage(e: &io::Error) -> bool {
+    const EMFILE: i32 = 24;
+    const ENFILE: i32 = 23;
+    const ENOMEM: i32 = 12;
+    const ENOBUFS: i32 = 105;
+    matches!(e.raw_os_error(), Some(EMFILE | ENFILE | ENOMEM | ENOBUFS))
+        || e.kind() == io::ErrorKind::OutOfMemory
+}
+
+/// Accept and serve until `stop` fires (or its sender is dropped).
+async fn serve_loop(
+    listener: tokio::net::TcpListener,
+    files: Files,
+    limits: Limits,
+    mut stop: oneshot::Receiver<()>,
+) {
+    let slots = Arc::new(Semaphore::new(limits.max_connections));
+    // The last failure reported, so a run of the same one is logged once.
+    let mut reported: Option<io::ErrorKind> = None;
     loop {
-        if let Some(end) = find_blank_line(&buf) {
-            buf.truncate(end);
-            return Ok(Some(String::from_utf8_lossy(&buf).into_owned()));
-        }
-        if buf.len() > MAX_HEAD {
-            return Ok(None);
-        }
-        let n = stream.read(&mut chunk)?;
-        if n == 0 {
-            return Ok(None);
-        }
-        buf.extend_from_slice(&chunk[..n]);
-    }
-}
-
-fn find_blank_line(buf: &[u8]) -> Option<usize> {
-    buf.windows(4).position(|w| w == b"\r\n\r\n")
-}
-
-fn handle(root: &Path, mut stream: TcpStream) -> io::Result<()> {
-    stream.set_read_timeout(Some(Duration::from_secs(10)))?;
-    stream.set_write_timeout(Some(Duration::from_secs(10)))?;
-    let Some(head) = read_head(&mut stream)? else {
-        return Ok(());
-    };
-    let mut parts = head.lines().next().unwrap_or("").split_whitespace();
-    let (method, target) = (parts.next().unwrap_or(""), parts.next().unwrap_or(""));
-    let resp = respond(root, method, target);
-    let header = format!(
-        "HTTP/1.1 {}\r\nContent-Type: {}\r\nContent-Length: {}\r\nCache-Control: no-cache\r\n\
-         X-Content-Type-Options: nosniff\r\nConnection: close\r\n\r\n",
-        resp.status,
-        resp.content_type,
-        resp.body.len()
-    );
-    stream.write_all(header.as_bytes())?;
-    if method != "HEAD" {
-        stream.write_all(&resp.body)?;
-    }
-    stream.flush()?;
-    let _ = stream.shutdown(Shutdown::Write);
-    Ok(())
-}
-
-fn serve_loop(root: &Path, listener: &TcpListener, stop: &AtomicBool) -> io::Result<()> {
-    for conn in listener.incoming() {
-        if stop.load(Ordering::SeqCst) {
-            break;
-        }
-        match conn {
-            Ok(stream) => {
-                let root = root.to_path_buf();
-                std::thread::spawn(move || {
-                    let _ = handle(&root, stream);
-                });
+        let slot = tokio::select! {
+            _ = &mut stop => return,
+            s = Arc::clone(&slots).acquire_owned() => s.expect("the semaphore is never closed"),
+        };
+        let accepted = tokio::select! {
+            _ = &mut stop => return,
+            r = listener.accept() => r,
+        };
+        let stream = match accepted {
+            Ok((stream, _)) => {
+                reported = None;
+                stream
             }
-            // A connection that failed before it was accepted concerns only that client.
-            Err(e) if e.kind() == io::ErrorKind::ConnectionAborted => {}
-            Err(e) if e.kind() == io::ErrorKind::Interrupted => {}
-            Err(e) => return Err(e),
-        }
+            Err(e) => {
+                if reported != Some(e.kind()) {
+                    eprintln!("static server: accept failed ({e}); still serving, retrying");
+                    reported = Some(e.kind());
+                }
+                if is_shortage(&e) {
+                    tokio::select! {
+                        _ = &mut stop => return,
+                        _ = tokio::time::sleep(ACCEPT_BACKOFF) => {}
+                    }
+                }
+                continue;
+            }
+        };
+        let files = files.clone();
+        tokio::spawn(async move {
+            let _slot = slot;
+            let service = hyper::service::service_fn(move |req| answer(files.clone(), req));
+            let mut http = hyper::server::conn::http1::Builder::new();
+            http.timer(TokioTimer::new())
+                .header_read_timeout(limits.header_read_timeout)
+                .max_header_size(limits.max_header_bytes);
+            let io = WriteDeadline::new(TokioIo::new(stream), limits.write_stall_timeout);
+            // A client that goes away or times out ends only its own connection.
+            let _ = http.serve_connection(io, service).await;
+        });
     }
-    Ok(())
+}
+
+/// A runtime, the listener registered with it, and the file service: everything that can fail
+/// before serving starts.
+fn prepare(
+    dir: &Path,
+    listener: TcpListener,
+) -> io::Result<(tokio::runtime::Runtime, tokio::net::TcpListener, Files)> {
+    let files = files(dir)?;
+    let rt = tokio::runtime::Builder::new_current_thread().enable_all().build()?;
+    listener.set_nonblocking(true)?;
+    let listener = {
+        let _in_rt = rt.enter();
+        tokio::net::TcpListener::from_std(listener)?
+    };
+    Ok((rt, listener, files))
 }
 
 /// Serve the files under `dir` on `listener` until the process ends.
 pub fn serve_dir(dir: &Path, listener: TcpListener) -> io::Result<()> {
-    serve_loop(dir, &listener, &AtomicBool::new(false))
+    let (rt, listener, files) = prepare(dir, listener)?;
+    let (_keep, stop) = oneshot::channel();
+    rt.block_on(serve_loop(listener, files, Limits::default(), stop));
+    Ok(())
 }
 
 /// A server running on a thread of its own; stops when dropped.
 pub struct Server {
     addr: SocketAddr,
-    stop: Arc<AtomicBool>,
-    thread: Option<JoinHandle<io::Result<()>>>,
+    stop: Option<oneshot::Sender<()>>,
+    thread: Option<JoinHandle<()>>,
 }
 
 impl Server {
@@ -199,14 +361,20 @@ impl Server {
 
     /// Serve `dir` on the given listener.
     pub fn start_on(dir: impl Into<PathBuf>, listener: TcpListener) -> io::Result<Server> {
-        let dir = dir.into();
+        Server::start_with(dir, listener, Limits::default())
+    }
+
+    /// Serve `dir` on the given listener within the given limits.
+    pub fn start_with(dir: impl Into<PathBuf>, listener: TcpListener, limits: Limits) -> io::Result<Server> {
         let addr = listener.local_addr()?;
-        let stop = Arc::new(AtomicBool::new(false));
-        let flag = Arc::clone(&stop);
-        let thread = std::thread::Builder::new()
-            .name("stillroom-static".into())
-            .spawn(move || serve_loop(&dir, &listener, &flag))?;
-        Ok(Server { addr, stop, thread: Some(thread) })
+        let (rt, listener, files) = prepare(&dir.into(), listener)?;
+        let (tx, stop) = oneshot::channel();
+        let thread = std::thread::Builder::new().name("stillroom-static".into()).spawn(move || {
+            rt.block_on(serve_loop(listener, files, limits, stop));
+            // Ends open connections; file reads in flight take at most this long.
+            rt.shutdown_timeout(Duration::from_secs(1));
+        })?;
+        Ok(Server { addr, stop: Some(tx), thread: Some(thread) })
     }
 
     pub fn addr(&self) -> SocketAddr {
@@ -221,9 +389,9 @@ impl Server {
 
 impl Drop for Server {
     fn drop(&mut self) {
-        self.stop.store(true, Ordering::SeqCst);
-        // Wake the accept loop so it sees the flag.
-        let _ = TcpStream::connect_timeout(&self.addr, Duration::from_secs(1));
+        if let Some(stop) = self.stop.take() {
+            let _ = stop.send(());
+        }
         if let Some(t) = self.thread.take() {
             let _ = t.join();
         }
@@ -233,122 +401,57 @@ impl Drop for Server {
 #[cfg(test)]
 mod tests {
     use super::*;
-    use std::sync::atomic::AtomicUsize;
-
-    fn temp_dir() -> PathBuf {
-        static N: AtomicUsize = AtomicUsize::new(0);
-        let d = std::env::temp_dir().join(format!(
-            "stillroom-serve-test-{}-{}",
-            std::process::id(),
-            N.fetch_add(1, Ordering::SeqCst)
-        ));
-        let _ = std::fs::remove_dir_all(&d);
-        std::fs::create_dir_all(d.join("sub")).unwrap();
-        d
-    }
-
-    /// One raw request; returns (status line, headers, body).
-    fn get(addr: SocketAddr, req: &str) -> (String, String, Vec<u8>) {
-        let mut s = TcpStream::connect(addr).unwrap();
-        s.write_all(req.as_bytes()).unwrap();
-        let mut all = Vec::new();
-        s.read_to_end(&mut all).unwrap();
-        let end = find_blank_line(&all).expect("response head");
-        let head = String::from_utf8(all[..end].to_vec()).unwrap();
-        let body = all[end + 4..].to_vec();
-        let (status, headers) = head.split_once("\r\n").unwrap_or((&head, ""));
-        (status.to_string(), headers.to_string(), body)
-    }
-
-    fn header<'a>(headers: &'a str, name: &str) -> Option<&'a str> {
-        headers.lines().find_map(|l| {
-            let (k, v) = l.split_once(':')?;
-            k.eq_ignore_ascii_case(name).then(|| v.trim())
-        })
-    }
 
     #[test]
     fn mime_types() {
-        assert_eq!(mime_for(Path::new("a_bg.wasm")), "application/wasm");
-        assert_eq!(mime_for(Path::new("x.js")), "text/javascript; charset=utf-8");
-        assert_eq!(mime_for(Path::new("s.CSS")), "text/css; charset=utf-8");
-        assert_eq!(mime_for(Path::new("manifest.webmanifest")), "application/manifest+json");
-        assert_eq!(mime_for(Path::new("icon.svg")), "image/svg+xml");
-        assert_eq!(mime_for(Path::new("index.html")), "text/html; charset=utf-8");
-        assert_eq!(mime_for(Path::new("noext")), "application/octet-stream");
+        assert_eq!(mime_for(Path::new("a_bg.wasm")), Some("application/wasm"));
+        assert_eq!(mime_for(Path::new("x.js")), Some("text/javascript; charset=utf-8"));
+        assert_eq!(mime_for(Path::new("s.CSS")), Some("text/css; charset=utf-8"));
+        assert_eq!(mime_for(Path::new("manifest.webmanifest")), Some("application/manifest+json"));
+        assert_eq!(mime_for(Path::new("icon.svg")), Some("image/svg+xml"));
+        assert_eq!(mime_for(Path::new("index.html")), Some("text/html; charset=utf-8"));
+        assert_eq!(mime_for(Path::new("noext")), None);
+        assert_eq!(mime_for_target("/"), Some("text/html; charset=utf-8"));
+        assert_eq!(mime_for_target("/sub/"), Some("text/html; charset=utf-8"));
+        assert_eq!(mime_for_target("/m_bg.wasm"), Some("application/wasm"));
     }
 
     #[test]
-    fn percent_decoding() {
-        assert_eq!(percent_decode("/a%20b").as_deref(), Some("/a b"));
-        assert_eq!(percent_decode("/%2e%2E").as_deref(), Some("/.."));
-        assert_eq!(percent_decode("/bad%2"), None);
-        assert_eq!(percent_decode("/bad%zz"), None);
-        assert_eq!(percent_decode("/%ff"), None);
+    fn shortages_are_told_from_other_failures() {
+        assert!(is_shortage(&io::Error::from_raw_os_error(24)));
+        assert!(is_shortage(&io::Error::from_raw_os_error(23)));
+        assert!(!is_shortage(&io::Error::from(io::ErrorKind::ConnectionAborted)));
     }
 
     #[test]
-    fn resolve_refuses_escapes() {
-        let d = temp_dir();
-        assert_eq!(resolve(&d, "/"), Some(d.join("index.html")));
-        assert_eq!(resolve(&d, "/sub/"), Some(d.join("sub").join("index.html")));
-        assert_eq!(resolve(&d, "/a.js?v=2#x"), Some(d.join("a.js")));
-        assert_eq!(resolve(&d, "/./a.js"), Some(d.join("a.js")));
-        assert_eq!(resolve(&d, "/../etc/passwd"), None);
-        assert_eq!(resolve(&d, "/sub/%2e%2e/%2e%2e/x"), None);
-        assert_eq!(resolve(&d, "/a%5cb"), None);
-        assert_eq!(resolve(&d, "/a%00b"), None);
-        assert_eq!(resolve(&d, "http://elsewhere/a"), None);
-        assert_eq!(resolve(&d, ""), None);
-        std::fs::remove_dir_all(&d).unwrap();
-    }
-
-    #[test]
-    fn serves_files_with_types_and_errors() {
-        let d = temp_dir();
+    fn dropping_the_server_stops_it() {
+        use std::io::{Read, Write};
+        let d = std::env::temp_dir().join(format!("stillroom-serve-drop-{}", std::process::id()));
+        std::fs::create_dir_all(&d).unwrap();
         std::fs::write(d.join("index.html"), "<p>hi</p>").unwrap();
-        let wasm = [0u8, b'a', b's', b'm', 1, 0, 0, 0];
-        std::fs::write(d.join("m_bg.wasm"), wasm).unwrap();
-        std::fs::write(d.join("sub").join("s.css"), "p{}").unwrap();
         let server = Server::start(&d).unwrap();
-        let a = server.addr();
-        assert!(server.url().starts_with("http://127.0.0.1:"));
-
-        let (st, h, body) = get(a, "GET / HTTP/1.1\r\nHost: x\r\n\r\n");
-        assert_eq!(st, "HTTP/1.1 200 OK");
-        assert_eq!(header(&h, "content-type"), Some("text/html; charset=utf-8"));
-        assert_eq!(body, b"<p>hi</p>");
-
-        let (st, h, body) = get(a, "GET /m_bg.wasm HTTP/1.1\r\n\r\n");
-        assert_eq!(st, "HTTP/1.1 200 OK");
-        assert_eq!(header(&h, "content-type"), Some("application/wasm"));
-        assert_eq!(header(&h, "content-length"), Some("8"));
-        assert_eq!(body, wasm);
-
-        let (st, h, body) = get(a, "HEAD /sub/s.css HTTP/1.1\r\n\r\n");
-        assert_eq!(st, "HTTP/1.1 200 OK");
-        assert_eq!(header(&h, "content-type"), Some("text/css; charset=utf-8"));
-        assert_eq!(header(&h, "content-length"), Some("3"));
-        assert!(body.is_empty());
-
-        let (st, _, _) = get(a, "GET /missing.js HTTP/1.1\r\n\r\n");
-        assert_eq!(st, "HTTP/1.1 404 Not Found");
-        let (st, _, _) = get(a, "GET /../Cargo.toml HTTP/1.1\r\n\r\n");
-        assert_eq!(st, "HTTP/1.1 400 Bad Request");
-        let (st, _, _) = get(a, "POST / HTTP/1.1\r\n\r\n");
-        assert_eq!(st, "HTTP/1.1 405 Method Not Allowed");
-
+        let addr = server.addr();
+        assert_eq!(server.url(), format!("http://{addr}/"));
+        assert!(addr.ip().is_loopback());
+        let fetch = || -> io::Result<Vec<u8>> {
+            let mut s = std::net::TcpStream::connect_timeout(&addr, Duration::from_millis(500))?;
+            s.set_read_timeout(Some(Duration::from_secs(5)))?;
+            s.write_all(b"GET / HTTP/1.1\r\nHost: x\r\nConnection: close\r\n\r\n")?;
+            let mut v = Vec::new();
+            s.read_to_end(&mut v)?;
+            Ok(v)
+        };
+        let answer = fetch().unwrap();
+        assert!(answer.starts_with(b"HTTP/1.1 200 OK") && answer.ends_with(b"<p>hi</p>"));
         drop(server);
-        assert!(
-            TcpStream::connect_timeout(&a, Duration::from_millis(300))
-                .and_then(|mut s| {
-                    s.write_all(b"GET / HTTP/1.1\r\n\r\n")?;
-                    let mut v = Vec::new();
-                    s.read_to_end(&mut v)?;
-                    if v.is_empty() { Err(io::Error::other("closed")) } else { Ok(()) }
-                })
-                .is_err()
-        );
+        assert!(fetch().map_or(true, |v| v.is_empty()), "answered after being dropped");
         std::fs::remove_dir_all(&d).unwrap();
+    }
+
+    #[test]
+    fn a_missing_folder_is_refused_up_front() {
+        let l = TcpListener::bind(("127.0.0.1", 0)).unwrap();
+        let err = Server::start_on("/nonexistent/stillroom-dist", l).err().expect("no such folder");
+        assert!(err.to_string().contains("/nonexistent/stillroom-dist"), "{err}");
     }
 }
