@@ -26,11 +26,11 @@ mod knobs;
 mod layering;
 mod oil_yield;
 mod ranges;
+pub mod sanity;
 mod season;
 mod separator;
 mod site;
 mod timeline;
-pub mod sanity;
 mod validate;
 mod warnings;
 
