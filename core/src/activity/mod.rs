@@ -26,7 +26,7 @@
 
 pub mod groups;
 
-use groups::{A_MN_K, COMPOUND_GROUPS, CompoundGroups, SUBGROUPS};
+use groups::{A_MN_K, COMPOUND_GROUPS, CompoundGroups, SUBGROUPS, Sub};
 
 /// Lower end of the temperature range UNIFAC's parameters were fitted over, K.
 pub const VALID_T_MIN_K: f64 = 275.0;
@@ -51,6 +51,8 @@ pub enum ActivityError {
     InvalidFraction { index: usize, value: f64 },
     /// The amounts add up to zero.
     ZeroTotal,
+    /// A compound's groups have no surface area (no groups, or only quaternary carbons).
+    NoSurface { index: usize },
     /// The temperature is not a finite number within 200-600 K.
     TemperatureOutOfRange { t_k: f64 },
 }
@@ -70,6 +72,9 @@ impl std::fmt::Display for ActivityError {
             }
             ActivityError::InvalidFraction { index, value } => {
                 write!(f, "mole fraction {index} is {value}: it must be a finite number, zero or more")
+            }
+            ActivityError::NoSurface { index } => {
+                write!(f, "compound {index} has no UNIFAC groups with a surface area")
             }
             ActivityError::ZeroTotal => write!(f, "the mole fractions add up to zero"),
             ActivityError::TemperatureOutOfRange { t_k } => {
@@ -108,8 +113,14 @@ pub struct OilGroups {
     nu: Vec<f64>,
     /// Q_k of each present subgroup.
     q_k: Vec<f64>,
-    /// a_mn between the main groups of present subgroups k, m: `a[k * subgroups + m]`, K.
+    /// Index of each present subgroup's main group among the main groups present.
+    main_of: Vec<usize>,
+    /// Number of distinct main groups present.
+    mains: usize,
+    /// a_mn between the main groups present: `a[m * mains + n]`, K.
     a: Vec<f64>,
+    /// The subgroups each compound holds (indices among those present), for its pure state.
+    members: Vec<Vec<usize>>,
     /// r_i and q_i of each compound.
     r_i: Vec<f64>,
     q_i: Vec<f64>,
@@ -124,46 +135,85 @@ impl OilGroups {
     /// assert!(OilGroups::new(&["my-own-compound"]).is_err());
     /// ```
     pub fn new<S: AsRef<str>>(ids: &[S]) -> Result<OilGroups, ActivityError> {
-        if ids.is_empty() {
-            return Err(ActivityError::Empty);
-        }
         let rows = ids
             .iter()
             .map(|id| {
-                groups_of(id.as_ref()).ok_or_else(|| ActivityError::NoGroups { id: id.as_ref().into() })
+                groups_of(id.as_ref())
+                    .map(|row| row.groups)
+                    .ok_or_else(|| ActivityError::NoGroups { id: id.as_ref().into() })
             })
             .collect::<Result<Vec<_>, _>>()?;
+        OilGroups::from_groups(&rows)
+    }
+
+    /// Builds the structure from each compound's subgroups and counts directly (for a molecule
+    /// outside the library, e.g. a handbook example).
+    ///
+    /// ```
+    /// use stillroom_core::activity::{OilGroups, groups::Sub};
+    /// // n-hexane: 2 CH3 + 4 CH2.
+    /// let hexane: &[(Sub, u8)] = &[(Sub::Ch3, 2), (Sub::Ch2, 4)];
+    /// assert!(OilGroups::from_groups(&[hexane]).is_ok());
+    /// assert!(OilGroups::from_groups(&[&[(Sub::C, 1)]]).is_err()); // no surface area
+    /// ```
+    pub fn from_groups(compounds: &[&[(Sub, u8)]]) -> Result<OilGroups, ActivityError> {
+        if compounds.is_empty() {
+            return Err(ActivityError::Empty);
+        }
         // Distinct subgroups present, as indices into SUBGROUPS, in first-seen order.
         let mut present: Vec<usize> = Vec::new();
-        for row in &rows {
-            for &(sub, _) in row.groups {
-                if !present.contains(&(sub as usize)) {
-                    present.push(sub as usize);
-                }
+        for &(sub, _) in compounds.iter().flat_map(|c| c.iter()) {
+            if !present.contains(&(sub as usize)) {
+                present.push(sub as usize);
             }
         }
         let g = present.len();
-        let mut nu = vec![0.0; rows.len() * g];
-        for (i, row) in rows.iter().enumerate() {
-            for &(sub, count) in row.groups {
+        let mut nu = vec![0.0; compounds.len() * g];
+        for (i, groups) in compounds.iter().enumerate() {
+            for &(sub, count) in groups.iter() {
                 let k = present.iter().position(|&p| p == sub as usize).unwrap_or(0);
                 nu[i * g + k] += f64::from(count);
             }
         }
         let q_k: Vec<f64> = present.iter().map(|&p| SUBGROUPS[p].q).collect();
         let r_k: Vec<f64> = present.iter().map(|&p| SUBGROUPS[p].r).collect();
-        let mut a = vec![0.0; g * g];
-        for (k, &pk) in present.iter().enumerate() {
-            for (m, &pm) in present.iter().enumerate() {
-                a[k * g + m] = A_MN_K[SUBGROUPS[pk].main as usize][SUBGROUPS[pm].main as usize];
-            }
+        // Ψ depends only on the main groups: keep one a_mn per pair of them, so that each
+        // evaluation takes the fewest exponentials.
+        let mut main_ids: Vec<usize> = Vec::new();
+        let mut main_of = Vec::with_capacity(g);
+        for &p in &present {
+            let id = SUBGROUPS[p].main as usize;
+            let local = main_ids.iter().position(|&m| m == id).unwrap_or_else(|| {
+                main_ids.push(id);
+                main_ids.len() - 1
+            });
+            main_of.push(local);
         }
+        let mains = main_ids.len();
+        let a = main_ids.iter().flat_map(|&m| main_ids.iter().map(move |&n| A_MN_K[m][n])).collect();
+        let members =
+            (0..compounds.len()).map(|i| (0..g).filter(|&k| nu[i * g + k] > 0.0).collect()).collect();
         let weighted = |i: usize, per_group: &[f64]| -> f64 {
             nu[i * g..(i + 1) * g].iter().zip(per_group).map(|(n, v)| n * v).sum()
         };
-        let r_i = (0..rows.len()).map(|i| weighted(i, &r_k)).collect();
-        let q_i = (0..rows.len()).map(|i| weighted(i, &q_k)).collect();
-        Ok(OilGroups { compounds: rows.len(), subgroups: g, nu, q_k, a, r_i, q_i })
+        let r_i: Vec<f64> = (0..compounds.len()).map(|i| weighted(i, &r_k)).collect();
+        let q_i: Vec<f64> = (0..compounds.len()).map(|i| weighted(i, &q_k)).collect();
+        // A molecule without surface area would divide by zero in F_i and Θ_m.
+        if let Some(index) = q_i.iter().position(|q| *q <= 0.0) {
+            return Err(ActivityError::NoSurface { index });
+        }
+        Ok(OilGroups {
+            compounds: compounds.len(),
+            subgroups: g,
+            nu,
+            q_k,
+            main_of,
+            mains,
+            a,
+            members,
+            r_i,
+            q_i,
+        })
     }
 
     /// Number of compounds.
@@ -194,7 +244,10 @@ impl OilGroups {
             return Err(ActivityError::TemperatureOutOfRange { t_k });
         }
         let g = self.subgroups;
-        let psi: Vec<f64> = self.a.iter().map(|a| (-a / t_k).exp()).collect();
+        let psi_main: Vec<f64> = self.a.iter().map(|a| (-a / t_k).exp()).collect();
+        let psi: Vec<f64> =
+            (0..g * g).map(|km| psi_main[self.main_of[km / g] * self.mains + self.main_of[km % g]]).collect();
+        let all: Vec<usize> = (0..g).collect();
 
         // Residual part: group activity in the mixture, then in each pure compound.
         let mut group_x = vec![0.0; g];
@@ -205,7 +258,7 @@ impl OilGroups {
         }
         let mut scratch = vec![0.0; 2 * g];
         let mut ln_big_gamma = vec![0.0; g];
-        self.ln_group_gamma(&group_x, &psi, &mut scratch, &mut ln_big_gamma);
+        self.ln_group_gamma(&group_x, &all, &psi, &mut scratch, &mut ln_big_gamma);
         let mut ln_pure = vec![0.0; g];
 
         let sum_xr: f64 = x.iter().zip(&self.r_i).map(|(x, r)| x * r).sum();
@@ -213,9 +266,9 @@ impl OilGroups {
         let mut out = Vec::with_capacity(self.compounds);
         for i in 0..self.compounds {
             let nu_i = &self.nu[i * g..(i + 1) * g];
-            self.ln_group_gamma(nu_i, &psi, &mut scratch, &mut ln_pure);
-            let residual: f64 =
-                nu_i.iter().zip(ln_big_gamma.iter().zip(&ln_pure)).map(|(n, (m, p))| n * (m - p)).sum();
+            let members = &self.members[i];
+            self.ln_group_gamma(nu_i, members, &psi, &mut scratch, &mut ln_pure);
+            let residual: f64 = members.iter().map(|&k| nu_i[k] * (ln_big_gamma[k] - ln_pure[k])).sum();
             let v = self.r_i[i] / sum_xr;
             let f = self.q_i[i] / sum_xq;
             let combinatorial = 1.0 - v + v.ln() - 5.0 * self.q_i[i] * (1.0 - v / f + (v / f).ln());
@@ -256,22 +309,32 @@ impl OilGroups {
         Ok(x.iter().map(|v| v / total).collect())
     }
 
-    /// ln Γ_k for group amounts `counts` (any scale), into `out`. `scratch` holds 2g values.
-    fn ln_group_gamma(&self, counts: &[f64], psi: &[f64], scratch: &mut [f64], out: &mut [f64]) {
+    /// ln Γ_k for group amounts `counts` (any scale) over the subgroups `idx` (the others
+    /// being absent), into `out[k]` for k in `idx`. `scratch` holds 2g values.
+    fn ln_group_gamma(
+        &self,
+        counts: &[f64],
+        idx: &[usize],
+        psi: &[f64],
+        scratch: &mut [f64],
+        out: &mut [f64],
+    ) {
         let g = self.subgroups;
-        let (theta, s) = scratch.split_at_mut(g);
+        let (theta, w) = scratch.split_at_mut(g);
         // Θ_m = Q_m X_m / Σ Q_n X_n (the normalisation of X cancels).
-        let area: f64 = counts.iter().zip(&self.q_k).map(|(c, q)| c * q).sum();
-        for ((t, c), q) in theta.iter_mut().zip(counts).zip(&self.q_k) {
-            *t = c * q / area;
+        let area: f64 = idx.iter().map(|&m| counts[m] * self.q_k[m]).sum();
+        for &m in idx {
+            theta[m] = counts[m] * self.q_k[m] / area;
         }
-        // s_k = Σ_m Θ_m Ψ_mk.
-        for (k, sk) in s.iter_mut().enumerate() {
-            *sk = (0..g).map(|m| theta[m] * psi[m * g + k]).sum();
+        // s_k = Σ_m Θ_m Ψ_mk; ln Γ_k needs ln s_k and Σ_m Ψ_km Θ_m / s_m (w_m = Θ_m / s_m).
+        for &k in idx {
+            let s_k: f64 = idx.iter().map(|&m| theta[m] * psi[m * g + k]).sum();
+            out[k] = s_k.ln();
+            w[k] = theta[k] / s_k;
         }
-        for (k, o) in out.iter_mut().enumerate() {
-            let tail: f64 = (0..g).map(|m| theta[m] * psi[k * g + m] / s[m]).sum();
-            *o = self.q_k[k] * (1.0 - s[k].ln() - tail);
+        for &k in idx {
+            let tail: f64 = idx.iter().map(|&m| w[m] * psi[k * g + m]).sum();
+            out[k] = self.q_k[k] * (1.0 - out[k] - tail);
         }
     }
 }
@@ -346,6 +409,7 @@ mod tests {
         let none: [&str; 0] = [];
         assert_eq!(OilGroups::new(&none), Err(Empty));
         assert_eq!(OilGroups::new(&["linalool", "nope"]), Err(NoGroups { id: "nope".into() }));
+        assert_eq!(OilGroups::from_groups(&[&[(groups::Sub::Oh, 1)], &[]]), Err(NoSurface { index: 1 }));
         let oil = OilGroups::new(&["linalool", "camphor"]).unwrap();
         assert_eq!(oil.gamma(&[1.0], 373.15), Err(LengthMismatch { compounds: 2, fractions: 1 }));
         assert!(matches!(oil.gamma(&[0.5, f64::NAN], 373.15), Err(InvalidFraction { index: 1, .. })));
