@@ -248,8 +248,11 @@ impl OilGroups {
         }
         let g = self.subgroups;
         let psi_main: Vec<f64> = self.a.iter().map(|a| (-a / t_k).exp()).collect();
-        let psi: Vec<f64> =
-            (0..g * g).map(|km| psi_main[self.main_of[km / g] * self.mains + self.main_of[km % g]]).collect();
+        let mut psi = Vec::with_capacity(g * g);
+        for &mk in &self.main_of {
+            let row = &psi_main[mk * self.mains..(mk + 1) * self.mains];
+            psi.extend(self.main_of.iter().map(|&mm| row[mm]));
+        }
         let all: Vec<usize> = (0..g).collect();
 
         // Residual part: group activity in the mixture, then in each pure compound.
