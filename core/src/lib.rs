@@ -4,6 +4,7 @@
 //! phenomenon, in SI units. The one entry point is [`plan::plan`]: a [`scenario::Scenario`]
 //! in, a [`plan::Plan`] (or every invalid field at once, as [`scenario::ScenarioErrors`]) out.
 
+pub mod activity;
 pub mod atmosphere;
 pub mod calibration;
 pub mod codistillation;
