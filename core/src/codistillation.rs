@@ -35,9 +35,14 @@ pub enum EquilibriumError {
 
 const T_LOW_K: f64 = 274.0;
 
-fn oil_pressure_sum_pa(oil: &Oil, t_k: f64) -> f64 {
+fn oil_pressure_sum_pa(oil: &Oil, gamma: &[f64], t_k: f64) -> f64 {
     let total: f64 = oil.moles.iter().sum();
-    oil.components.iter().zip(&oil.moles).map(|(c, n)| n / total * c.vapour_pressure.pressure_pa(t_k)).sum()
+    oil.components
+        .iter()
+        .zip(&oil.moles)
+        .zip(gamma)
+        .map(|((c, n), g)| g * n / total * c.vapour_pressure.pressure_pa(t_k))
+        .sum()
 }
 
 /// Boiling temperature of water plus an immiscible oil at total pressure P, K.
@@ -56,6 +61,13 @@ fn oil_pressure_sum_pa(oil: &Oil, t_k: f64) -> f64 {
 /// assert!(t - 273.15 > 94.5 && t - 273.15 < 96.5);
 /// ```
 pub fn boiling_temperature_k(oil: &Oil, pressure_pa: f64) -> Result<f64, EquilibriumError> {
+    boiling_state(oil, pressure_pa).map(|(t, _)| t)
+}
+
+/// The boiling temperature and the activity coefficients there. A non-ideal oil is solved twice:
+/// ideal first, then with γ taken at that temperature (γ moves little over a kelvin or two:
+/// re-solving until T settles changed it by under 0.001 K on the crop oils).
+fn boiling_state(oil: &Oil, pressure_pa: f64) -> Result<(f64, Vec<f64>), EquilibriumError> {
     if !(1_000.0..=1.0e6).contains(&pressure_pa) {
         return Err(EquilibriumError::PressureOutOfRange { pressure_pa });
     }
@@ -65,11 +77,20 @@ pub fn boiling_temperature_k(oil: &Oil, pressure_pa: f64) -> Result<f64, Equilib
     }
     let t_water = water::saturation_temperature_k(pressure_pa)
         .map_err(|_| EquilibriumError::PressureOutOfRange { pressure_pa })?;
-    let balance = |t: f64| {
-        let p_w = water::saturation_pressure_pa(t).unwrap_or(f64::NAN);
-        p_w + oil_pressure_sum_pa(oil, t) - pressure_pa
+    let solve = |gamma: &[f64]| {
+        let balance = |t: f64| {
+            let p_w = water::saturation_pressure_pa(t).unwrap_or(f64::NAN);
+            p_w + oil_pressure_sum_pa(oil, gamma, t) - pressure_pa
+        };
+        find_root(balance, T_LOW_K, t_water, 1e-7).map_err(|_| EquilibriumError::InvalidOil)
     };
-    find_root(balance, T_LOW_K, t_water, 1e-7).map_err(|_| EquilibriumError::InvalidOil)
+    let ideal = vec![1.0; oil.moles.len()];
+    let t_ideal = solve(&ideal)?;
+    if oil.activity.is_none() {
+        return Ok((t_ideal, ideal));
+    }
+    let gamma = oil.activity_coefficients(t_ideal);
+    Ok((solve(&gamma)?, gamma))
 }
 
 /// The full equilibrium at total pressure P: temperature, partial pressures and the least
@@ -88,9 +109,9 @@ pub fn boiling_temperature_k(oil: &Oil, pressure_pa: f64) -> Result<f64, Equilib
 /// assert!(e.steam_per_oil_kg_per_kg > 20.0 && e.steam_per_oil_kg_per_kg < 30.0);
 /// ```
 pub fn equilibrium(oil: &Oil, pressure_pa: f64) -> Result<Equilibrium, EquilibriumError> {
-    let t = boiling_temperature_k(oil, pressure_pa)?;
+    let (t, gamma) = boiling_state(oil, pressure_pa)?;
     let p_w = water::saturation_pressure_pa(t).map_err(|_| EquilibriumError::InvalidOil)?;
-    let p_oil = oil.partial_pressures_pa(t);
+    let p_oil = oil.partial_pressures_with_pa(&gamma, t);
     let oil_mass_term: f64 =
         oil.components.iter().zip(&p_oil).map(|(c, p)| p * c.molar_mass_kg_per_mol).sum();
     Ok(Equilibrium {
@@ -157,6 +178,7 @@ pub fn deplete(
     let target = target_fraction.clamp(0.0, 0.999);
     let cut_count = cut_count.max(1);
     let mut state = Oil::from_mass_fractions(oil.components.clone(), &oil.mass_fractions());
+    state.activity = oil.activity.clone();
     let m_w = water::MOLAR_MASS_KG_PER_MOL;
     let step: f64 = 0.01;
     let n = oil.components.len();

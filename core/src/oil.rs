@@ -34,11 +34,14 @@ impl From<&Compound> for Component {
     }
 }
 
-/// An oil: components with their amounts in moles (any consistent scale).
+/// An oil: components with their amounts in moles (any consistent scale), ideal unless it
+/// carries UNIFAC groups for its activity coefficients.
 #[derive(Debug, Clone, PartialEq)]
 pub struct Oil {
     pub components: Vec<Component>,
     pub moles: Vec<f64>,
+    /// Groups for UNIFAC activity coefficients; None for an ideal oil (γ = 1).
+    pub activity: Option<crate::activity::OilGroups>,
 }
 
 impl Oil {
@@ -60,7 +63,25 @@ impl Oil {
         let total: f64 = mass_fractions.iter().sum();
         let moles =
             components.iter().zip(mass_fractions).map(|(c, w)| w / total / c.molar_mass_kg_per_mol).collect();
-        Oil { components, moles }
+        Oil { components, moles, activity: None }
+    }
+
+    /// The same oil with activity coefficients by UNIFAC ([`crate::activity`]); an error when a
+    /// compound has no UNIFAC groups (a grower's own compound, for one).
+    pub fn with_activity(mut self) -> Result<Oil, crate::activity::ActivityError> {
+        let ids: Vec<&str> = self.components.iter().map(|c| c.id.as_str()).collect();
+        self.activity = Some(crate::activity::OilGroups::new(&ids)?);
+        Ok(self)
+    }
+
+    /// Activity coefficients γ_i at T: UNIFAC for a non-ideal oil, 1 for an ideal one (and where
+    /// UNIFAC cannot answer, e.g. outside its temperature range).
+    pub fn activity_coefficients(&self, t_k: f64) -> Vec<f64> {
+        let ideal = || vec![1.0; self.moles.len()];
+        match &self.activity {
+            Some(g) => g.gamma(&self.moles, t_k).unwrap_or_else(|_| ideal()),
+            None => ideal(),
+        }
     }
 
     /// Mole fractions x_i = n_i / Σ n.
@@ -82,11 +103,12 @@ impl Oil {
         self.components.iter().zip(&self.moles).map(|(c, n)| n * c.molar_mass_kg_per_mol).sum()
     }
 
-    /// Partial pressures over the oil by Raoult's law, p_i = x_i p_i*(T), Pa.
+    /// Partial pressures over the oil by Raoult's law, p_i = γ_i x_i p_i*(T), Pa (γ_i = 1 for an
+    /// ideal oil).
     ///
-    /// Source: Raoult (1887); any thermodynamics text (e.g. Smith, Van Ness & Abbott,
-    /// *Introduction to Chemical Engineering Thermodynamics*, eq. 10.1). Valid for ideal
-    /// liquid mixtures; each p_i* within its correlation's range.
+    /// Source: Raoult (1887), modified with activity coefficients; any thermodynamics text (e.g.
+    /// Smith, Van Ness & Abbott, *Introduction to Chemical Engineering Thermodynamics*, eq. 10.1
+    /// and 12.1). Valid for liquid mixtures; each p_i* within its correlation's range.
     ///
     /// ```
     /// use stillroom_core::{compounds::find, oil::{Component, Oil}};
@@ -97,8 +119,18 @@ impl Oil {
     /// assert!((p[0] - c.vapour_pressure.pressure_pa(373.15)).abs() < 1e-9);
     /// ```
     pub fn partial_pressures_pa(&self, t_k: f64) -> Vec<f64> {
+        self.partial_pressures_with_pa(&self.activity_coefficients(t_k), t_k)
+    }
+
+    /// Partial pressures with given activity coefficients, p_i = γ_i x_i p_i*(T), Pa.
+    pub fn partial_pressures_with_pa(&self, gamma: &[f64], t_k: f64) -> Vec<f64> {
         let x = self.mole_fractions();
-        self.components.iter().zip(x).map(|(c, x)| x * c.vapour_pressure.pressure_pa(t_k)).collect()
+        self.components
+            .iter()
+            .zip(x)
+            .zip(gamma)
+            .map(|((c, x), g)| g * x * c.vapour_pressure.pressure_pa(t_k))
+            .collect()
     }
 
     /// Total vapour pressure of the oil, Σ x_i p_i*(T), Pa.

@@ -89,6 +89,9 @@ schema! {
         /// Density of the whole oil at about 20 °C; from the crop, or mixed ideally from the
         /// compounds, when absent.
         pub density_kg_per_m3: Option<f64>,
+        /// Activity coefficients inside the oil by UNIFAC instead of an ideal (Raoult) oil. Off by
+        /// default: the ideal oil stays the reference.
+        pub non_ideal: bool,
     }
 
     /// One compound's share in a user's own oil analysis.
@@ -408,7 +411,7 @@ impl Default for Charge {
 
 impl Default for OilSpec {
     fn default() -> Self {
-        OilSpec { composition: OilComposition::CropTypical, density_kg_per_m3: None }
+        OilSpec { composition: OilComposition::CropTypical, density_kg_per_m3: None, non_ideal: false }
     }
 }
 

@@ -290,3 +290,28 @@ fn the_water_to_oil_warning_fits_each_crop_and_never_asks_a_steam_limited_oil_fo
     }
     assert!(firing * 3 < CROPS.len(), "fires on {firing} of {} presets", CROPS.len());
 }
+
+// --- Non-ideal oil (optional) -------------------------------------------------------------------
+
+#[test]
+fn a_non_ideal_oil_is_optional_and_moves_the_least_steam() {
+    // Off by default, so the ideal oil stays the reference. On, UNIFAC (Hansen et al. 1991
+    // parameters; checked against thermo 0.6.1 in reference_activity.rs) gives β-caryophyllene
+    // an activity coefficient of about 6 in eugenol, so clove oil needs far less steam.
+    let mut s = crop("clove-bud");
+    assert!(!s.oil.non_ideal);
+    let ideal = planned(&s).codistillation.min_steam_per_kg_oil;
+    s.oil.non_ideal = true;
+    let non_ideal = planned(&s).codistillation.min_steam_per_kg_oil;
+    assert!(non_ideal < 0.8 * ideal, "{non_ideal} against {ideal}");
+    // A grower's own compound has no UNIFAC groups: a clear error on the setting, not a guess.
+    let mut s = Scenario::default();
+    s.oil.non_ideal = true;
+    s.custom_compounds = serde_json::from_str(
+        r#"[{"id":"own-x","name":"Own","molar_mass_kg_per_mol":0.15,"liquid_density_kg_per_m3":900,
+            "water_solubility_kg_per_m3":0.5,"vapour_pressure":{"kind":"two_points","t1_c":25,"p1_pa":20,"t2_c":200,"p2_pa":101325}}]"#,
+    )
+    .unwrap();
+    s.oil.composition = OilComposition::Compound { id: "own-x".into() };
+    assert!(plan(&s).unwrap_err().on("oil.non_ideal").is_some());
+}

@@ -300,6 +300,24 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
             oil = Some(Oil::from_mass_fractions(comps, &weights));
         }
     }
+    if s.oil.non_ideal
+        && let Some(ideal) = oil.take()
+    {
+        match ideal.clone().with_activity() {
+            Ok(non_ideal) => oil = Some(non_ideal),
+            Err(e) => {
+                ck.push(
+                    "oil.non_ideal",
+                    "on".into(),
+                    "an oil whose compounds all have UNIFAC groups".into(),
+                    format!(
+                        "activity coefficients cannot be computed for this oil ({e}); turn the setting off"
+                    ),
+                );
+                oil = Some(ideal);
+            }
+        }
+    }
     let oil_density = match (&oil, s.oil.density_kg_per_m3) {
         (_, Some(d)) => {
             // Light terpene oils (about 840) to heavy phenolic ones (about 1070) with margin.
