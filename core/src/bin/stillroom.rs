@@ -7,7 +7,9 @@
 //!                                          vary FIELD (a dotted path such as site.altitude_m)
 //!                                          and print CSV of the COLUMNS (comma-separated dotted
 //!                                          paths into the plan)
-//! stillroom schema scenario|plan           print the JSON Schema
+//! stillroom size [FILE]                    read a sizing request (FILE or stdin), print the design
+//! stillroom schema scenario|plan|sizing_request|design
+//!                                          print the JSON Schema
 //! stillroom example                        print the invented example scenario
 //! ```
 
@@ -108,6 +110,24 @@ fn sweep(args: &[String]) -> Result<String, String> {
     Ok(out)
 }
 
+/// `size [FILE]`: a sizing request (FILE or stdin) in, the design out; field errors as JSON.
+fn size_request(path: Option<&String>) -> Result<String, String> {
+    let text = match path {
+        Some(p) => std::fs::read_to_string(p).map_err(|e| format!("cannot read {p}: {e}"))?,
+        None => {
+            let mut s = String::new();
+            std::io::stdin().read_to_string(&mut s).map_err(|e| format!("cannot read stdin: {e}"))?;
+            s
+        }
+    };
+    let request: stillroom_core::SizingRequest =
+        serde_json::from_str(&text).map_err(|e| format!("not a valid sizing request: {e}"))?;
+    match stillroom_core::size(&request) {
+        Ok(d) => serde_json::to_string_pretty(&d).map_err(|e| e.to_string()),
+        Err(e) => Err(serde_json::to_string_pretty(&e).unwrap_or_else(|_| e.to_string())),
+    }
+}
+
 fn run(args: &[String]) -> Result<String, String> {
     match args.first().map(String::as_str) {
         Some("plan") => {
@@ -118,13 +138,16 @@ fn run(args: &[String]) -> Result<String, String> {
             }
         }
         Some("sweep") => sweep(&args[1..]),
+        Some("size") => size_request(args.get(1)),
         Some("schema") => match args.get(1).map(String::as_str) {
             Some("scenario") => serde_json::to_string_pretty(&schemars::schema_for!(Scenario)).map_err(|e| e.to_string()),
             Some("plan") => serde_json::to_string_pretty(&schemars::schema_for!(Plan)).map_err(|e| e.to_string()),
-            _ => Err("usage: stillroom schema scenario|plan".into()),
+            Some("sizing_request") => serde_json::to_string_pretty(&schemars::schema_for!(stillroom_core::SizingRequest)).map_err(|e| e.to_string()),
+            Some("design") => serde_json::to_string_pretty(&schemars::schema_for!(stillroom_core::Design)).map_err(|e| e.to_string()),
+            _ => Err("usage: stillroom schema scenario|plan|sizing_request|design".into()),
         },
         Some("example") => serde_json::to_string_pretty(&Scenario::default()).map_err(|e| e.to_string()),
-        _ => Err("usage: stillroom plan [FILE] | sweep FIELD FROM TO STEP COLUMNS [FILE] | schema scenario|plan | example".into()),
+        _ => Err("usage: stillroom plan [FILE] | sweep FIELD FROM TO STEP COLUMNS [FILE] | size [FILE] | schema scenario|plan|sizing_request|design | example".into()),
     }
 }
 
