@@ -187,7 +187,12 @@ fn build(
     let still = StillDesign {
         charge_volume_m3: t.charge_m3,
         packing_density_kg_per_m3: needs.packing_kg_per_m3,
-        volume_m3: sized(exact.trial.stack.volume_m3, bought.vessel),
+        // The least vessel for the bought design's own boiler water.
+        volume_m3: sized(
+            vessel::smallest_vessel_m3(t.charge_m3, catalogue::VESSEL_HEIGHT_TO_DIAMETER, t.boiled_off_kg)
+                .unwrap_or(exact.trial.stack.volume_m3),
+            bought.vessel,
+        ),
         diameter_m: st.diameter_m,
         height_m: st.height_m,
         height_to_diameter: catalogue::VESSEL_HEIGHT_TO_DIAMETER,
@@ -219,7 +224,8 @@ fn build(
         kind: req.cooling.condenser,
         duty_w: p.condenser.duty_w,
         tube_inner_diameter_m: Purchase {
-            exact: parts.needed_inner_m,
+            // Each of n parallel coils carries 1/n of the steam: it needs 1/√n of the diameter.
+            exact: parts.needed_inner_m / (parts.coils as f64).sqrt(),
             rounded: tube.inner_diameter_m(),
             label: if parts.coils > 1 {
                 format!("{} coils of {}", parts.coils, tube.label)

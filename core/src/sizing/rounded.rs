@@ -35,7 +35,13 @@ pub(super) fn vessel_and_heat(
     exact: &Exact,
 ) -> Result<Bought, SizingErrors> {
     let exact_v = exact.trial.stack.volume_m3;
-    let vessels = catalogue::VESSELS_M3.iter().filter(|v| v.value >= exact_v * (1.0 - 1e-9));
+    // Every vessel that could hold the charge over the heater's cover alone is tried with the
+    // plan, smallest first: the rounded heat may boil off less water than the exact design.
+    let charge_m3 = exact.trial.charge_m3;
+    let vessels = catalogue::VESSELS_M3.iter().filter(|v| {
+        crate::sizing::vessel::stack(v.value, catalogue::VESSEL_HEIGHT_TO_DIAMETER, 0.0).charge_space_m3
+            >= charge_m3
+    });
     let ratings = catalogue::heat_ratings(needs.fuel);
     let mut last_miss = None;
     let mut any_vessel = false;
