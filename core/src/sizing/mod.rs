@@ -361,3 +361,141 @@ fn cautions(needs: &Needs, parts: &Parts) -> Vec<String> {
     }
     c
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::scenario::{OilComposition, OilPart, Scenario};
+
+    /// An invented farm's request: 30 kg of lavender a day over propane.
+    fn request() -> SizingRequest {
+        serde_json::from_str(
+            r#"{"crop":"lavender","harvest":{"kind":"per_day","kg_per_day":30},"site":{"altitude_m":300},
+            "heat":{"kind":"fuel","fuel":"propane"},"cooling":{"inlet_c":15},
+            "limits":{"max_charges_per_day":2,"max_run_s":14400,"warmest_cooling_water_c":45}}"#,
+        )
+        .unwrap()
+    }
+
+    #[test]
+    fn every_bad_field_is_reported_together() {
+        let mut r = request();
+        r.crop = Some("moonflower".into());
+        r.harvest = Harvest::PerDay { kg_per_day: -5.0, days: None };
+        r.site.altitude_m = f64::NAN;
+        r.cooling.inlet_c = 20.0;
+        r.limits.warmest_cooling_water_c = 18.0;
+        r.limits.max_charges_per_day = 0;
+        r.heat = HeatSupply::Electric {
+            supply: ElectricSupply::Current { current_a: 16.0, voltage_v: 230.0, phases: Some(2) },
+        };
+        let e = size(&r).unwrap_err();
+        for field in [
+            "crop",
+            "harvest.kg_per_day",
+            "site.altitude_m",
+            "limits.warmest_cooling_water_c",
+            "limits.max_charges_per_day",
+            "heat.supply.phases",
+        ] {
+            assert!(e.on(field).is_some(), "no error on {field}: {e}");
+        }
+        assert_eq!(e.on("site.altitude_m").unwrap().message, "must be a number");
+        assert_eq!(e.on("limits.warmest_cooling_water_c").unwrap().min, Some(21.0));
+    }
+
+    #[test]
+    fn electricity_is_not_a_fuel_to_burn() {
+        let mut r = request();
+        r.heat = HeatSupply::Fuel {
+            fuel: crate::heat::Fuel::Electricity,
+            appliance: None,
+            max_heat_input_w: None,
+        };
+        assert!(size(&r).unwrap_err().on("heat.fuel").is_some());
+    }
+
+    #[test]
+    fn unknown_fields_are_refused_inside_tagged_sections() {
+        let text = r#"{"crop":"lavender","harvest":{"kind":"per_day","kg_per_day":30,"kg_per_week":5},
+            "site":{"altitude_m":300},"heat":{"kind":"fuel","fuel":"propane"},"cooling":{"inlet_c":15},
+            "limits":{"max_charges_per_day":2,"max_run_s":14400,"warmest_cooling_water_c":45}}"#;
+        assert!(serde_json::from_str::<SizingRequest>(text).unwrap_err().to_string().contains("kg_per_week"));
+    }
+
+    #[test]
+    fn an_own_oil_needs_its_packing_and_steam_rate() {
+        let mut base = Scenario::default();
+        base.charge.crop = None;
+        base.charge.oil_content_percent = Some(0.8);
+        base.run.rate_constant_per_min = Some(0.04);
+        base.oil.composition = OilComposition::Mixture {
+            parts: vec![
+                OilPart { compound: "linalool".into(), mass_percent: 60.0 },
+                OilPart { compound: "d-limonene".into(), mass_percent: 40.0 },
+            ],
+        };
+        let mut r = request();
+        r.crop = None;
+        r.base = Some(base);
+        let e = size(&r).unwrap_err();
+        assert!(e.on("packing_density_kg_per_m3").is_some() && e.on("steam_rate_kg_per_h_per_kg").is_some());
+        r.packing_density_kg_per_m3 = Some(150.0);
+        r.steam_rate_kg_per_h_per_kg = Some(0.4);
+        let d = size(&r).unwrap();
+        assert!((d.still.charge_volume_m3 - d.charge_kg / 150.0).abs() < 1e-12);
+        assert!(d.heat.specific_steam_rate_kg_per_h_per_kg >= 0.4 * (1.0 - 1e-9));
+    }
+
+    #[test]
+    fn a_bad_base_field_is_named_under_base() {
+        let mut base = Scenario::default();
+        base.still.wall_u_w_per_m2_k = -1.0;
+        let mut r = request();
+        r.base = Some(base);
+        assert!(size(&r).unwrap_err().on("base.still.wall_u_w_per_m2_k").is_some());
+    }
+
+    #[test]
+    fn a_run_too_short_for_the_crop_says_how_long_it_must_be() {
+        let mut r = request();
+        r.limits.max_run_s = 1200.0;
+        let e = size(&r).unwrap_err();
+        let f = e.on("limits.max_run_s").unwrap_or_else(|| panic!("{e}"));
+        assert!(f.valid.starts_with("at least"), "{}", f.valid);
+    }
+
+    #[test]
+    fn a_harvest_beyond_the_largest_still_asks_for_more_charges() {
+        let mut r = request();
+        r.harvest = Harvest::PerDay { kg_per_day: 600.0, days: None };
+        r.limits.max_charges_per_day = 1;
+        r.limits.max_run_s = 86_400.0;
+        let e = size(&r).unwrap_err();
+        assert!(
+            e.on("limits.max_charges_per_day").is_some() || e.on("heat.max_heat_input_w").is_some(),
+            "{e}"
+        );
+    }
+
+    #[test]
+    fn water_and_flow_limits_are_held() {
+        let mut r = request();
+        r.limits.max_water_per_run_kg = Some(5.0);
+        assert!(size(&r).unwrap_err().on("limits.max_water_per_run_kg").is_some());
+        let mut r = request();
+        r.cooling.condenser = CondenserKind::TubeInTube;
+        r.cooling.max_flow_kg_per_s = Some(0.001);
+        assert!(size(&r).unwrap_err().on("cooling.max_flow_kg_per_s").is_some());
+    }
+
+    #[test]
+    fn a_season_harvest_is_spread_over_its_days() {
+        let mut r = request();
+        r.harvest = Harvest::PerSeason { kg_per_season: 600.0, days: 20 };
+        let d = size(&r).unwrap();
+        assert!((d.charge_kg * d.charges_per_day as f64 - 30.0).abs() < 1e-9);
+        let season = d.planned.oil_per_season_kg.unwrap();
+        assert!((season - 20.0 * d.planned.oil_per_day_kg).abs() < 1e-9);
+    }
+}
