@@ -141,12 +141,15 @@ fn check_design(r: &SizingRequest, d: &Design) -> Result<(), TestCaseError> {
         prop_assert!(plan(&s).map(|q| !meets(r, &q)).unwrap_or(true), "{} would do", smaller.label);
     }
     // The next smaller tub lets the water warm past the limit.
-    if let (Some(tub), Some(_)) = (&d.condenser.tub_volume_m3, &d.condenser.tub_water_kg) {
-        if let Some(smaller) = catalogue::next_smaller(catalogue::TUBS_M3, tub.rounded) {
-            let rho = seuif97::pt(0.101325, r.cooling.inlet_c, seuif97::OD);
-            let s = with(&d.scenario, |s| s.condenser.tub_water_kg = smaller.value * 0.9 * rho);
-            prop_assert!(plan(&s).map(|q| !meets(r, &q)).unwrap_or(true), "{} would do", smaller.label);
-        }
+    if let Some(smaller) = d
+        .condenser
+        .tub_volume_m3
+        .as_ref()
+        .and_then(|tub| catalogue::next_smaller(catalogue::TUBS_M3, tub.rounded))
+    {
+        let rho = seuif97::pt(0.101325, r.cooling.inlet_c, seuif97::OD);
+        let s = with(&d.scenario, |s| s.condenser.tub_water_kg = smaller.value * 0.9 * rho);
+        prop_assert!(plan(&s).map(|q| !meets(r, &q)).unwrap_or(true), "{} would do", smaller.label);
     }
     // The next smaller glassware holds less than the distillate over the residence time.
     if let Some(smaller) = catalogue::next_smaller(catalogue::SEPARATORS_M3, d.separator.volume_m3.rounded) {
