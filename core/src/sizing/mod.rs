@@ -271,7 +271,7 @@ fn build(
         separator,
         planned: figures(needs, p),
         allowances: allowances(),
-        cautions: cautions(needs, parts),
+        cautions: cautions(needs, parts, exact.charges),
         scenario,
     }
 }
@@ -335,7 +335,7 @@ fn allowances() -> Vec<Allowance> {
     ]
 }
 
-fn cautions(needs: &Needs, parts: &Parts) -> Vec<String> {
+fn cautions(needs: &Needs, parts: &Parts, charges: u32) -> Vec<String> {
     let mut c = vec![
         "A still must stay open to the air through its condenser: never seal it, and keep the vapour path free so it cannot build pressure. Follow local codes and licensed practice for anything under pressure.".to_string(),
         "Essential oils and their vapours burn: keep flames and sparks away from the receiver and the condenser's outlet.".to_string(),
@@ -352,6 +352,14 @@ fn cautions(needs: &Needs, parts: &Parts) -> Vec<String> {
             "Gas burners, hoses and regulators must meet local gas codes; use them outdoors or with good ventilation."
                 .to_string(),
         ),
+    }
+    if let Some(tub) = &parts.tub {
+        if charges > 1 {
+            c.push(format!(
+                "The tub ({}) is sized for one charge: refill it with cold water (or feed it) before each later charge.",
+                tub.tub.label
+            ));
+        }
     }
     if parts.coils > 1 {
         c.push(format!(
