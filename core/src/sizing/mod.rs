@@ -353,13 +353,11 @@ fn cautions(needs: &Needs, parts: &Parts, charges: u32) -> Vec<String> {
                 .to_string(),
         ),
     }
-    if let Some(tub) = &parts.tub {
-        if charges > 1 {
-            c.push(format!(
-                "The tub ({}) is sized for one charge: refill it with cold water (or feed it) before each later charge.",
-                tub.tub.label
-            ));
-        }
+    if let Some(tub) = parts.tub.as_ref().filter(|_| charges > 1) {
+        c.push(format!(
+            "The tub ({}) is sized for one charge: refill it with cold water (or feed it) before each later charge.",
+            tub.tub.label
+        ));
     }
     if parts.coils > 1 {
         c.push(format!(
