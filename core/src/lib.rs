@@ -19,7 +19,9 @@ pub mod recovery;
 pub mod scenario;
 pub mod season;
 pub mod separator;
+pub mod sizing;
 pub mod water;
 
 pub use plan::{Plan, plan};
 pub use scenario::{Scenario, ScenarioErrors};
+pub use sizing::{Design, SizingErrors, SizingRequest, size};

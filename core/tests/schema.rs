@@ -32,3 +32,15 @@ fn the_example_scenario_round_trips_through_json() {
     // An empty object is a valid scenario: every field has a default.
     assert_eq!(serde_json::from_str::<stillroom_core::Scenario>("{}").unwrap(), s);
 }
+
+#[test]
+fn sizing_schemas_are_published_and_refuse_unknown_fields() {
+    check("sizing_request", schemars::schema_for!(stillroom_core::SizingRequest));
+    check("design", schemars::schema_for!(stillroom_core::Design));
+    // A misspelt limit is refused, not silently dropped.
+    let text = r#"{"crop":"lavender","harvest":{"kind":"per_day","kg_per_day":10},"site":{"altitude_m":0},
+        "heat":{"kind":"fuel","fuel":"propane"},"cooling":{"inlet_c":15},
+        "limits":{"max_charges_per_day":1,"max_run_s":7200,"warmest_cooling_water_c":45,"max_run_min":90}}"#;
+    let err = serde_json::from_str::<stillroom_core::SizingRequest>(text).unwrap_err();
+    assert!(err.to_string().contains("max_run_min"), "{err}");
+}

@@ -8,7 +8,9 @@
 //!                                          and print CSV of the COLUMNS (comma-separated dotted
 //!                                          paths into the plan), a row as soon as it is planned;
 //!                                          at most MAX_SWEEP_ROWS rows
-//! stillroom schema scenario|plan           print the JSON Schema
+//! stillroom size [FILE]                    read a sizing request (FILE or stdin), print the design
+//! stillroom schema scenario|plan|sizing_request|design
+//!                                          print the JSON Schema
 //! stillroom example                        print the invented example scenario
 //! ```
 //!
@@ -205,6 +207,29 @@ fn sweep(args: &[String]) -> Result<(), String> {
     Ok(())
 }
 
+/// `size [FILE]`: a sizing request (FILE or stdin) in, the design out; field errors as JSON.
+fn size_request(path: Option<&String>) -> Result<String, String> {
+    let mut text = String::new();
+    let reader: Box<dyn Read> = match path {
+        Some(p) => Box::new(std::fs::File::open(p).map_err(|e| format!("cannot read {p}: {e}"))?),
+        None => Box::new(std::io::stdin()),
+    };
+    // One byte past the limit is enough to know the request is too large.
+    reader
+        .take(limits::MAX_SCENARIO_JSON_BYTES as u64 + 1)
+        .read_to_string(&mut text)
+        .map_err(|e| format!("cannot read the request: {e}"))?;
+    if text.len() > limits::MAX_SCENARIO_JSON_BYTES {
+        return Err(format!("the request is larger than {} bytes", limits::MAX_SCENARIO_JSON_BYTES));
+    }
+    let request: stillroom_core::SizingRequest =
+        serde_json::from_str(&text).map_err(|e| format!("not a valid sizing request: {e}"))?;
+    match stillroom_core::size(&request) {
+        Ok(d) => serde_json::to_string_pretty(&d).map_err(|e| e.to_string()),
+        Err(e) => Err(serde_json::to_string_pretty(&e).unwrap_or_else(|_| e.to_string())),
+    }
+}
+
 fn run(args: &[String]) -> Result<Option<String>, String> {
     match args.first().map(String::as_str) {
         Some("plan") => {
@@ -215,13 +240,16 @@ fn run(args: &[String]) -> Result<Option<String>, String> {
             }
         }
         Some("sweep") => sweep(&args[1..]).map(|_| None),
+        Some("size") => size_request(args.get(1)).map(Some),
         Some("schema") => match args.get(1).map(String::as_str) {
             Some("scenario") => serde_json::to_string_pretty(&schemars::schema_for!(Scenario)).map(Some).map_err(|e| e.to_string()),
             Some("plan") => serde_json::to_string_pretty(&schemars::schema_for!(Plan)).map(Some).map_err(|e| e.to_string()),
-            _ => Err("usage: stillroom schema scenario|plan".into()),
+            Some("sizing_request") => serde_json::to_string_pretty(&schemars::schema_for!(stillroom_core::SizingRequest)).map(Some).map_err(|e| e.to_string()),
+            Some("design") => serde_json::to_string_pretty(&schemars::schema_for!(stillroom_core::Design)).map(Some).map_err(|e| e.to_string()),
+            _ => Err("usage: stillroom schema scenario|plan|sizing_request|design".into()),
         },
         Some("example") => serde_json::to_string_pretty(&Scenario::default()).map(Some).map_err(|e| e.to_string()),
-        _ => Err("usage: stillroom plan [FILE] | sweep FIELD FROM TO STEP COLUMNS [FILE] | schema scenario|plan | example".into()),
+        _ => Err("usage: stillroom plan [FILE] | sweep FIELD FROM TO STEP COLUMNS [FILE] | size [FILE] | schema scenario|plan|sizing_request|design | example".into()),
     }
 }
 
