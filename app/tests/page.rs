@@ -193,15 +193,17 @@ async fn a_logged_run_calibrates_the_next_plan_and_is_kept() {
     let log: HtmlElement = host.query_selector("#run-log").unwrap().unwrap().unchecked_into();
     log.click();
     leptos::task::tick().await;
-    // Lavender's preset: k = 0.05/min, oil 0.883 g/mL -> 200 mL after 60 min from 20 kg is
-    // 176.6 g / 0.9502 / 20 kg = 0.93 % (inverse of the first-order law).
+    // Lavender's preset k = 0.05/min at its usual 0.3 kg/h per kg of steam; 20 kg under the
+    // example's 8 kW gets 0.211 kg/h per kg, so k = 0.05 (0.211/0.3)^0.5 = 0.0419/min. Oil
+    // 0.883 g/mL: 200 mL after 60 min from 20 kg is 176.6 g / 0.919 / 20 kg = 0.96 % (inverse of
+    // the first-order law).
     let suggestion = text_of(&host, "[data-out=calibration]");
-    assert!(suggestion.contains("0.93 %"), "{suggestion}");
+    assert!(suggestion.contains("0.96 %"), "{suggestion}");
     let use_it: HtmlElement = host.query_selector("#run-use").unwrap().unwrap().unchecked_into();
     use_it.click();
     leptos::task::tick().await;
     let content: HtmlInputElement = host.query_selector("#f-oil_content").unwrap().unwrap().unchecked_into();
-    assert_eq!(content.value(), "0.93");
+    assert_eq!(content.value(), "0.96");
     drop(mounted);
     // The log survives a remount (a reload).
     let again = fresh_host();
