@@ -1,0 +1,66 @@
+//! The page shows each headline answer with its likely range in plain words, says what moves it
+//! most, and keeps notes about the data apart from what the grower should act on. The numbers
+//! must be the core's own: the same scenario planned natively gives the same range.
+
+use fantoccini::{Client, Locator};
+use std::time::Duration;
+use stillroom_core::{Scenario, plan};
+use stillroom_tests::BoxError;
+use stillroom_tests::browser;
+
+const WAIT: Duration = Duration::from_secs(15);
+
+async fn text_when(client: &Client, css: &str, pred: impl Fn(&str) -> bool) -> Result<String, BoxError> {
+    let start = std::time::Instant::now();
+    loop {
+        let got = match client.find(Locator::Css(css)).await {
+            Ok(e) => e.text().await.unwrap_or_default(),
+            Err(_) => String::new(),
+        };
+        if pred(&got) {
+            return Ok(got);
+        }
+        if start.elapsed() > WAIT {
+            return Err(format!("{css}: page shows {got:?}").into());
+        }
+        tokio::time::sleep(Duration::from_millis(50)).await;
+    }
+}
+
+/// "1 h 02 min" as the page writes durations (rounded to the minute).
+fn duration(s: f64) -> String {
+    let total = (s / 60.0).round() as i64;
+    let (h, m) = (total / 60, total % 60);
+    if h == 0 { format!("{m} min") } else { format!("{h} h {m:02} min") }
+}
+
+#[tokio::test]
+async fn the_run_shows_its_likely_range_and_the_biggest_doubt() -> Result<(), BoxError> {
+    let page = browser::open().await?;
+    page.goto("").await?;
+    page.client.execute("localStorage.clear();", vec![]).await?;
+    page.client.refresh().await?;
+    let c = &page.client;
+    // The invented example (15 kg of lavender at Larkfield Farm), planned natively.
+    let p = plan(&Scenario::default()).map_err(|e| e.to_string())?;
+    let r = &p.ranges.run_time_s;
+    let want = format!("likely {} to {}", duration(r.low), duration(r.high));
+    let note = text_when(c, "[data-out=total_time] + .card-note", |t| t.contains("likely")).await?;
+    assert!(note.contains(&want), "{note:?} should contain {want:?}");
+    // The oil card gives the separable oil's range.
+    let oil = text_when(c, "[data-out=oil_volume] + .card-note", |t| t.contains("likely")).await?;
+    assert!(oil.starts_with("separable oil, likely"), "{oil}");
+    // "How sure is this?" names what moves the run most, in plain words.
+    let sure = c.find(Locator::Css("[data-out=how_sure] summary")).await?;
+    sure.click().await?;
+    let doubt = text_when(c, "[data-note=doubt_run]", |t| !t.is_empty()).await?;
+    assert!(doubt.starts_with("Run length: mostly"), "{doubt}");
+    // Notes about the data sit there, not under "Watch out".
+    let watch = c.find_all(Locator::Css(".warnings [data-warning=estimated_vapour_pressure]")).await?;
+    assert!(watch.is_empty(), "a data note is listed as something to act on");
+    if p.warnings.iter().any(|w| w.code == "estimated_vapour_pressure") {
+        let notes = c.find_all(Locator::Css("[data-note=data_note]")).await?;
+        assert!(!notes.is_empty());
+    }
+    page.close().await
+}
