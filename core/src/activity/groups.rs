@@ -12,12 +12,13 @@
 //! - Group assignments: drawn here from each compound's structure, and found identical to the
 //!   Dortmund Data Bank's original-UNIFAC assignment as shipped with thermo 0.6.1
 //!   (`UNIFAC_group_assignment_DDBST(CAS, "UNIFAC")`) wherever that has one (looked up under the
-//!   CAS number of the racemate or isomer mixture where the listed one is missing). Nerol and
-//!   β-thujone have none there; their rows are thermo 0.6.1's own SMARTS fragmentation into
-//!   original-UNIFAC subgroups (`thermo.group_contribution.smarts_fragment_priority` over
-//!   `thermo.unifac.UNIFAC_SUBGROUPS`, with RDKit) of the SMILES listed in chemicals 1.5.2,
-//!   which covers every heavy atom and matches the DDBST assignment on all the other compounds
-//!   tried. 1,8-cineole has none anywhere; its row says how it is approximated.
+//!   CAS number of the racemate or isomer mixture where the listed one is missing). Nerol has
+//!   none there, under its own CAS or its isomer mixture's; its row is thermo 0.6.1's own
+//!   SMARTS fragmentation into original-UNIFAC subgroups
+//!   (`thermo.group_contribution.smarts_fragment_priority` over `thermo.unifac.UNIFAC_SUBGROUPS`,
+//!   with RDKit) of the SMILES listed in chemicals 1.5.2, which covers every heavy atom and
+//!   gives the DDBST assignment for each of the thirteen compounds added with it. 1,8-cineole
+//!   has none anywhere; its row says how it is approximated.
 //!
 //! Atom counts beside each subgroup let a test rebuild every compound's molar mass from its
 //! groups, a check on the assignments independent of the UNIFAC numbers.
@@ -49,7 +50,7 @@ pub enum MainGroup {
     Hcoo,
     /// Ether oxygen with its neighbouring carbon (13, "CH2O").
     Ch2o,
-    /// Ester linkage with no carbon of its own, as in an aromatic ester (41, "COO").
+    /// Ester –C(=O)O– without an alkyl carbon, as when the carbonyl sits on a ring (41, "COO").
     Coo,
 }
 
@@ -115,7 +116,7 @@ pub enum Sub {
     ChoEther,
     /// Cyclic-ether CH2–O (subgroup 27, "FCH2O", as in tetrahydrofuran).
     Fch2o,
-    /// Ester –COO– alone, its neighbouring carbons counted in other groups (subgroup 77, "COO").
+    /// Ester –C(=O)O– alone, its neighbouring carbons counted in other groups (subgroup 77, "COO").
     Coo,
 }
 
@@ -193,9 +194,6 @@ pub struct CompoundGroups {
 }
 
 const DDBST: &str = "structure; same as the DDBST original-UNIFAC assignment (thermo 0.6.1)";
-
-const SMARTS: &str = "structure; DDBST lists no original-UNIFAC assignment for it, groups as \
-                      thermo 0.6.1's SMARTS fragmentation of its SMILES (chemicals 1.5.2)";
 
 const fn row(id: &'static str, groups: &'static [(Sub, u8)], note: &'static str) -> CompoundGroups {
     CompoundGroups { id, groups, exact: true, note }
@@ -321,7 +319,13 @@ pub static COMPOUND_GROUPS: &[CompoundGroups] = &[
     row("geraniol", &[(Sub::Ch3, 3), (Sub::Ch2, 3), (Sub::ChEqC, 2), (Sub::Oh, 1)], DDBST),
     row("citronellol", &[(Sub::Ch3, 3), (Sub::Ch2, 4), (Sub::Ch, 1), (Sub::ChEqC, 1), (Sub::Oh, 1)], DDBST),
     // Nerol is geraniol's cis isomer; UNIFAC groups do not tell the two apart.
-    row("nerol", &[(Sub::Ch3, 3), (Sub::Ch2, 3), (Sub::ChEqC, 2), (Sub::Oh, 1)], SMARTS),
+    row(
+        "nerol",
+        &[(Sub::Ch3, 3), (Sub::Ch2, 3), (Sub::ChEqC, 2), (Sub::Oh, 1)],
+        "structure; DDBST lists no original-UNIFAC assignment under CAS 106-25-2 nor 624-15-7 \
+         (isomers unstated); same as thermo 0.6.1's SMARTS fragmentation of its SMILES \
+         (chemicals 1.5.2) and as the DDBST assignment of geraniol",
+    ),
     row("2-phenylethanol", &[(Sub::Ch2, 1), (Sub::Ach, 5), (Sub::Acch2, 1), (Sub::Oh, 1)], DDBST),
     row("benzyl-alcohol", &[(Sub::Ach, 5), (Sub::Acch2, 1), (Sub::Oh, 1)], DDBST),
     // The carbonyl carbon is bonded to the ring and the methyl to the oxygen: neither CH3COO nor
