@@ -12,8 +12,13 @@
 //! - Group assignments: drawn here from each compound's structure, and found identical to the
 //!   Dortmund Data Bank's original-UNIFAC assignment as shipped with thermo 0.6.1
 //!   (`UNIFAC_group_assignment_DDBST(CAS, "UNIFAC")`) wherever that has one (looked up under the
-//!   CAS number of the racemate or isomer mixture where the listed one is missing). 1,8-cineole
-//!   has none there; its row says how it is approximated.
+//!   CAS number of the racemate or isomer mixture where the listed one is missing). Nerol has
+//!   none there, under its own CAS or its isomer mixture's; its row is thermo 0.6.1's own
+//!   SMARTS fragmentation into original-UNIFAC subgroups
+//!   (`thermo.group_contribution.smarts_fragment_priority` over `thermo.unifac.UNIFAC_SUBGROUPS`,
+//!   with RDKit) of the SMILES listed in chemicals 1.5.2, which covers every heavy atom and
+//!   gives the DDBST assignment for each of the thirteen compounds added with it. 1,8-cineole
+//!   has none anywhere; its row says how it is approximated.
 //!
 //! Atom counts beside each subgroup let a test rebuild every compound's molar mass from its
 //! groups, a check on the assignments independent of the UNIFAC numbers.
@@ -45,16 +50,18 @@ pub enum MainGroup {
     Hcoo,
     /// Ether oxygen with its neighbouring carbon (13, "CH2O").
     Ch2o,
+    /// Ester –C(=O)O– without an alkyl carbon, as when the carbonyl sits on a ring (41, "COO").
+    Coo,
 }
 
 /// Number of main groups in [`MainGroup`] and in each dimension of [`A_MN_K`].
-pub const MAIN_GROUP_COUNT: usize = 11;
+pub const MAIN_GROUP_COUNT: usize = 12;
 
 /// Hansen et al. (1991) main-group numbers, in the order of [`MainGroup`].
-pub const MAIN_GROUP_NUMBERS: [u8; MAIN_GROUP_COUNT] = [1, 2, 3, 4, 5, 8, 9, 10, 11, 12, 13];
+pub const MAIN_GROUP_NUMBERS: [u8; MAIN_GROUP_COUNT] = [1, 2, 3, 4, 5, 8, 9, 10, 11, 12, 13, 41];
 
 /// Main-group interaction parameters a_mn, K, row m, column n, in the order of [`MainGroup`]
-/// (Hansen main groups 1, 2, 3, 4, 5, 8, 9, 10, 11, 12, 13); Ψ_mn = exp(−a_mn / T).
+/// (Hansen main groups 1, 2, 3, 4, 5, 8, 9, 10, 11, 12, 13, 41); Ψ_mn = exp(−a_mn / T).
 ///
 /// Source: Hansen et al. (1991), Table 2, with the revision of Wittig et al. (2003), as
 /// tabulated by the Dortmund Data Bank (thermo 0.6.1, "UNIFAC original interaction
@@ -62,18 +69,19 @@ pub const MAIN_GROUP_NUMBERS: [u8; MAIN_GROUP_COUNT] = [1, 2, 3, 4, 5, 8, 9, 10,
 /// unlike the rest, is taken to come from the 2003 revision (from memory).
 #[rustfmt::skip]
 pub static A_MN_K: [[f64; MAIN_GROUP_COUNT]; MAIN_GROUP_COUNT] = [
-    //  CH2       C=C      ACH      ACCH2    OH       ACOH        CH2CO    CHO      CCOO     HCOO     CH2O
-    [     0.0,   86.02,   61.13,   76.5,   986.5,  1333.0,      476.4,   677.0,   232.1,   507.0,   251.5     ], // CH2
-    [   -35.36,   0.0,    38.81,   74.15,  524.1,   526.1,      182.6,   448.75,   37.85,  333.5,   214.5     ], // C=C
-    [   -11.12,   3.446,   0.0,   167.0,   636.1,  1329.0,       25.77,  347.3,     5.994, 287.1,    32.14    ], // ACH
-    [   -69.7, -113.6,  -146.8,     0.0,   803.2,   884.9,      -52.1,   586.8,  5688.0,   197.8,   213.1     ], // ACCH2
-    [   156.4,  457.0,    89.6,    25.82,    0.0,  -259.7,       84.0,  -203.6,   101.1,   267.8,    28.06    ], // OH
-    [   275.8,  217.5,    25.34,  244.2,  -451.6,     0.0,     -356.1,  -271.1,  -449.4,   -32.52, -162.8742  ], // ACOH
-    [    26.76,  42.92,  140.1,   365.8,   164.5,  -133.1,        0.0,   -37.36, -213.7,  -190.4,  -103.6     ], // CH2CO
-    [   505.7,   56.3,    23.39,  106.0,   529.0,  -155.6,      128.0,     0.0,  -110.3,   766.0,   304.1     ], // CHO
-    [   114.8,  132.1,    85.84, -170.0,   245.4,   -36.72,     372.2,   185.1,     0.0,  -241.8,  -235.7     ], // CCOO
-    [   329.3,  110.4,    18.12,  428.0,   139.4,  -234.25,     385.4,  -236.5,  1167.0,     0.0,  -234.0     ], // HCOO
-    [    83.36,  26.51,   52.13,   65.69,  237.7,  -178.5461,   191.1,    -7.838,  461.3,   457.3,     0.0     ], // CH2O
+    //  CH2       C=C      ACH      ACCH2    OH       ACOH        CH2CO    CHO      CCOO     HCOO     CH2O         COO
+    [     0.0,   86.02,   61.13,   76.5,   986.5,  1333.0,      476.4,   677.0,   232.1,   507.0,   251.5,       387.1  ], // CH2
+    [   -35.36,   0.0,    38.81,   74.15,  524.1,   526.1,      182.6,   448.75,   37.85,  333.5,   214.5,        48.33 ], // C=C
+    [   -11.12,   3.446,   0.0,   167.0,   636.1,  1329.0,       25.77,  347.3,     5.994, 287.1,    32.14,      103.5  ], // ACH
+    [   -69.7, -113.6,  -146.8,     0.0,   803.2,   884.9,      -52.1,   586.8,  5688.0,   197.8,   213.1,        69.26 ], // ACCH2
+    [   156.4,  457.0,    89.6,    25.82,    0.0,  -259.7,       84.0,  -203.6,   101.1,   267.8,    28.06,      190.3  ], // OH
+    [   275.8,  217.5,    25.34,  244.2,  -451.6,     0.0,     -356.1,  -271.1,  -449.4,   -32.52, -162.8742,   -494.2  ], // ACOH
+    [    26.76,  42.92,  140.1,   365.8,   164.5,  -133.1,        0.0,   -37.36, -213.7,  -190.4,  -103.6,       -18.8  ], // CH2CO
+    [   505.7,   56.3,    23.39,  106.0,   529.0,  -155.6,      128.0,     0.0,  -110.3,   766.0,   304.1,      -275.5  ], // CHO
+    [   114.8,  132.1,    85.84, -170.0,   245.4,   -36.72,     372.2,   185.1,     0.0,  -241.8,  -235.7,       560.2  ], // CCOO
+    [   329.3,  110.4,    18.12,  428.0,   139.4,  -234.25,     385.4,  -236.5,  1167.0,     0.0,  -234.0,      -122.3  ], // HCOO
+    [    83.36,  26.51,   52.13,   65.69,  237.7,  -178.5461,   191.1,    -7.838,  461.3,   457.3,     0.0,       417.0  ], // CH2O
+    [   529.0, 1397.0,   317.6,   615.8,    88.63, -167.3,      123.4,   577.5,  -234.9,   145.4,  -247.8,         0.0  ], // COO
 ];
 
 /// The subgroups used by essential-oil compounds, in the order of [`SUBGROUPS`].
@@ -108,6 +116,8 @@ pub enum Sub {
     ChoEther,
     /// Cyclic-ether CH2–O (subgroup 27, "FCH2O", as in tetrahydrofuran).
     Fch2o,
+    /// Ester –C(=O)O– alone, its neighbouring carbons counted in other groups (subgroup 77, "COO").
+    Coo,
 }
 
 /// One UNIFAC subgroup: its number and name in Hansen et al. (1991), main group, van der Waals
@@ -141,7 +151,7 @@ const fn sg(
 /// Subgroup table, indexed by [`Sub`]. Source of every R_k and Q_k: Hansen et al. (1991),
 /// Table 1 (as tabulated in thermo 0.6.1 `UFSG`); atoms (C, H, O) from each group's formula.
 #[rustfmt::skip]
-pub static SUBGROUPS: [Subgroup; 26] = [
+pub static SUBGROUPS: [Subgroup; 27] = [
     sg(Sub::Ch3,      1,  "CH3",     MainGroup::Ch2,   0.9011, 0.848, (1, 3, 0)),
     sg(Sub::Ch2,      2,  "CH2",     MainGroup::Ch2,   0.6744, 0.540, (1, 2, 0)),
     sg(Sub::Ch,       3,  "CH",      MainGroup::Ch2,   0.4469, 0.228, (1, 1, 0)),
@@ -168,6 +178,7 @@ pub static SUBGROUPS: [Subgroup; 26] = [
     sg(Sub::Ch2o,     25, "CH2O",    MainGroup::Ch2o,  0.9183, 0.780, (1, 2, 1)),
     sg(Sub::ChoEther, 26, "CHO",     MainGroup::Ch2o,  0.6908, 0.468, (1, 1, 1)),
     sg(Sub::Fch2o,    27, "FCH2O",   MainGroup::Ch2o,  0.9183, 1.100, (1, 2, 1)),
+    sg(Sub::Coo,      77, "COO",     MainGroup::Coo,   1.3800, 1.200, (1, 0, 2)),
 ];
 
 /// The UNIFAC groups of one library compound.
@@ -205,6 +216,14 @@ pub static COMPOUND_GROUPS: &[CompoundGroups] = &[
     ),
     row("p-cymene", &[(Sub::Ch3, 2), (Sub::Ach, 4), (Sub::Acch3, 1), (Sub::Acch, 1)], DDBST),
     row("gamma-terpinene", &[(Sub::Ch3, 3), (Sub::Ch2, 2), (Sub::Ch, 1), (Sub::ChEqC, 2)], DDBST),
+    row("camphene", &[(Sub::Ch3, 2), (Sub::Ch2, 3), (Sub::Ch, 2), (Sub::C, 1), (Sub::Ch2EqC, 1)], DDBST),
+    row("terpinolene", &[(Sub::Ch3, 3), (Sub::Ch2, 3), (Sub::ChEqC, 1), (Sub::CEqC, 1)], DDBST),
+    row("delta-3-carene", &[(Sub::Ch3, 3), (Sub::Ch2, 2), (Sub::Ch, 2), (Sub::C, 1), (Sub::ChEqC, 1)], DDBST),
+    row(
+        "alpha-phellandrene",
+        &[(Sub::Ch3, 3), (Sub::Ch2, 1), (Sub::Ch, 2), (Sub::ChEqCh, 1), (Sub::ChEqC, 1)],
+        DDBST,
+    ),
     // Oxygenated monoterpenes.
     CompoundGroups {
         id: "1-8-cineole",
@@ -236,6 +255,24 @@ pub static COMPOUND_GROUPS: &[CompoundGroups] = &[
         &[(Sub::Ch3, 3), (Sub::Ch2, 2), (Sub::Ch, 3), (Sub::Ch2co, 1)],
         "structure; same as the DDBST original-UNIFAC assignment of menthone, CAS 14073-97-3 (thermo 0.6.1)",
     ),
+    row(
+        "bornyl-acetate",
+        &[(Sub::Ch3, 3), (Sub::Ch2, 3), (Sub::Ch, 2), (Sub::C, 2), (Sub::Ch3coo, 1)],
+        DDBST,
+    ),
+    row(
+        "beta-thujone",
+        &[(Sub::Ch3, 3), (Sub::Ch2, 1), (Sub::Ch, 3), (Sub::C, 1), (Sub::Ch2co, 1)],
+        "structure; DDBST lists none under CAS 471-15-8, same as its original-UNIFAC assignment of \
+         3-thujanone (stereochemistry unstated), CAS 1125-12-8, and of alpha-thujone, CAS 546-80-5 \
+         (thermo 0.6.1), and as thermo's SMARTS fragmentation",
+    ),
+    row(
+        "alpha-terpineol",
+        &[(Sub::Ch3, 3), (Sub::Ch2, 3), (Sub::Ch, 1), (Sub::C, 1), (Sub::ChEqC, 1), (Sub::Oh, 1)],
+        DDBST,
+    ),
+    row("geranyl-acetate", &[(Sub::Ch3, 3), (Sub::Ch2, 3), (Sub::ChEqC, 2), (Sub::Ch3coo, 1)], DDBST),
     row("citronellal", &[(Sub::Ch3, 3), (Sub::Ch2, 3), (Sub::Ch, 1), (Sub::ChEqC, 1), (Sub::Cho, 1)], DDBST),
     row(
         "terpinen-4-ol",
@@ -262,6 +299,12 @@ pub static COMPOUND_GROUPS: &[CompoundGroups] = &[
     ),
     row("e-anethole", &[(Sub::Ch3, 1), (Sub::ChEqCh, 1), (Sub::Ach, 4), (Sub::Ac, 2), (Sub::Ch3o, 1)], DDBST),
     row(
+        "eugenyl-acetate",
+        &[(Sub::Ch2EqCh, 1), (Sub::Ach, 3), (Sub::Ac, 2), (Sub::Acch2, 1), (Sub::Ch3coo, 1), (Sub::Ch3o, 1)],
+        DDBST,
+    ),
+    row("cinnamaldehyde", &[(Sub::ChEqCh, 1), (Sub::Ach, 5), (Sub::Ac, 1), (Sub::Cho, 1)], DDBST),
+    row(
         "estragole",
         &[(Sub::Ch2EqCh, 1), (Sub::Ach, 4), (Sub::Ac, 1), (Sub::Acch2, 1), (Sub::Ch3o, 1)],
         DDBST,
@@ -275,8 +318,26 @@ pub static COMPOUND_GROUPS: &[CompoundGroups] = &[
     // Rose alcohols and other aromatics.
     row("geraniol", &[(Sub::Ch3, 3), (Sub::Ch2, 3), (Sub::ChEqC, 2), (Sub::Oh, 1)], DDBST),
     row("citronellol", &[(Sub::Ch3, 3), (Sub::Ch2, 4), (Sub::Ch, 1), (Sub::ChEqC, 1), (Sub::Oh, 1)], DDBST),
+    // Nerol is geraniol's cis isomer; UNIFAC groups do not tell the two apart.
+    row(
+        "nerol",
+        &[(Sub::Ch3, 3), (Sub::Ch2, 3), (Sub::ChEqC, 2), (Sub::Oh, 1)],
+        "structure; DDBST lists no original-UNIFAC assignment under CAS 106-25-2 nor 624-15-7 \
+         (isomers unstated); same as thermo 0.6.1's SMARTS fragmentation of its SMILES \
+         (chemicals 1.5.2) and as the DDBST assignment of geraniol",
+    ),
     row("2-phenylethanol", &[(Sub::Ch2, 1), (Sub::Ach, 5), (Sub::Acch2, 1), (Sub::Oh, 1)], DDBST),
     row("benzyl-alcohol", &[(Sub::Ach, 5), (Sub::Acch2, 1), (Sub::Oh, 1)], DDBST),
+    // The carbonyl carbon is bonded to the ring and the methyl to the oxygen: neither CH3COO nor
+    // CH2COO fits, and the ester is the COO group, its neighbours counted as AC and CH3.
+    row(
+        "methyl-salicylate",
+        &[(Sub::Ch3, 1), (Sub::Ach, 4), (Sub::Ac, 1), (Sub::Acoh, 1), (Sub::Coo, 1)],
+        DDBST,
+    ),
+    // Paraffins of the rose's wax (stearoptene).
+    row("nonadecane", &[(Sub::Ch3, 2), (Sub::Ch2, 17)], DDBST),
+    row("heneicosane", &[(Sub::Ch3, 2), (Sub::Ch2, 19)], DDBST),
 ];
 
 #[cfg(test)]
