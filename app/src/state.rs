@@ -92,6 +92,8 @@ pub struct Store {
     pub kept: RwSignal<Vec<KeptCopy>>,
     /// The text last read or written under each record's key: the same text is not written twice.
     last: StoredValue<Vec<(Kind, String)>>,
+    /// Texts that could not be written yet.
+    pending: StoredValue<Vec<(Kind, String)>>,
 }
 
 impl Store {
@@ -102,6 +104,7 @@ impl Store {
             held: RwSignal::new(Vec::new()),
             kept: RwSignal::new(Vec::new()),
             last: StoredValue::new(Vec::new()),
+            pending: StoredValue::new(Vec::new()),
         }
     }
 
@@ -191,22 +194,36 @@ impl Store {
     }
 
     /// Writes a record's text under its key, unless the same text is there already. A failure
-    /// is kept for the notice; the entries stay in memory.
+    /// is kept for the notice, with the text, which is tried again after the next save that
+    /// works; the entries stay in memory.
     pub fn save(&self, kind: Kind, text: String) {
         if self.last.with_value(|l| l.iter().any(|(k, t)| *k == kind && *t == text)) {
             return;
         }
+        if self.write(kind, text) {
+            let waiting: Vec<(Kind, String)> =
+                self.pending.with_value(|p| p.iter().filter(|(k, _)| *k != kind).cloned().collect());
+            for (k, t) in waiting {
+                self.write(k, t);
+            }
+        }
+    }
+
+    fn write(&self, kind: Kind, text: String) -> bool {
         let held = self.is_held(kind);
         let result = if held { self.release(kind) } else { Ok(()) }
             .and_then(|_| storage::set(kind.key(), &text).map_err(|e| e.words().to_string()));
+        self.pending.update_value(|p| p.retain(|(k, _)| *k != kind));
         match result {
             Ok(()) => {
                 self.remember(kind, text);
                 if self.errors.with_untracked(|e| e.iter().any(|(k, _)| *k == kind)) {
                     self.errors.update(|e| e.retain(|(k, _)| *k != kind));
                 }
+                true
             }
             Err(why) => {
+                self.pending.update_value(|p| p.push((kind, text)));
                 let now = (kind, why);
                 if !self.errors.with_untracked(|e| e.contains(&now)) {
                     self.errors.update(|e| {
@@ -214,6 +231,7 @@ impl Store {
                         e.push(now);
                     });
                 }
+                false
             }
         }
     }
@@ -290,7 +308,9 @@ impl AppState {
                     "station_pressure" => mode != PressureMode::Station,
                     "sea_level_pressure" => mode != PressureMode::SeaLevel,
                     "tub_water" => kind != CondenserKind::CoilInTub,
-                    "own_t1" | "own_p1" | "own_t2" | "own_p2" if own_law_kept && text.trim().is_empty() => true,
+                    "own_t1" | "own_p1" | "own_t2" | "own_p2" if own_law_kept && text.trim().is_empty() => {
+                        true
+                    }
                     k if OWN_COMPOUND_KEYS.contains(&k) => name.is_empty(),
                     _ => false,
                 };
@@ -369,7 +389,9 @@ impl AppState {
         // that only live on the page).
         Effect::new(move |_| {
             let unsaved = store.unsaved().is_some();
-            if let Some(root) = web_sys::window().and_then(|w| w.document()).and_then(|d| d.document_element()) {
+            if let Some(root) =
+                web_sys::window().and_then(|w| w.document()).and_then(|d| d.document_element())
+            {
                 let _ = if unsaved {
                     root.set_attribute("data-unsaved", "")
                 } else {
@@ -449,7 +471,8 @@ impl AppState {
                 MAX_PASTE_BYTES / 1024
             ));
         }
-        let s = storage::read_scenario(text).map_err(|e| format!("This is not a plan the page can read: {e}."))?;
+        let s = storage::read_scenario(text)
+            .map_err(|e| format!("This is not a plan the page can read: {e}."))?;
         self.apply(&s);
         Ok(())
     }
@@ -465,7 +488,9 @@ impl AppState {
     /// Everything the page holds, offered as a file.
     pub fn download_everything(&self) -> Result<(), String> {
         let text = self.scenario.with_untracked(|d| {
-            self.runs.with_untracked(|r| self.store.kept.with_untracked(|k| storage::everything(&d.scenario, r, k)))
+            self.runs.with_untracked(|r| {
+                self.store.kept.with_untracked(|k| storage::everything(&d.scenario, r, k))
+            })
         });
         storage::download(&format!("stillroom-everything-{}.json", storage::file_stamp()), &text)
     }

@@ -211,15 +211,15 @@ impl SaveError {
     pub fn words(&self) -> &'static str {
         match self {
             SaveError::Full => "this browser's storage for the page is full",
-            SaveError::Unavailable => "this browser is not letting the page keep data (storage off, or a private window)",
+            SaveError::Unavailable => {
+                "this browser is not letting the page keep data (storage off, or a private window)"
+            }
         }
     }
 }
 
 fn storage() -> Result<web_sys::Storage, SaveError> {
-    web_sys::window()
-        .and_then(|w| w.local_storage().ok().flatten())
-        .ok_or(SaveError::Unavailable)
+    web_sys::window().and_then(|w| w.local_storage().ok().flatten()).ok_or(SaveError::Unavailable)
 }
 
 /// The stored text under `key`.
@@ -437,7 +437,8 @@ mod tests {
     fn the_message_names_the_field_and_the_type_expected() {
         let e = read_scenario(r#"{"charge":{"plant_mass_kg":"lots"}}"#).unwrap_err();
         assert!(e.contains("charge.plant_mass_kg") && e.contains("f64"), "{e}");
-        let e = read_scenario(r#"{"record_version":1,"scenario":{"charge":{"plant_mas_kg":3}}}"#).unwrap_err();
+        let e =
+            read_scenario(r#"{"record_version":1,"scenario":{"charge":{"plant_mas_kg":3}}}"#).unwrap_err();
         assert!(e.contains("plant_mas_kg"), "{e}");
         let e = read_scenario(r#"{"record_version":7,"scenario":{}}"#).unwrap_err();
         assert!(e.contains("newer version"), "{e}");

@@ -6,23 +6,35 @@ use crate::storage::{self, KeptCopy, Kind};
 use leptos::prelude::*;
 
 /// What the page found in storage when it started, and whether the latest entries are saved.
+/// A failed save is told twice: in the notices at the top, and at once in a bar at the foot of
+/// the screen (wherever the grower is typing), which they may hide until the next new problem.
 #[component]
 pub fn StorageNotices() -> impl IntoView {
     let state = expect_context::<AppState>();
     let store = state.store;
     let failed = RwSignal::new(None::<String>);
     let unsaved = Memo::new(move |_| store.unsaved());
+    let hidden_for = RwSignal::new(None::<String>);
+    let toast = move || unsaved.get().is_some_and(|u| hidden_for.get().as_deref() != Some(u.as_str()));
     let dl = state.clone();
     let download = move |_| failed.set(dl.download_everything().err());
+    let download_too = download.clone();
     view! {
         <Show when=move || store.notice.get().is_some()>
             <p class="notice" role="status" data-out="storage_notice">{move || store.notice.get()}</p>
         </Show>
         <Show when=move || unsaved.get().is_some()>
-            <div class="notice unsaved" role="alert" data-out="save_problem">
+            <div class="notice unsaved" data-out="save_problem">
                 <p>{move || unsaved.get()}</p>
                 <button type="button" id="download-all" on:click=download.clone()>"Download everything"</button>
                 <p class="error">{move || failed.get()}</p>
+            </div>
+        </Show>
+        <Show when=toast>
+            <div class="save-toast" role="alert" data-out="save_toast">
+                <p>"Not saved in this browser. Your entries stay while this page is open."</p>
+                <button type="button" id="download-all-toast" on:click=download_too.clone()>"Download everything"</button>
+                <button type="button" class="quiet" id="save-toast-hide" on:click=move |_| hidden_for.set(unsaved.get_untracked())>"Hide"</button>
             </div>
         </Show>
     }
