@@ -168,7 +168,11 @@ async fn every_unreadable_record_is_kept_aside_reported_and_left_alone() -> Resu
         let notice = wait_text(c, "[data-out=storage_notice]", &["could not be read", why]).await;
         let notice = notice.map_err(|e| format!("{raw}: {e}"))?;
         assert!(notice.contains("kept aside"), "{raw}: {notice}");
-        assert_eq!(kept(c).await?, [raw.clone()], "{raw}: the copy is the stored text, unchanged");
+        assert_eq!(
+            kept(c).await?,
+            std::slice::from_ref(&raw),
+            "{raw}: the copy is the stored text, unchanged"
+        );
         wait_text(c, "[data-kept='0']", &[why]).await?;
         plans(c).await?;
         // The grower carries on; the copy stays, and a reload finds nothing new to complain of.
@@ -176,7 +180,7 @@ async fn every_unreadable_record_is_kept_aside_reported_and_left_alone() -> Resu
         wait_stored(c, "stillroom.scenario", |t| t.contains("\"plant_mass_kg\":21")).await?;
         reload(&page).await?;
         wait_gone(c, "[data-out=storage_notice]").await?;
-        assert_eq!(kept(c).await?, [raw.clone()], "{raw}: still kept after a reload");
+        assert_eq!(kept(c).await?, std::slice::from_ref(&raw), "{raw}: still kept after a reload");
         wait_text(c, "[data-kept='0']", &["kept aside"]).await?;
     }
     page.close().await

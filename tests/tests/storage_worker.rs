@@ -56,22 +56,18 @@ async fn any_address_in_scope_opens_offline_and_queries_are_not_conflated() -> R
     page.close().await
 }
 
-fn wait_until<'a>(
-    c: &'a Client,
-    script: &'a str,
-) -> impl std::future::Future<Output = Result<Value, BoxError>> + 'a {
-    async move {
-        let start = Instant::now();
-        loop {
-            let v = c.execute(script, vec![]).await.unwrap_or(Value::Null);
-            if v != Value::Null && v != json!(false) {
-                return Ok(v);
-            }
-            if start.elapsed() > WAIT {
-                return Err(format!("never true: {script}").into());
-            }
-            tokio::time::sleep(Duration::from_millis(100)).await;
+/// Polls `script` until it answers something other than null or false.
+async fn wait_until(c: &Client, script: &str) -> Result<Value, BoxError> {
+    let start = Instant::now();
+    loop {
+        let v = c.execute(script, vec![]).await.unwrap_or(Value::Null);
+        if v != Value::Null && v != json!(false) {
+            return Ok(v);
         }
+        if start.elapsed() > WAIT {
+            return Err(format!("never true: {script}").into());
+        }
+        tokio::time::sleep(Duration::from_millis(100)).await;
     }
 }
 
