@@ -94,6 +94,8 @@ pub struct Store {
     last: StoredValue<Vec<(Kind, String)>>,
     /// Texts that could not be written yet.
     pending: StoredValue<Vec<(Kind, String)>>,
+    /// Records found unreadable at start: (which, held in place).
+    found: StoredValue<Vec<(Kind, bool)>>,
 }
 
 impl Store {
@@ -105,6 +107,7 @@ impl Store {
             kept: RwSignal::new(Vec::new()),
             last: StoredValue::new(Vec::new()),
             pending: StoredValue::new(Vec::new()),
+            found: StoredValue::new(Vec::new()),
         }
     }
 
@@ -126,7 +129,6 @@ impl Store {
     /// Reads one record. Anything not exactly readable is copied aside and reported; if the
     /// copy cannot be made the record is held in place. `None` means: start from the default.
     fn load<T>(&self, kind: Kind, read: fn(&str) -> Result<T, String>) -> Option<T> {
-        let word = kind.word();
         let raw = match storage::get(kind.key()) {
             Ok(Some(raw)) => raw,
             Ok(None) => return None,
@@ -143,20 +145,39 @@ impl Store {
                 self.remember(kind, raw);
                 Some(v)
             }
-            Err(reason) => {
-                match storage::keep_aside(kind, &raw) {
-                    Ok(_) => self.say(format!(
-                        "Your saved {word} could not be read ({reason}). It was kept aside, listed under “Saved data the page could not read”; the page starts afresh."
-                    )),
-                    Err(_) => {
-                        self.held.update(|h| h.push(kind));
-                        self.say(format!(
-                            "Your saved {word} could not be read ({reason}), and there is no room to copy it aside. It stays where it is and the page will not save over it: download or delete it under “Saved data the page could not read”."
-                        ));
-                    }
+            Err(_) => {
+                let held = storage::keep_aside(kind, &raw).is_err();
+                if held {
+                    self.held.update(|h| h.push(kind));
                 }
+                self.found.update_value(|f| f.push((kind, held)));
                 None
             }
+        }
+    }
+
+    /// Tells, in one notice, which records could not be read and where they are now.
+    fn report_found(&self) {
+        let found = self.found.get_value();
+        // (names, "it" or "they", "it is" or "they are") of the records found held or not.
+        let names = |held: bool| {
+            let words: Vec<&str> = found.iter().filter(|(_, h)| *h == held).map(|(k, _)| k.word()).collect();
+            let one = words.len() == 1;
+            (words.join(" and "), if one { "it" } else { "them" }, if one { "it is" } else { "they are" })
+        };
+        let (aside, _, is) = names(false);
+        if !aside.is_empty() {
+            self.say(format!(
+                "Your saved {aside} could not be read, so the page starts afresh. Nothing is lost: {is} kept below, under “Saved data the page could not read”."
+            ));
+        }
+        let (held, them, is) = names(true);
+        if !held.is_empty() {
+            self.say(format!(
+                "Your saved {held} could not be read, and there is no room to copy {them} aside. {} where {} and the page will not save over {them}: download or delete {them} below, under “Saved data the page could not read”.",
+                if is == "it is" { "It stays" } else { "They stay" },
+                if is == "it is" { "it is" } else { "they are" },
+            ));
         }
     }
 
@@ -248,7 +269,7 @@ impl Store {
                 _ => "your latest changes".to_string(),
             };
             Some(format!(
-                "Not saved: {what} could not be kept in this browser ({}). They stay on the page while it is open; download everything to keep them.",
+                "Not saved: {what} ({}). They stay on this page while it is open: download everything to keep them.",
                 first.1
             ))
         })
@@ -273,6 +294,7 @@ impl AppState {
         let store = Store::new();
         let base = store.load(Kind::Plan, storage::read_scenario).unwrap_or_default();
         let logged = store.load(Kind::RunLog, storage::read_runs).unwrap_or_default();
+        store.report_found();
         store.refresh_kept();
         let runs = RwSignal::new(logged);
         let texts: Vec<RwSignal<String>> = FIELDS.iter().map(|_| RwSignal::new(String::new())).collect();

@@ -304,7 +304,8 @@ impl Drop for Page {
     }
 }
 
-/// Writes ever smaller chunks under `fill.N` keys until a single character no longer fits.
+/// Writes ever smaller chunks under `fill.N` keys, then grows the last one, until not a single
+/// character more fits.
 const FILL_STORAGE: &str = r#"
     let n = 0, stored = 0;
     for (let size = 1 << 20; size >= 1; size = Math.floor(size / 2)) {
@@ -313,6 +314,12 @@ const FILL_STORAGE: &str = r#"
         try { localStorage.setItem("fill." + n, chunk); n += 1; stored += size; }
         catch (e) { break; }
       }
+    }
+    // A new key costs its name too: grow the last value one character at a time as well.
+    const last = "fill." + (n - 1);
+    for (;;) {
+      try { localStorage.setItem(last, localStorage.getItem(last) + "x"); stored += 1; }
+      catch (e) { break; }
     }
     return stored;
 "#;
