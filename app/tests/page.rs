@@ -208,6 +208,16 @@ async fn a_logged_run_calibrates_the_next_plan_and_is_kept() {
     let _mounted = leptos::mount::mount_to(again.clone(), stillroom_app::App);
     leptos::task::tick().await;
     assert_eq!(again.query_selector_all("[data-run]").unwrap().length(), 1);
+    // A deleted run comes back with one tap, where it was.
+    let delete: HtmlElement = again.query_selector("[data-run] button").unwrap().unwrap().unchecked_into();
+    delete.click();
+    leptos::task::tick().await;
+    assert_eq!(again.query_selector_all("[data-run]").unwrap().length(), 0);
+    let undo: HtmlElement = again.query_selector("#run-undo").unwrap().unwrap().unchecked_into();
+    undo.click();
+    leptos::task::tick().await;
+    assert_eq!(again.query_selector_all("[data-run]").unwrap().length(), 1);
+    assert!(again.query_selector("#run-undo").unwrap().is_none());
 }
 
 #[wasm_bindgen_test]

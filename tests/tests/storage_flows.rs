@@ -350,3 +350,32 @@ async fn kept_copies_can_be_downloaded_opened_and_deleted_after_a_second_tap() -
     assert_eq!(kept(c).await?, [plan.to_string()]);
     page.close().await
 }
+
+#[tokio::test]
+async fn a_held_record_discarded_by_the_grower_frees_its_place_for_the_entries() -> Result<(), BoxError> {
+    let page = browser::open().await?;
+    start(&page).await?;
+    let c = &page.client;
+    c.execute(
+        "localStorage.clear(); localStorage.setItem('stillroom.scenario', '[' + 'z'.repeat(1500000));",
+        vec![],
+    )
+    .await?;
+    page.fill_storage().await?;
+    reload(&page).await?;
+    wait_text(c, "[data-key='stillroom.scenario']", &["still in its place"]).await?;
+    set_field(c, "plant_mass", "23").await?;
+    wait_text(c, "[data-out=save_problem]", &["Not saved"]).await?;
+    c.find(Locator::Id("save-toast-hide")).await?.click().await?;
+    c.find(Locator::Css("[data-key='stillroom.scenario'] .kept-delete")).await?.click().await?;
+    assert!(
+        stored(c, "stillroom.scenario").await?.is_some_and(|t| t.starts_with("[zzz")),
+        "deleted before Yes"
+    );
+    c.find(Locator::Css("[data-key='stillroom.scenario'] .kept-delete-yes")).await?.click().await?;
+    // The entries made meanwhile are saved at once, in the place it held.
+    wait_stored(c, "stillroom.scenario", |t| t.contains("\"plant_mass_kg\":23")).await?;
+    wait_gone(c, "[data-out=save_problem]").await?;
+    wait_gone(c, "#kept-aside").await?;
+    page.close().await
+}
