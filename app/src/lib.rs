@@ -3,8 +3,10 @@
 
 pub mod components;
 pub mod fields;
+pub mod records;
 pub mod state;
 pub mod storage;
+pub mod store;
 pub mod units;
 
 use components::cautions::Cautions;

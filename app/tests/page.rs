@@ -315,7 +315,7 @@ async fn a_pasted_plan_is_kept_as_written_ids_laws_and_every_digit() {
     let saved = LocalStorage::raw().get_item("stillroom.scenario").unwrap().unwrap();
     let saved: serde_json::Value = serde_json::from_str(&saved).unwrap();
     let pasted: serde_json::Value = serde_json::from_str(PASTED).unwrap();
-    let lost = stillroom_app::storage::lost_part(&pasted["scenario"], &saved["scenario"], "scenario");
+    let lost = stillroom_app::records::lost_part(&pasted["scenario"], &saved["scenario"], "scenario");
     assert_eq!(lost, None, "saved: {}", saved["scenario"]);
     assert_eq!(saved["scenario"]["custom_compounds"][0]["id"], "larkfield-resin");
     assert_eq!(saved["scenario"]["custom_compounds"][0]["vapour_pressure"]["a"], 7.123456789);

@@ -1,8 +1,9 @@
 //! Saved data the page could not read, and the notices about saved data: what was found at
 //! start, entries that could not be saved, and the way out (download everything).
 
+use crate::records::{self, Kind};
 use crate::state::AppState;
-use crate::storage::{self, KeptCopy, Kind};
+use crate::storage::{self, KeptCopy};
 use leptos::prelude::*;
 
 /// What the page found in storage when it started, and whether the latest entries are saved.
@@ -78,7 +79,7 @@ fn KeptLine(copy: KeptCopy, index: usize) -> impl IntoView {
     let open = move |_| {
         let text = storage::get(&open_key).ok().flatten().unwrap_or_default();
         let result = match kind {
-            Some(Kind::RunLog) => storage::read_runs(&text)
+            Some(Kind::RunLog) => records::read_runs(&text)
                 .map(|found| {
                     let n = found.len();
                     open_state.runs.update(|r| r.extend(found));
