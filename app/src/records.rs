@@ -103,12 +103,18 @@ fn shape(v: &Value) -> &'static str {
 }
 
 /// Deserialises with the failing field's path in the message (`charge.plant_mass_kg: invalid
-/// type: string "lots", expected f64`).
+/// type: string "lots", expected a number`).
 fn typed<T: serde::de::DeserializeOwned>(value: Value) -> Result<T, String> {
     serde_path_to_error::deserialize(value).map_err(|e| {
         let path = e.path().to_string();
-        let inner = e.into_inner();
-        if path.is_empty() || path == "." { inner.to_string() } else { format!("{path}: {inner}") }
+        // serde's words, with Rust's type names said plainly.
+        let inner = e
+            .into_inner()
+            .to_string()
+            .replace("expected f64", "expected a number")
+            .replace("expected u32", "expected a whole number")
+            .replace("expected u64", "expected a whole number");
+        if path.is_empty() || path == "." { inner } else { format!("{path}: {inner}") }
     })
 }
 
@@ -245,7 +251,7 @@ mod tests {
     #[wasm_bindgen_test]
     fn the_message_names_the_field_and_the_type_expected() {
         let e = read_scenario(r#"{"charge":{"plant_mass_kg":"lots"}}"#).unwrap_err();
-        assert!(e.contains("charge.plant_mass_kg") && e.contains("f64"), "{e}");
+        assert!(e.contains("charge.plant_mass_kg") && e.contains("expected a number"), "{e}");
         let e =
             read_scenario(r#"{"record_version":1,"scenario":{"charge":{"plant_mas_kg":3}}}"#).unwrap_err();
         assert!(e.contains("plant_mas_kg"), "{e}");

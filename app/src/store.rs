@@ -136,10 +136,7 @@ impl Store {
                 self.refresh_kept();
                 Ok(())
             }
-            Err(_) => Err(format!(
-                "your unreadable saved {} still sits where the page would save, with no room to copy it aside: download or delete it under “Saved data the page could not read”",
-                kind.word()
-            )),
+            Err(_) => Err(format!("the unreadable saved {} is in the way: see above", kind.word())),
         }
     }
 

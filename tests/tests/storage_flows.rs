@@ -211,7 +211,7 @@ async fn a_record_too_large_to_copy_aside_is_never_saved_over() -> Result<(), Bo
     plans(c).await?;
     // An edit is refused a place and said so; the unreadable original stays, byte for byte.
     set_field(c, "plant_mass", "21").await?;
-    wait_text(c, "[data-out=save_problem]", &["Not saved", "download or delete it"]).await?;
+    wait_text(c, "[data-out=save_problem]", &["Not saved", "in the way"]).await?;
     assert!(
         stored(c, "stillroom.scenario").await?.as_deref() == Some(big.as_str()),
         "the original was rewritten"
