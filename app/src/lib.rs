@@ -3,11 +3,15 @@
 
 pub mod components;
 pub mod fields;
+pub mod records;
 pub mod state;
+pub mod storage;
+pub mod store;
 pub mod units;
 
 use components::cautions::Cautions;
 use components::inputs::{EquipmentInputs, EssentialInputs};
+use components::kept_aside::{KeptAside, StorageNotices};
 use components::results::{Details, Headline, Warnings};
 use components::runlog::RunLog;
 use components::share::ScenarioText;
@@ -21,7 +25,6 @@ wasm_bindgen_test::wasm_bindgen_test_configure!(run_in_browser);
 #[component]
 pub fn App() -> impl IntoView {
     let state = AppState::new();
-    let notice = state.notice;
     provide_context(state);
     view! {
         <header class="masthead">
@@ -29,9 +32,8 @@ pub fn App() -> impl IntoView {
             <p class="lede">"Plan a steam-distillation run: steam, time, fuel, water, hydrosol and separator, from your crop and your site."</p>
         </header>
         <main class="page">
-            <Show when=move || notice.get().is_some()>
-                <p class="notice" role="status" data-out="storage_notice">{move || notice.get()}</p>
-            </Show>
+            <StorageNotices />
+            <KeptAside />
             // On a phone the answers follow the first inputs; on a wide screen inputs sit left.
             <div class="columns">
                 <div class="col-in"><EssentialInputs /></div>

@@ -1,27 +1,24 @@
 //! The page's state: one text signal per number field, the choices, the derived scenario and
-//! plan, and the only code that talks to storage.
+//! plan, and the storage sync (one effect per saved record, through [`crate::store`]).
 //!
 //! Flow: field texts and choices -> `scenario` (memo, units converted at the edge in
 //! [`crate::fields`]) -> `plan` (memo, the core's one entry point) -> view. The scenario is
 //! what is saved; the plan is always recomputed.
 
 use crate::fields::{FIELDS, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, text_for};
-use gloo_storage::{LocalStorage, Storage};
+use crate::records::{self, Kind};
+use crate::storage;
+use crate::store::Store;
 use leptos::prelude::*;
-use serde::{Deserialize, Serialize};
 use stillroom_core::calibration::RunRecord;
 use stillroom_core::heat::{Fuel, Metal};
-use stillroom_core::scenario::{BarometerReference, CondenserKind, OilComposition, OilPart, Scenario};
+use stillroom_core::scenario::{
+    BarometerReference, CondenserKind, CustomVapourPressure, OilComposition, OilPart, Scenario,
+};
 use stillroom_core::{Plan, ScenarioErrors, plan};
 
-/// Storage key of the saved scenario record.
-pub const SCENARIO_KEY: &str = "stillroom.scenario";
-/// Storage key of the grower's log of finished runs.
-pub const RUNS_KEY: &str = "stillroom.runs";
-/// Prefix of keys holding saved data that could not be read, kept so nothing is lost.
-pub const BACKUP_PREFIX: &str = "stillroom.unreadable.";
-/// Version of the stored record's envelope (the scenario inside carries its own version).
-pub const RECORD_VERSION: u32 = 1;
+/// The largest pasted text the page tries to read (a plan is a few kB).
+pub const MAX_PASTE_BYTES: usize = 256 * 1024;
 
 /// How the site's pressure is known.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -43,18 +40,9 @@ pub struct MixRow {
     pub key: u32,
     pub compound: RwSignal<String>,
     pub percent: RwSignal<String>,
-}
-
-#[derive(Serialize, Deserialize)]
-struct Record {
-    record_version: u32,
-    scenario: serde_json::Value,
-}
-
-#[derive(Serialize, Deserialize)]
-struct RunsRecord {
-    record_version: u32,
-    runs: Vec<RunRecord>,
+    /// The share as opened from a saved or pasted plan: used as it is while the text still
+    /// shows it, so opening a plan never rounds its numbers.
+    pub opened: Option<f64>,
 }
 
 /// The page's state, shared through context.
@@ -77,8 +65,8 @@ pub struct AppState {
     pub own_name: RwSignal<String>,
     /// The grower's log of finished runs.
     pub runs: RwSignal<Vec<RunRecord>>,
-    /// A message about saved data (for example that an unreadable copy was kept).
-    pub notice: RwSignal<Option<String>>,
+    /// Saved data: notices, kept-aside copies, the storage sync.
+    pub store: Store,
     pub scenario: Memo<Derived>,
     pub plan: Memo<Result<Plan, ScenarioErrors>>,
 }
@@ -91,87 +79,14 @@ pub struct Derived {
     pub text_errors: Vec<(String, TextError)>,
 }
 
-/// Copies unreadable saved text aside under a backup key and says where it went.
-fn keep_aside(what: &str, raw: &str) -> String {
-    let slug: String = what.chars().filter(|c| c.is_ascii_alphanumeric()).collect();
-    let key = format!("{BACKUP_PREFIX}{slug}.{}", js_sys_now());
-    if LocalStorage::raw().set_item(&key, raw).is_ok() {
-        format!(
-            "Your saved {what} could not be read, so the page starts afresh. A copy was kept in this browser under “{key}”."
-        )
-    } else {
-        format!("Your saved {what} could not be read, and there was no room to keep a copy.")
-    }
-}
-
-/// Reads the saved scenario. Anything unreadable is copied to a backup key and reported, and
-/// the invented example is used instead: saved data is never silently dropped.
-pub fn load() -> (Scenario, Option<String>) {
-    let raw = match LocalStorage::raw().get_item(SCENARIO_KEY) {
-        Ok(Some(raw)) => raw,
-        _ => return (Scenario::default(), None),
-    };
-    match migrate(&raw) {
-        Some(s) => (s, None),
-        None => (Scenario::default(), Some(keep_aside("plan", &raw))),
-    }
-}
-
-/// Reads the log of runs, with the same care as [`load`].
-pub fn load_runs() -> (Vec<RunRecord>, Option<String>) {
-    let raw = match LocalStorage::raw().get_item(RUNS_KEY) {
-        Ok(Some(raw)) => raw,
-        _ => return (Vec::new(), None),
-    };
-    match serde_json::from_str::<RunsRecord>(&raw) {
-        Ok(r) if r.record_version <= RECORD_VERSION => (r.runs, None),
-        _ => (Vec::new(), Some(keep_aside("run log", &raw))),
-    }
-}
-
-fn save_runs(runs: &[RunRecord]) {
-    let record = RunsRecord { record_version: RECORD_VERSION, runs: runs.to_vec() };
-    if let Ok(text) = serde_json::to_string(&record) {
-        let _ = LocalStorage::raw().set_item(RUNS_KEY, &text);
-    }
-}
-
-/// Turns a stored record of any version into today's scenario, or `None` if it is unreadable.
-///
-/// Record version 1 wraps the scenario; a bare scenario (the shape before records had an
-/// envelope) is read too. Fields added later are filled with defaults by the core's serde rules.
-pub fn migrate(raw: &str) -> Option<Scenario> {
-    let value: serde_json::Value = serde_json::from_str(raw).ok()?;
-    let scenario_value = match serde_json::from_value::<Record>(value.clone()) {
-        Ok(r) if r.record_version <= RECORD_VERSION => r.scenario,
-        Ok(_) => return None,
-        Err(_) => value,
-    };
-    serde_json::from_value::<Scenario>(scenario_value).ok()
-}
-
-fn save(scenario: &Scenario) {
-    if let Ok(value) = serde_json::to_value(scenario) {
-        let record = Record { record_version: RECORD_VERSION, scenario: value };
-        if let Ok(text) = serde_json::to_string(&record) {
-            let _ = LocalStorage::raw().set_item(SCENARIO_KEY, &text);
-        }
-    }
-}
-
-fn js_sys_now() -> u64 {
-    web_sys::window().and_then(|w| w.performance()).map(|p| p.time_origin() + p.now()).unwrap_or(0.0) as u64
-}
-
 impl AppState {
     /// Builds the state from saved data and wires the memos and the storage sync.
     pub fn new() -> AppState {
-        let (base, notice) = load();
-        let (logged, runs_notice) = load_runs();
-        let notice = match (notice, runs_notice) {
-            (Some(a), Some(b)) => Some(format!("{a} {b}")),
-            (a, b) => a.or(b),
-        };
+        let store = Store::new();
+        let base = store.load(Kind::Plan, records::read_scenario).unwrap_or_default();
+        let logged = store.load(Kind::RunLog, records::read_runs).unwrap_or_default();
+        store.report_found();
+        store.refresh_kept();
         let runs = RwSignal::new(logged);
         let texts: Vec<RwSignal<String>> = FIELDS.iter().map(|_| RwSignal::new(String::new())).collect();
         let base_signal = RwSignal::new(Scenario::default());
@@ -187,35 +102,61 @@ impl AppState {
 
         let field_texts = texts.clone();
         let scenario = Memo::new(move |_| {
-            let mut s = base_signal.get();
+            let opened = base_signal.get();
+            let mut s = opened.clone();
             let mode = pressure_mode.get();
             let kind = condenser_kind.get();
             s.site.barometer = None;
             let mut text_errors = Vec::new();
             let name = own_name.get().trim().to_string();
+            // A law the form has no fields for (Antoine coefficients) is kept as opened until
+            // the grower types measured points instead.
+            let own_law_kept = opened
+                .custom_compounds
+                .first()
+                .is_some_and(|c| matches!(c.vapour_pressure, CustomVapourPressure::Antoine { .. }));
             for (f, text) in FIELDS.iter().zip(&field_texts) {
+                let text = text.get();
                 let skip = match f.key {
                     "station_pressure" => mode != PressureMode::Station,
                     "sea_level_pressure" => mode != PressureMode::SeaLevel,
                     "tub_water" => kind != CondenserKind::CoilInTub,
+                    "own_t1" | "own_p1" | "own_t2" | "own_p2" if own_law_kept && text.trim().is_empty() => {
+                        true
+                    }
                     k if OWN_COMPOUND_KEYS.contains(&k) => name.is_empty(),
                     _ => false,
                 };
                 if skip {
                     continue;
                 }
-                match parse_number(&text.get()) {
+                // A field still showing the opened value keeps that value exactly (the text is
+                // rounded for reading; the number underneath is not).
+                if let Some(v) = (f.get)(&opened)
+                    && text == text_for(f, &opened)
+                {
+                    (f.set)(&mut s, Some(v));
+                    continue;
+                }
+                match parse_number(&text) {
                     Ok(Some(v)) => (f.set)(&mut s, Some((f.to_si)(v))),
                     Ok(None) if f.optional => (f.set)(&mut s, None),
                     Ok(None) => text_errors.push((f.key.to_string(), TextError::Empty)),
                     Err(e) => text_errors.push((f.key.to_string(), e)),
                 }
             }
+            // The own compound keeps the id it was opened with; a new one is called `own`.
             if name.is_empty() {
-                s.custom_compounds.clear();
+                if s.custom_compounds.first().is_some_and(|c| !c.name.trim().is_empty()) {
+                    s.custom_compounds.remove(0);
+                }
             } else if let Some(c) = s.custom_compounds.first_mut() {
-                c.id = OWN_COMPOUND_ID.to_string();
-                c.name = name;
+                if c.id.trim().is_empty() {
+                    c.id = OWN_COMPOUND_ID.to_string();
+                }
+                if c.name.trim() != name {
+                    c.name = name;
+                }
             }
             s.charge.crop = crop.get();
             let choice = oil_choice.get();
@@ -224,7 +165,12 @@ impl AppState {
                 MIXTURE_OIL => {
                     let mut parts = Vec::new();
                     for (i, row) in mixture.get().iter().enumerate() {
-                        match parse_number(&row.percent.get()) {
+                        let text = row.percent.get();
+                        if let Some(v) = row.opened.filter(|v| text == crate::units::plain(*v)) {
+                            parts.push(OilPart { compound: row.compound.get(), mass_percent: v });
+                            continue;
+                        }
+                        match parse_number(&text) {
                             Ok(Some(v)) => {
                                 parts.push(OilPart { compound: row.compound.get(), mass_percent: v })
                             }
@@ -244,8 +190,28 @@ impl AppState {
         let plan = Memo::new(move |_| scenario.with(|d| plan(&d.scenario)));
 
         // Storage sync, in this one place: save what the grower entered whenever it changes.
-        Effect::new(move |_| scenario.with(|d| save(&d.scenario)));
-        Effect::new(move |_| runs.with(|r| save_runs(r)));
+        Effect::new(move |_| {
+            let text = scenario.with(|d| records::scenario_text(&d.scenario));
+            store.save(Kind::Plan, text);
+        });
+        Effect::new(move |_| {
+            let text = runs.with(|r| records::runs_text(r));
+            store.save(Kind::RunLog, text);
+        });
+        // The page's shell reads this before applying an update (a reload would drop entries
+        // that only live on the page).
+        Effect::new(move |_| {
+            let unsaved = store.unsaved().is_some();
+            if let Some(root) =
+                web_sys::window().and_then(|w| w.document()).and_then(|d| d.document_element())
+            {
+                let _ = if unsaved {
+                    root.set_attribute("data-unsaved", "")
+                } else {
+                    root.remove_attribute("data-unsaved")
+                };
+            }
+        });
 
         let state = AppState {
             base: base_signal,
@@ -260,7 +226,7 @@ impl AppState {
             next_row_key,
             own_name,
             runs,
-            notice: RwSignal::new(notice),
+            store,
             scenario,
             plan,
         };
@@ -295,6 +261,7 @@ impl AppState {
                     key: start + i as u32,
                     compound: RwSignal::new(p.compound.clone()),
                     percent: RwSignal::new(crate::units::plain(p.mass_percent)),
+                    opened: Some(p.mass_percent),
                 })
                 .collect(),
             _ => Vec::new(),
@@ -307,18 +274,46 @@ impl AppState {
         self.condenser_kind.set(s.condenser.kind);
     }
 
-    /// Reads a pasted scenario (JSON, any saved version) and shows it; an error in words if it
-    /// cannot be read.
+    /// Reads a pasted scenario (JSON, this or an earlier saved version) and shows it; the
+    /// parser's message, naming the field, if it cannot be read.
     pub fn import(&self, text: &str) -> Result<(), String> {
-        match migrate(text) {
-            Some(s) => {
-                self.apply(&s);
-                Ok(())
-            }
-            None => {
-                Err("This is not a scenario the page can read: check that the whole text was copied.".into())
-            }
+        if text.len() > MAX_PASTE_BYTES {
+            return Err(format!(
+                "This text is {} kB; the page opens plans of up to {} kB (a plan is usually under 10 kB). Check that only the plan was copied.",
+                text.len().div_ceil(1024),
+                MAX_PASTE_BYTES / 1024
+            ));
         }
+        let s = records::read_scenario(text)
+            .map_err(|e| format!("This is not a plan the page can read: {e}."))?;
+        self.apply(&s);
+        Ok(())
+    }
+
+    /// The id the picker offers for the grower's own compound: the opened one's, or `own`.
+    pub fn own_id(&self) -> String {
+        self.base
+            .with(|b| b.custom_compounds.first().map(|c| c.id.clone()))
+            .filter(|id| !id.trim().is_empty())
+            .unwrap_or_else(|| OWN_COMPOUND_ID.to_string())
+    }
+
+    /// Everything the page holds, offered as a file.
+    pub fn download_everything(&self) -> Result<(), String> {
+        let text = self.scenario.with_untracked(|d| {
+            self.runs.with_untracked(|r| {
+                self.store.kept.with_untracked(|k| storage::everything(&d.scenario, r, k))
+            })
+        });
+        storage::download(&format!("stillroom-everything-{}.json", storage::file_stamp()), &text)
+    }
+
+    /// Saves what the page shows now (after a kept copy was deleted, say, to try again).
+    pub fn save_now(&self) {
+        let plan = self.scenario.with_untracked(|d| records::scenario_text(&d.scenario));
+        self.store.save(Kind::Plan, plan);
+        let runs = self.runs.with_untracked(|r| records::runs_text(r));
+        self.store.save(Kind::RunLog, runs);
     }
 
     /// Adds a line to the oil analysis.
@@ -329,6 +324,7 @@ impl AppState {
             key,
             compound: RwSignal::new(compound.to_string()),
             percent: RwSignal::new(String::new()),
+            opened: None,
         };
         self.mixture.update(|rows| rows.push(row));
     }
@@ -348,24 +344,5 @@ impl AppState {
 impl Default for AppState {
     fn default() -> Self {
         Self::new()
-    }
-}
-
-#[cfg(test)]
-mod tests {
-    use super::*;
-    use wasm_bindgen_test::wasm_bindgen_test;
-
-    #[wasm_bindgen_test]
-    fn a_bare_scenario_from_before_the_envelope_still_loads() {
-        let bare = r#"{"charge":{"plant_mass_kg":42.0}}"#;
-        assert_eq!(migrate(bare).unwrap().charge.plant_mass_kg, 42.0);
-    }
-
-    #[wasm_bindgen_test]
-    fn corrupt_or_future_records_are_refused_not_guessed() {
-        assert!(migrate("{not json").is_none());
-        assert!(migrate(r#"{"record_version":99,"scenario":{}}"#).is_none());
-        assert!(migrate(r#"{"charge":{"plant_mass_kg":"lots"}}"#).is_none());
     }
 }

@@ -210,6 +210,16 @@ async fn a_logged_run_calibrates_the_next_plan_and_is_kept() {
     let _mounted = leptos::mount::mount_to(again.clone(), stillroom_app::App);
     leptos::task::tick().await;
     assert_eq!(again.query_selector_all("[data-run]").unwrap().length(), 1);
+    // A deleted run comes back with one tap, where it was.
+    let delete: HtmlElement = again.query_selector("[data-run] button").unwrap().unwrap().unchecked_into();
+    delete.click();
+    leptos::task::tick().await;
+    assert_eq!(again.query_selector_all("[data-run]").unwrap().length(), 0);
+    let undo: HtmlElement = again.query_selector("#run-undo").unwrap().unwrap().unchecked_into();
+    undo.click();
+    leptos::task::tick().await;
+    assert_eq!(again.query_selector_all("[data-run]").unwrap().length(), 1);
+    assert!(again.query_selector("#run-undo").unwrap().is_none());
 }
 
 #[wasm_bindgen_test]
@@ -248,7 +258,7 @@ async fn a_plan_copied_as_text_opens_again_and_bad_text_is_refused() {
     leptos::task::tick().await;
     load.click();
     leptos::task::tick().await;
-    assert!(text_of(&host, "#scenario-in-error").contains("not a scenario"));
+    assert!(text_of(&host, "#scenario-in-error").contains("not a plan the page can read"));
     paste.set_value(&copied);
     paste.dispatch_event(&Event::new("input").unwrap()).unwrap();
     leptos::task::tick().await;
@@ -259,4 +269,88 @@ async fn a_plan_copied_as_text_opens_again_and_bad_text_is_refused() {
     let mass: HtmlInputElement = host.query_selector("#f-plant_mass").unwrap().unwrap().unchecked_into();
     assert_eq!(mass.value(), "64");
     assert_eq!(text_of(&host, "#scenario-in-error"), "");
+}
+
+/// Opens the plan-as-text section and pastes `text` into it.
+async fn paste(host: &HtmlElement, text: &str) {
+    let details: web_sys::HtmlDetailsElement =
+        host.query_selector("details.share").unwrap().unwrap().unchecked_into();
+    if !details.open() {
+        details.set_open(true);
+        details.dispatch_event(&Event::new("toggle").unwrap()).unwrap();
+        leptos::task::tick().await;
+    }
+    let area: web_sys::HtmlTextAreaElement =
+        host.query_selector("#scenario-in").unwrap().unwrap().unchecked_into();
+    area.set_value(text);
+    area.dispatch_event(&Event::new("input").unwrap()).unwrap();
+    leptos::task::tick().await;
+    let load: HtmlElement = host.query_selector("#scenario-load").unwrap().unwrap().unchecked_into();
+    load.click();
+    leptos::task::tick().await;
+    leptos::task::tick().await;
+}
+
+/// An invented lab sheet: an own compound with an Antoine law (the numbers are made up for
+/// the test, not a real compound's), and values with more digits than the form shows.
+const PASTED: &str = r#"{"record_version":1,"scenario":{
+  "charge":{"plant_mass_kg":12.3456789},
+  "run":{"rate_constant_per_min":0.0512345678},
+  "oil":{"composition":{"kind":"mixture","parts":[
+     {"compound":"linalool","mass_percent":33.33333333},
+     {"compound":"larkfield-resin","mass_percent":66.66666667}]}},
+  "custom_compounds":[{"id":"larkfield-resin","name":"Larkfield resin","molar_mass_kg_per_mol":0.2012345,
+     "liquid_density_kg_per_m3":987.654321,"water_solubility_kg_per_m3":0.0123456789,
+     "vapour_pressure":{"kind":"antoine","a":7.123456789,"b":1850.5,"c":-60.25,"log":"log10",
+       "pressure_unit":"mm_hg","temperature_unit":"kelvin","t_min_c":120,"t_max_c":260}}]}}"#;
+
+#[wasm_bindgen_test]
+async fn a_pasted_plan_is_kept_as_written_ids_laws_and_every_digit() {
+    clear_store();
+    let host = fresh_host();
+    let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    paste(&host, PASTED).await;
+    assert_eq!(text_of(&host, "#scenario-in-error"), "");
+    leptos::task::tick().await;
+    // What the page saves holds every part of what was pasted, unchanged.
+    let saved = LocalStorage::raw().get_item("stillroom.scenario").unwrap().unwrap();
+    let saved: serde_json::Value = serde_json::from_str(&saved).unwrap();
+    let pasted: serde_json::Value = serde_json::from_str(PASTED).unwrap();
+    let lost = stillroom_app::records::lost_part(&pasted["scenario"], &saved["scenario"], "scenario");
+    assert_eq!(lost, None, "saved: {}", saved["scenario"]);
+    assert_eq!(saved["scenario"]["custom_compounds"][0]["id"], "larkfield-resin");
+    assert_eq!(saved["scenario"]["custom_compounds"][0]["vapour_pressure"]["a"], 7.123456789);
+    assert_eq!(saved["scenario"]["charge"]["plant_mass_kg"], 12.3456789);
+    let first: web_sys::HtmlSelectElement =
+        host.query_selector("select[id^=mix-compound-]").unwrap().unwrap().unchecked_into();
+    assert_eq!(first.value(), "linalool");
+    // Typing over a field changes that field only.
+    type_into(&host, "plant_mass", "20").await;
+    leptos::task::tick().await;
+    let saved = LocalStorage::raw().get_item("stillroom.scenario").unwrap().unwrap();
+    let saved: serde_json::Value = serde_json::from_str(&saved).unwrap();
+    assert_eq!(saved["scenario"]["charge"]["plant_mass_kg"], 20.0);
+    assert_eq!(saved["scenario"]["run"]["rate_constant_per_min"], 0.0512345678);
+    assert_eq!(saved["scenario"]["oil"]["composition"]["parts"][1]["mass_percent"], 66.66666667);
+}
+
+#[wasm_bindgen_test]
+async fn the_paste_box_names_the_field_and_the_type_and_refuses_huge_text() {
+    clear_store();
+    let host = fresh_host();
+    let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
+    leptos::task::tick().await;
+    paste(&host, r#"{"record_version":1,"scenario":{"charge":{"plant_mass_kg":"lots"}}}"#).await;
+    let e = text_of(&host, "#scenario-in-error");
+    assert!(e.contains("scenario.charge.plant_mass_kg") && e.contains("expected a number"), "{e}");
+    paste(&host, r#"{"record_version":1,"scenario":{"charge":{"plant_mas_kg":3}}}"#).await;
+    let e = text_of(&host, "#scenario-in-error");
+    assert!(e.contains("plant_mas_kg"), "{e}");
+    let huge = format!("{{\"note\":\"{}\"}}", "x".repeat(300 * 1024));
+    paste(&host, &huge).await;
+    let e = text_of(&host, "#scenario-in-error");
+    assert!(e.contains("301 kB") && e.contains("256 kB"), "{e}");
+    let mass: HtmlInputElement = host.query_selector("#f-plant_mass").unwrap().unwrap().unchecked_into();
+    assert_eq!(mass.value(), "15", "a refused paste leaves the form as it was");
 }

@@ -180,9 +180,13 @@ pub struct Page {
 /// Serve `dist/`, start ChromeDriver and Chromium, and open a session at the phone viewport. The
 /// browser is on `about:blank`; call [`Page::goto`].
 pub async fn open() -> Result<Page, BoxError> {
-    let dist = dist()?;
+    open_at(&dist()?).await
+}
+
+/// Like [`open`], serving `dir` (a copy of `dist/` a test may change) instead of `dist/`.
+pub async fn open_at(dist: &std::path::Path) -> Result<Page, BoxError> {
     let turn = ONE_AT_A_TIME.lock().await;
-    let server = Server::start(&dist)?;
+    let server = Server::start(dist)?;
     let base = server.url();
     let profile = fresh_dir("chromium-profile")?;
     let port = free_port()?;
@@ -247,6 +251,32 @@ impl Page {
         Ok(self.client.issue_cmd(Cdp { cmd: cmd.to_string(), params }).await?)
     }
 
+    /// Run `source` in every document this session opens from now on, before the page's own
+    /// scripts (DevTools `Page.addScriptToEvaluateOnNewDocument`): to watch or break the page
+    /// from its very start.
+    pub async fn before_load(&self, source: &str) -> Result<(), BoxError> {
+        self.cdp("Page.addScriptToEvaluateOnNewDocument", json!({ "source": source })).await?;
+        Ok(())
+    }
+
+    /// Fill `localStorage` with filler keys (`fill.N`) until not one more character fits; the
+    /// number of characters stored.
+    pub async fn fill_storage(&self) -> Result<u64, BoxError> {
+        let v = self.client.execute(FILL_STORAGE, vec![]).await?;
+        v.as_u64().ok_or_else(|| format!("filling storage answered {v}").into())
+    }
+
+    /// Remove the filler keys [`Page::fill_storage`] wrote.
+    pub async fn unfill_storage(&self) -> Result<(), BoxError> {
+        self.client
+            .execute(
+                "Object.keys(localStorage).filter((k) => k.startsWith('fill.')).forEach((k) => localStorage.removeItem(k));",
+                vec![],
+            )
+            .await?;
+        Ok(())
+    }
+
     /// Stop serving: from now on only what the browser has cached can load.
     pub fn stop_server(&mut self) {
         self.server = None;
@@ -273,6 +303,26 @@ impl Drop for Page {
         let _ = std::fs::remove_dir_all(&self.profile);
     }
 }
+
+/// Writes ever smaller chunks under `fill.N` keys, then grows the last one, until not a single
+/// character more fits.
+const FILL_STORAGE: &str = r#"
+    let n = 0, stored = 0;
+    for (let size = 1 << 20; size >= 1; size = Math.floor(size / 2)) {
+      const chunk = "x".repeat(size);
+      for (;;) {
+        try { localStorage.setItem("fill." + n, chunk); n += 1; stored += size; }
+        catch (e) { break; }
+      }
+    }
+    // A new key costs its name too: grow the last value one character at a time as well.
+    const last = "fill." + (n - 1);
+    for (;;) {
+      try { localStorage.setItem(last, localStorage.getItem(last) + "x"); stored += 1; }
+      catch (e) { break; }
+    }
+    return stored;
+"#;
 
 /// Read a file of the built page as text.
 pub fn read_dist(name: &str) -> Result<String, BoxError> {

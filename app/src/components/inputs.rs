@@ -1,7 +1,7 @@
 //! The form: small components, one concern each. They read and write the state's signals and
 //! never compute physics.
 
-use crate::fields::{NumField, OWN_COMPOUND_ID, TextError, field};
+use crate::fields::{NumField, TextError, field};
 use crate::state::{AppState, CROP_OIL, MIXTURE_OIL, MixRow, PressureMode};
 use crate::units;
 use leptos::prelude::*;
@@ -156,7 +156,7 @@ fn compound_options(state: &AppState) -> Vec<(String, String)> {
         COMPOUNDS.iter().map(|c| (c.id.to_string(), c.name.to_string())).collect();
     let own = state.own_name.get();
     if !own.trim().is_empty() {
-        list.push((OWN_COMPOUND_ID.to_string(), format!("{} (yours)", own.trim())));
+        list.push((state.own_id(), format!("{} (yours)", own.trim())));
     }
     list
 }

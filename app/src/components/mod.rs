@@ -2,6 +2,7 @@
 
 pub mod cautions;
 pub mod inputs;
+pub mod kept_aside;
 pub mod results;
 pub mod runlog;
 pub mod share;

@@ -32,6 +32,14 @@ pub fn RunLog() -> impl IntoView {
     let minutes = RwSignal::new(String::new());
     let oil_ml = RwSignal::new(String::new());
     let problem = RwSignal::new(None::<String>);
+    // The run deleted last and where it was: one tap brings it back (a wet thumb can hit ✕).
+    let removed = RwSignal::new(None::<(usize, RunRecord)>);
+    let undo = move |_| {
+        if let Some((i, run)) = removed.get_untracked() {
+            runs.update(|list| list.insert(i.min(list.len()), run));
+            removed.set(None);
+        }
+    };
 
     let log_state = state.clone();
     let log = move |_| {
@@ -122,11 +130,20 @@ pub fn RunLog() -> impl IntoView {
                                 crop_name(&r.crop), units::sig3(r.plant_mass_kg), units::sig3(r.distilling_time_s / 60.0),
                                 units::sig3(r.oil_volume_m3 * 1e6), implied)}</span>
                             <button type="button" class="quiet" aria-label="Delete this run"
-                                on:click=move |_| runs.update(|list| { if i < list.len() { list.remove(i); } })>"✕"</button>
+                                on:click=move |_| runs.update(|list| {
+                                    if i < list.len() {
+                                        removed.set(Some((i, list.remove(i))));
+                                    }
+                                })>"✕"</button>
                         </li>
                     }
                 }).collect_view()}
             </ul>
+            <Show when=move || removed.with(|r| r.is_some())>
+                <p class="hint run-removed" data-out="run_removed">"Run deleted. "
+                    <button type="button" id="run-undo" class="quiet" on:click=undo>"Undo"</button>
+                </p>
+            </Show>
         </section>
     }
 }

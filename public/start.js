@@ -1,0 +1,65 @@
+// Stillroom start-up: starts the page's wasm module and looks after the offline copy.
+//
+// A file of its own (not a script inside index.html) so the page's Content-Security-Policy
+// needs no 'unsafe-inline'.
+import init from "./stillroom_app.js";
+
+init({ module_or_path: new URL("./stillroom_app_bg.wasm", import.meta.url) }).catch((err) => {
+  const p = document.createElement("p");
+  p.className = "notice";
+  p.textContent = "Stillroom could not start: " + err;
+  document.body.append(p);
+  console.error(err);
+});
+
+// A new version's service worker installs in the background and then waits. The grower is told,
+// and it takes over only when they tap "Use the new version" (never in the middle of an entry);
+// the page then reloads once, on the new version.
+let applying = false;
+
+function offer(worker) {
+  const bar = document.getElementById("update");
+  if (!bar) return;
+  bar.hidden = false;
+  document.getElementById("update-apply").onclick = () => {
+    // The page marks <html data-unsaved> while entries could not be saved: a reload would drop them.
+    if (
+      document.documentElement.hasAttribute("data-unsaved") &&
+      !window.confirm("Your latest entries are not saved in this browser. Download everything first, or they are lost when the page reloads. Reload anyway?")
+    ) {
+      return;
+    }
+    applying = true;
+    worker.postMessage({ type: "apply-update" });
+  };
+  document.getElementById("update-later").onclick = () => {
+    bar.hidden = true;
+  };
+}
+
+function watch(reg) {
+  if (reg.waiting && navigator.serviceWorker.controller) offer(reg.waiting);
+  reg.addEventListener("updatefound", () => {
+    const worker = reg.installing;
+    if (!worker) return;
+    worker.addEventListener("statechange", () => {
+      // With no controller this is the first install: nothing to replace, nothing to say.
+      if (worker.state === "installed" && navigator.serviceWorker.controller) offer(worker);
+    });
+  });
+  navigator.serviceWorker.addEventListener("controllerchange", () => {
+    if (applying) {
+      applying = false;
+      window.location.reload();
+    }
+  });
+}
+
+if ("serviceWorker" in navigator) {
+  window.addEventListener("load", () => {
+    navigator.serviceWorker
+      .register("./sw.js")
+      .then(watch)
+      .catch((err) => console.warn("offline cache off:", err));
+  });
+}
