@@ -28,8 +28,13 @@ impl SaveError {
     }
 }
 
+/// The page's `localStorage`, through gloo-storage. gloo's handle throws when the browser keeps
+/// no storage (switched off, some private modes), which would kill the page: so web-sys asks
+/// first whether there is one.
 fn storage() -> Result<web_sys::Storage, SaveError> {
-    web_sys::window().and_then(|w| w.local_storage().ok().flatten()).ok_or(SaveError::Unavailable)
+    use gloo_storage::Storage as _;
+    let available = web_sys::window().and_then(|w| w.local_storage().ok().flatten()).is_some();
+    if available { Ok(gloo_storage::LocalStorage::raw()) } else { Err(SaveError::Unavailable) }
 }
 
 /// The stored text under `key`.

@@ -35,6 +35,8 @@ async fn the_policy_is_stated_once_and_the_same_everywhere() -> Result<(), BoxEr
     assert!(!html.contains(" style="), "an inline style attribute");
     let guide = std::fs::read_to_string(xtask::workspace_root().join("DEVELOPERS.md"))?;
     assert!(guide.contains(POLICY), "DEVELOPERS.md does not state the policy");
+    // The served header is the same policy plus frame-ancestors (honoured only as a header).
+    assert_eq!(xtask::serve::CONTENT_SECURITY_POLICY, format!("{POLICY}; frame-ancestors 'none'"));
     Ok(())
 }
 

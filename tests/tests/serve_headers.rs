@@ -10,7 +10,7 @@ use xtask::serve::Server;
 /// The page's policy, written out here independently of `xtask::serve::CONTENT_SECURITY_POLICY`
 /// (the project's chosen policy: own origin only, wasm compilation allowed, no framing).
 const POLICY: &str = "default-src 'none'; script-src 'self' 'wasm-unsafe-eval'; style-src 'self'; \
-                      img-src 'self' data:; connect-src 'self'; manifest-src 'self'; worker-src 'self'; \
+                      img-src 'self'; connect-src 'self'; manifest-src 'self'; worker-src 'self'; \
                       base-uri 'none'; form-action 'none'; frame-ancestors 'none'";
 
 fn security_headers(r: &Raw, what: &str) {

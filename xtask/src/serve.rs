@@ -35,11 +35,12 @@ use tower_http::services::fs::{
 };
 use tower_service::Service;
 
-/// The page's Content-Security-Policy: its own scripts, styles, images (and `data:` images), wasm
-/// compilation, its manifest and service worker; nothing else, no framing, no forms, no `<base>`.
-/// The page carries the same policy in a `<meta>` tag; a host should send this header.
+/// The page's Content-Security-Policy: its own scripts, styles and images, wasm compilation, its
+/// manifest and service worker; nothing else, no forms, no `<base>`, no framing. The page carries
+/// the same policy in a `<meta>` tag (app/index.html), less `frame-ancestors`, which browsers
+/// honour only as a header; a host should send this header.
 pub const CONTENT_SECURITY_POLICY: &str = "default-src 'none'; script-src 'self' 'wasm-unsafe-eval'; \
-     style-src 'self'; img-src 'self' data:; connect-src 'self'; manifest-src 'self'; \
+     style-src 'self'; img-src 'self'; connect-src 'self'; manifest-src 'self'; \
      worker-src 'self'; base-uri 'none'; form-action 'none'; frame-ancestors 'none'";
 
 /// The build keeps file names stable (the service worker lists them), so no name is
