@@ -94,8 +94,9 @@ async fn the_page_in_use_breaks_no_rule_of_its_policy_and_asks_no_other_origin()
     .await?;
     tokio::time::sleep(Duration::from_millis(200)).await;
     let seen = violations(c).await?;
-    assert_eq!(seen.len(), 1, "{seen:?}");
-    assert!(seen[0].starts_with("script-src"), "{seen:?}");
+    // One report per policy in force: the meta tag's and the served header's.
+    assert!((1..=2).contains(&seen.len()), "{seen:?}");
+    assert!(seen.iter().all(|v| v.starts_with("script-src")), "{seen:?}");
     assert_eq!(c.execute("return window.__ran === undefined;", vec![]).await?, json!(true));
     page.close().await
 }
