@@ -5,7 +5,10 @@
 //! [`crate::fields`]) -> `plan` (memo, the core's one entry point) -> view. The scenario is
 //! what is saved; the plan is always recomputed.
 
-use crate::fields::{FIELDS, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, text_for};
+use crate::fields::{
+    FIELDS, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, convert_text, parse_number, text_for_in,
+};
+use crate::units::UnitSystem;
 use gloo_storage::{LocalStorage, Storage};
 use leptos::prelude::*;
 use serde::{Deserialize, Serialize};
@@ -20,6 +23,10 @@ pub const SCENARIO_KEY: &str = "stillroom.scenario";
 pub const RUNS_KEY: &str = "stillroom.runs";
 /// Prefix of keys holding saved data that could not be read, kept so nothing is lost.
 pub const BACKUP_PREFIX: &str = "stillroom.unreadable.";
+/// Storage key of the grower's choice of units (metric or US customary).
+pub const UNITS_KEY: &str = "stillroom.units";
+/// Storage key of the form's texts as typed, even when they are not yet valid.
+pub const DRAFT_KEY: &str = "stillroom.draft";
 /// Version of the stored record's envelope (the scenario inside carries its own version).
 pub const RECORD_VERSION: u32 = 1;
 
@@ -81,6 +88,18 @@ pub struct AppState {
     pub notice: RwSignal<Option<String>>,
     pub scenario: Memo<Derived>,
     pub plan: Memo<Result<Plan, ScenarioErrors>>,
+    /// The units the form and the answers are shown in.
+    pub units: RwSignal<UnitSystem>,
+    /// The last plan that matched the whole form (kept on screen while the form has a fault),
+    /// with the scenario it was made for; `None` until one is made.
+    pub good: Memo<Option<(Scenario, Plan)>>,
+    /// The plan on screen: the last good one, or the current error when there was none.
+    pub shown: Memo<Result<Plan, ScenarioErrors>>,
+    /// Whether the plan on screen no longer matches the form.
+    pub stale: Memo<bool>,
+    /// Per field, the text a unit switch wrote and the exact SI value it stands for, so a
+    /// switch (and a switch back) leaves the scenario exactly as it was.
+    pinned: StoredValue<Vec<Option<(String, f64)>>>,
 }
 
 /// The scenario built from the form, with the texts that could not be read.
@@ -159,6 +178,50 @@ fn save(scenario: &Scenario) {
     }
 }
 
+/// Reads the saved choice of units; anything else is metric.
+pub fn load_units() -> UnitSystem {
+    LocalStorage::raw()
+        .get_item(UNITS_KEY)
+        .ok()
+        .flatten()
+        .and_then(|k| UnitSystem::from_key(&k))
+        .unwrap_or_default()
+}
+
+fn save_units(units: UnitSystem) {
+    let _ = LocalStorage::raw().set_item(UNITS_KEY, units.key());
+}
+
+/// The form's texts as typed, by field key, in the units they were typed in.
+#[derive(Serialize, Deserialize, Default)]
+struct Draft {
+    units: String,
+    texts: std::collections::BTreeMap<String, String>,
+}
+
+/// Reads the draft texts typed under `units`; a draft in other units or unreadable is ignored
+/// (the saved scenario holds every valid value, so nothing valid is lost).
+fn load_draft(units: UnitSystem) -> std::collections::BTreeMap<String, String> {
+    LocalStorage::raw()
+        .get_item(DRAFT_KEY)
+        .ok()
+        .flatten()
+        .and_then(|raw| serde_json::from_str::<Draft>(&raw).ok())
+        .filter(|d| d.units == units.key())
+        .map(|d| d.texts)
+        .unwrap_or_default()
+}
+
+fn save_draft(units: UnitSystem, texts: &[RwSignal<String>]) {
+    let draft = Draft {
+        units: units.key().to_string(),
+        texts: FIELDS.iter().zip(texts).map(|(f, t)| (f.key.to_string(), t.get())).collect(),
+    };
+    if let Ok(text) = serde_json::to_string(&draft) {
+        let _ = LocalStorage::raw().set_item(DRAFT_KEY, &text);
+    }
+}
+
 fn js_sys_now() -> u64 {
     web_sys::window().and_then(|w| w.performance()).map(|p| p.time_origin() + p.now()).unwrap_or(0.0) as u64
 }
@@ -184,6 +247,8 @@ impl AppState {
         let fuel = RwSignal::new(base.boiler.fuel);
         let metal = RwSignal::new(base.still.metal);
         let condenser_kind = RwSignal::new(base.condenser.kind);
+        let units = RwSignal::new(load_units());
+        let pinned = StoredValue::new(vec![None; FIELDS.len()]);
 
         let field_texts = texts.clone();
         let scenario = Memo::new(move |_| {
@@ -193,7 +258,7 @@ impl AppState {
             s.site.barometer = None;
             let mut text_errors = Vec::new();
             let name = own_name.get().trim().to_string();
-            for (f, text) in FIELDS.iter().zip(&field_texts) {
+            for (i, (f, text)) in FIELDS.iter().zip(&field_texts).enumerate() {
                 let skip = match f.key {
                     "station_pressure" => mode != PressureMode::Station,
                     "sea_level_pressure" => mode != PressureMode::SeaLevel,
@@ -204,8 +269,15 @@ impl AppState {
                 if skip {
                     continue;
                 }
-                match parse_number(&text.get()) {
-                    Ok(Some(v)) => (f.set)(&mut s, Some((f.to_si)(v))),
+                let text = text.get();
+                let exact = pinned.with_value(|p| p[i].as_ref().filter(|(t, _)| *t == text).map(|(_, v)| *v));
+                if let Some(si) = exact {
+                    (f.set)(&mut s, Some(si));
+                    continue;
+                }
+                match parse_number(&text) {
+                    // Units read untracked: a switch rewrites the texts first (see `set_units`).
+                    Ok(Some(v)) => (f.set)(&mut s, Some(f.to_si_in(units.get_untracked(), v))),
                     Ok(None) if f.optional => (f.set)(&mut s, None),
                     Ok(None) => text_errors.push((f.key.to_string(), TextError::Empty)),
                     Err(e) => text_errors.push((f.key.to_string(), e)),
@@ -242,10 +314,25 @@ impl AppState {
             Derived { scenario: s, text_errors }
         });
         let plan = Memo::new(move |_| scenario.with(|d| plan(&d.scenario)));
+        let stale =
+            Memo::new(move |_| scenario.with(|d| !d.text_errors.is_empty()) || plan.with(|r| r.is_err()));
+        let good = Memo::new(move |prev: Option<&Option<(Scenario, Plan)>>| {
+            if stale.get() {
+                return prev.cloned().flatten();
+            }
+            plan.with(|r| r.as_ref().ok().cloned()).map(|p| (scenario.with(|d| d.scenario.clone()), p))
+        });
+        let shown = Memo::new(move |_| match good.with(|g| g.as_ref().map(|(_, p)| p.clone())) {
+            Some(p) => Ok(p),
+            None => plan.get(),
+        });
 
         // Storage sync, in this one place: save what the grower entered whenever it changes.
         Effect::new(move |_| scenario.with(|d| save(&d.scenario)));
         Effect::new(move |_| runs.with(|r| save_runs(r)));
+        let draft_texts = texts.clone();
+        Effect::new(move |_| save_draft(units.get(), &draft_texts));
+        Effect::new(move |_| save_units(units.get()));
 
         let state = AppState {
             base: base_signal,
@@ -263,8 +350,19 @@ impl AppState {
             notice: RwSignal::new(notice),
             scenario,
             plan,
+            units,
+            good,
+            shown,
+            stale,
+            pinned,
         };
         state.apply(&base);
+        // What was typed last time, valid or not, goes back over the saved scenario.
+        for (key, text) in load_draft(units.get_untracked()) {
+            if let Some(i) = FIELDS.iter().position(|f| f.key == key) {
+                state.texts[i].set(text);
+            }
+        }
         state
     }
 
@@ -272,8 +370,11 @@ impl AppState {
     /// not show (kept in `base`). Used when the page starts and when a scenario is pasted in.
     pub fn apply(&self, s: &Scenario) {
         self.base.set(s.clone());
-        for (f, text) in FIELDS.iter().zip(&self.texts) {
-            text.set(text_for(f, s));
+        let units = self.units.get_untracked();
+        for (i, (f, text)) in FIELDS.iter().zip(&self.texts).enumerate() {
+            let shown = text_for_in(f, s, units);
+            self.pinned.update_value(|p| p[i] = (f.get)(s).map(|si| (shown.clone(), si)));
+            text.set(shown);
         }
         self.pressure_mode.set(match s.site.barometer.as_ref().map(|b| b.reference) {
             None => PressureMode::Altitude,
@@ -319,6 +420,24 @@ impl AppState {
                 Err("This is not a scenario the page can read: check that the whole text was copied.".into())
             }
         }
+    }
+
+    /// Shows the form and the answers in other units. Every number typed is carried over as
+    /// the same quantity, so the scenario (always SI) does not change.
+    pub fn set_units(&self, to: UnitSystem) {
+        let from = self.units.get_untracked();
+        for (i, (f, text)) in FIELDS.iter().zip(&self.texts).enumerate() {
+            let before = text.get_untracked();
+            let converted = convert_text(f, &before, from, to);
+            // The exact SI value behind the old text: pinned, or read in the old units.
+            let exact = self
+                .pinned
+                .with_value(|p| p[i].as_ref().filter(|(t, _)| *t == before).map(|(_, v)| *v))
+                .or_else(|| parse_number(&before).ok().flatten().map(|v| f.to_si_in(from, v)));
+            self.pinned.update_value(|p| p[i] = exact.map(|v| (converted.clone(), v)));
+            text.set(converted);
+        }
+        self.units.set(to);
     }
 
     /// Adds a line to the oil analysis.
