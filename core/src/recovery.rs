@@ -129,8 +129,7 @@ pub fn carry_over(
         in_plant -= released;
         film += released;
         // Least steam read at the middle of the step's oil, as it rises while the oil depletes.
-        let first_guess =
-            film.min(efficiency * steam_per_kg_oil_per_s * dt / least_steam(carried).max(1e-12));
+        let first_guess = film.min(efficiency * steam_per_kg_oil_per_s * dt / least_steam(carried).max(1e-12));
         let capacity =
             efficiency * steam_per_kg_oil_per_s * dt / least_steam(carried + 0.5 * first_guess).max(1e-12);
         let moved = film.min(capacity);

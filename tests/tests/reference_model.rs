@@ -64,9 +64,7 @@ fn a_single_miscible_oil_is_judged_by_its_cuts_not_its_pure_compounds() {
     s.condenser.kind = CondenserKind::TubeInTube;
     s.condenser.distillate_outlet_c = Some(30.0);
     let p = planned(&s);
-    assert!(
-        p.oil.cut_densities_at_separator_kg_per_m3.iter().all(|d| *d > p.separator.water_density_kg_per_m3)
-    );
+    assert!(p.oil.cut_densities_at_separator_kg_per_m3.iter().all(|d| *d > p.separator.water_density_kg_per_m3));
     assert!(!p.oil.mixed_density, "a single miscible oil reported as mixed");
     // A mixture whose light and heavy compounds come over at different times does part both ways.
     let mut s = Scenario::default();
@@ -129,9 +127,7 @@ fn returning_the_waters_credits_the_dissolved_oil() {
     let before = planned(&s);
     s.run.cohobation = true;
     let after = planned(&s);
-    assert!(
-        after.yield_estimate.dissolved_in_hydrosol_kg < 0.2 * before.yield_estimate.dissolved_in_hydrosol_kg
-    );
+    assert!(after.yield_estimate.dissolved_in_hydrosol_kg < 0.2 * before.yield_estimate.dissolved_in_hydrosol_kg);
     assert!(after.yield_estimate.oil_kg.central > before.yield_estimate.oil_kg.central);
     assert!(after.run.hydrosol_volume_m3 < before.run.hydrosol_volume_m3);
     assert!(!after.yield_estimate.cohobation_advised);
