@@ -318,7 +318,11 @@ impl AppState {
             Memo::new(move |_| scenario.with(|d| !d.text_errors.is_empty()) || plan.with(|r| r.is_err()));
         let good = Memo::new(move |prev: Option<&Option<(Scenario, Plan)>>| {
             if stale.get() {
-                return prev.cloned().flatten();
+                // Opened with a fault typed last time: the saved scenario's plan is the last good.
+                return prev.cloned().flatten().or_else(|| {
+                    plan.with(|r| r.as_ref().ok().cloned())
+                        .map(|p| (scenario.with(|d| d.scenario.clone()), p))
+                });
             }
             plan.with(|r| r.as_ref().ok().cloned()).map(|p| (scenario.with(|d| d.scenario.clone()), p))
         });
