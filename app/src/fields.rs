@@ -821,13 +821,15 @@ pub fn text_for_in(field: &NumField, scenario: &Scenario, system: UnitSystem) ->
     }
 }
 
-/// A field's text carried into another system of units: the same quantity, its digits redone.
-/// Text that is not a number is left as typed.
-pub fn convert_text(field: &NumField, text: &str, from: UnitSystem, to: UnitSystem) -> String {
-    match parse_number(text) {
-        Ok(Some(v)) if from != to => crate::units::plain(field.from_si_in(to, field.to_si_in(from, v))),
-        _ => text.to_string(),
-    }
+/// The text for an SI value in a system's unit, to nine significant figures: what a unit switch
+/// writes into a field (the exact SI value stays pinned behind it, see `AppState::set_units`).
+pub fn text_in(field: &NumField, si: f64, system: UnitSystem) -> String {
+    let w = field.from_si_in(system, si);
+    let digits = if w == 0.0 { 0 } else { 8 - w.abs().log10().floor() as i32 };
+    let scale = 10f64.powi(digits);
+    let r = (w * scale).round() / scale;
+    // Shortest form of the rounded number (Display), never "-0" or an exponent.
+    if r == 0.0 || !(1e-6..1e15).contains(&r.abs()) { crate::units::plain(r) } else { format!("{r}") }
 }
 
 #[cfg(test)]
@@ -890,14 +892,12 @@ mod tests {
                 let us = f.from_si_in(UnitSystem::UsCustomary, si);
                 let back = f.to_si_in(UnitSystem::UsCustomary, us);
                 assert!((back - si).abs() <= 1e-9 * si.abs().max(1.0), "{}", f.key);
+                // What a switch writes, from the exact SI value, and back.
                 let metric = text_for(f, &s);
-                let there = convert_text(f, &metric, UnitSystem::Metric, UnitSystem::UsCustomary);
-                assert_eq!(
-                    convert_text(f, &there, UnitSystem::UsCustomary, UnitSystem::Metric),
-                    metric,
-                    "{}",
-                    f.key
-                );
+                let there = text_in(f, si, UnitSystem::UsCustomary);
+                assert_eq!(text_in(f, si, UnitSystem::Metric), metric, "{}", f.key);
+                let typed_back = f.to_si_in(UnitSystem::UsCustomary, parse_number(&there).unwrap().unwrap());
+                assert!((typed_back - si).abs() <= 1e-8 * si.abs().max(1.0), "{}: {there}", f.key);
             }
         }
         // NIST SP 811: 1 ft = 0.3048 m; 212 °F = 100 °C; 1 BTU/h = 0.2930711 W.

@@ -6,7 +6,7 @@
 //! what is saved; the plan is always recomputed.
 
 use crate::fields::{
-    FIELDS, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, convert_text, parse_number, text_for_in,
+    FIELDS, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, text_for_in, text_in,
 };
 use crate::units::UnitSystem;
 use gloo_storage::{LocalStorage, Storage};
@@ -432,12 +432,13 @@ impl AppState {
         let from = self.units.get_untracked();
         for (i, (f, text)) in FIELDS.iter().zip(&self.texts).enumerate() {
             let before = text.get_untracked();
-            let converted = convert_text(f, &before, from, to);
-            // The exact SI value behind the old text: pinned, or read in the old units.
+            // The exact SI value behind the old text: pinned, or read in the old units. Text
+            // that is not a number stays as typed.
             let exact = self
                 .pinned
                 .with_value(|p| p[i].as_ref().filter(|(t, _)| *t == before).map(|(_, v)| *v))
                 .or_else(|| parse_number(&before).ok().flatten().map(|v| f.to_si_in(from, v)));
+            let converted = exact.map(|si| text_in(f, si, to)).unwrap_or(before);
             self.pinned.update_value(|p| p[i] = exact.map(|v| (converted.clone(), v)));
             text.set(converted);
         }

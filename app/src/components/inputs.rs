@@ -121,7 +121,12 @@ pub fn NumberInput(key: &'static str) -> impl IntoView {
     let ph_state = state.clone();
     let placeholder = move || fallback(f, &ph_state);
     let units_signal = state.units;
-    let unit = move || f.unit_in(units_signal.get());
+    let fuel = state.fuel;
+    // A fuel's price is per the unit it is sold by, whatever units the page shows.
+    let unit = move || match key {
+        "fuel_price" => format!("per {}", fuel.get().data().unit),
+        _ => f.unit_in(units_signal.get()).to_string(),
+    };
     // "read as 1500" for a reading that could be meant another way; the weather-report field
     // also says which unit its number was taken in.
     let reading = move || {

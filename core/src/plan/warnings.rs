@@ -450,6 +450,21 @@ mod tests {
     }
 
     #[test]
+    fn a_charge_far_above_the_still_is_called_overpacked() {
+        let mut s = Scenario::default();
+        // 50 L of lavender at its packing holds well under the 40 kg loaded.
+        s.still.volume_m3 = Some(0.05);
+        s.charge.plant_mass_kg = 40.0;
+        s.boiler.heat_input_w = 60_000.0;
+        assert!(codes(&s).iter().any(|(c, _)| c == "overpacked"), "{:?}", codes(&s));
+        // An estimated volume is sized to the charge: never overpacked, but said.
+        s.still.volume_m3 = None;
+        let c = codes(&s);
+        assert!(!c.iter().any(|(c, _)| c == "overpacked"));
+        assert!(c.iter().any(|(c, _)| c == "still_volume_estimated"));
+    }
+
+    #[test]
     fn a_barometer_far_from_the_standard_atmosphere_is_questioned() {
         let mut s = Scenario::default();
         s.site.altitude_m = 0.0;
