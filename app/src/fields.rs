@@ -817,7 +817,7 @@ pub fn text_for(field: &NumField, scenario: &Scenario) -> String {
 pub fn text_for_in(field: &NumField, scenario: &Scenario, system: UnitSystem) -> String {
     match (field.get)(scenario) {
         None => String::new(),
-        Some(si) => crate::units::plain(field.from_si_in(system, si)),
+        Some(si) => text_in(field, si, system),
     }
 }
 

@@ -126,6 +126,7 @@ async fn a_typo_keeps_the_last_plan_marked_stale_and_survives_a_reload() -> Resu
     // The last good plan stays, marked; not the typo's value, not a blank.
     assert_eq!(out(c, "steam_total").await?, before);
     assert!(c.find(Locator::Css(".headline.stale")).await.is_ok());
+    c.execute("window.scrollTo(0, 0);", vec![]).await?;
     std::fs::write(std::env::temp_dir().join("stillroom-stale-412x915.png"), c.screenshot().await?)?;
     // The line names the field as a link that focuses it.
     c.find(Locator::Css("[data-out=plan_stale] a[href='#f-plant_mass']")).await?.click().await?;
