@@ -123,9 +123,15 @@ pub fn NumberInput(key: &'static str) -> impl IntoView {
     let units_signal = state.units;
     let fuel = state.fuel;
     // A fuel's price is per the unit it is sold by, whatever units the page shows.
-    let unit = move || match key {
-        "fuel_price" => format!("per {}", fuel.get().data().unit),
-        _ => f.unit_in(units_signal.get()).to_string(),
+    let scenario = state.scenario;
+    // Prices carry the scenario's currency; a fuel's price is per the unit it is sold by.
+    let unit = move || {
+        let currency = || scenario.with(|d| d.scenario.costs.currency.clone());
+        match key {
+            "fuel_price" => format!("{} per {}", currency(), fuel.get().data().unit),
+            "plant_value" | "labour" => format!("{} {}", currency(), f.unit_in(units_signal.get())),
+            _ => f.unit_in(units_signal.get()).to_string(),
+        }
     };
     // "read as 1500" for a reading that could be meant another way; the weather-report field
     // also says which unit its number was taken in.
