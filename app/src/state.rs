@@ -90,6 +90,8 @@ pub struct AppState {
     pub plan: Memo<Result<Plan, ScenarioErrors>>,
     /// The units the form and the answers are shown in.
     pub units: RwSignal<UnitSystem>,
+    /// The currency every price and cost is in (a label, e.g. "EUR").
+    pub currency: RwSignal<String>,
     /// The last plan that matched the whole form (kept on screen while the form has a fault),
     /// with the scenario it was made for; `None` until one is made.
     pub good: Memo<Option<(Scenario, Plan)>>,
@@ -248,6 +250,7 @@ impl AppState {
         let metal = RwSignal::new(base.still.metal);
         let condenser_kind = RwSignal::new(base.condenser.kind);
         let units = RwSignal::new(load_units());
+        let currency = RwSignal::new(base.costs.currency.clone());
         let pinned = StoredValue::new(vec![None; FIELDS.len()]);
 
         let field_texts = texts.clone();
@@ -308,6 +311,7 @@ impl AppState {
                 }
                 _ => OilComposition::Compound { id: choice },
             };
+            s.costs.currency = currency.get().trim().to_string();
             s.boiler.fuel = fuel.get();
             s.still.metal = metal.get();
             s.condenser.kind = kind;
@@ -355,6 +359,7 @@ impl AppState {
             scenario,
             plan,
             units,
+            currency,
             good,
             shown,
             stale,
@@ -408,6 +413,7 @@ impl AppState {
         self.mixture.set(rows);
         self.own_name.set(s.custom_compounds.first().map(|c| c.name.clone()).unwrap_or_default());
         self.fuel.set(s.boiler.fuel);
+        self.currency.set(s.costs.currency.clone());
         self.metal.set(s.still.metal);
         self.condenser_kind.set(s.condenser.kind);
     }

@@ -206,3 +206,19 @@ async fn numbers_are_read_the_way_people_type_them() -> Result<(), BoxError> {
     wait_text(c, "[data-out=pressure]", |t| t == "101.4 kPa").await?;
     page.close().await
 }
+
+#[tokio::test]
+async fn every_price_and_cost_names_the_currency() -> Result<(), BoxError> {
+    let page = browser::open().await?;
+    fresh(&page).await?;
+    let c = &page.client;
+    set_hidden_field(c, "currency", "NZD").await?;
+    set_hidden_field(c, "fuel_price", "3").await?;
+    let cost = wait_text(c, "[data-out=cost]", |t| t.contains("NZD")).await?;
+    assert!(cost.chars().next().is_some_and(|ch| ch.is_ascii_digit()), "{cost}");
+    let label = c
+        .execute("return document.querySelector('label[for=f-fuel_price] .unit').textContent;", vec![])
+        .await?;
+    assert_eq!(label, json!("NZD per kg"), "propane is sold by the kg");
+    page.close().await
+}

@@ -565,6 +565,7 @@ pub fn EquipmentInputs() -> impl IntoView {
                 <NumberInput key="target" />
                 <NumberInput key="rate_constant" />
                 <NumberInput key="harvest" />
+                <CurrencyInput />
                 <NumberInput key="fuel_price" />
                 <NumberInput key="plant_value" />
                 <NumberInput key="labour" />
@@ -633,4 +634,32 @@ pub fn InstallHint() -> impl IntoView {
 fn js_sys_get(obj: &web_sys::Event, name: &str) -> Result<web_sys::js_sys::Function, wasm_bindgen::JsValue> {
     use wasm_bindgen::JsCast;
     web_sys::js_sys::Reflect::get(obj, &name.into())?.dyn_into::<web_sys::js_sys::Function>()
+}
+
+/// The currency of every price and cost: a label of the grower's choice.
+#[component]
+pub fn CurrencyInput() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let currency = state.currency;
+    let plan = state.plan;
+    let message = Memo::new(move |_| {
+        plan.with(|p| {
+            p.as_ref()
+                .err()?
+                .errors
+                .iter()
+                .find(|e| e.field == "costs.currency")
+                .map(|e| first_upper(e.message.trim_end_matches('.')) + ".")
+        })
+    });
+    view! {
+        <div class="field" class:invalid=move || message.get().is_some()>
+            <label for="f-currency"><span class="label">"Currency"</span></label>
+            <input id="f-currency" type="text" autocomplete="off" placeholder="e.g. EUR"
+                prop:value=move || currency.get()
+                on:input=move |ev| currency.set(event_target_value(&ev)) />
+            <p class="error" id="e-currency" aria-live="polite">{move || message.get()}</p>
+            <p class="hint">"Shown with every price and cost."</p>
+        </div>
+    }
 }
