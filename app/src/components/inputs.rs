@@ -622,7 +622,7 @@ pub fn InstallHint() -> impl IntoView {
     view! {
         <Show when=move || offer.with(|o| o.is_some())>
             <p class="install-hint" data-out="install_hint">
-                <span>"Keep it on this phone, for offline use"</span>
+                <span>"Keep it on this device, for offline use"</span>
                 <button type="button" on:click=install>"Install"</button>
                 <button type="button" class="quiet" aria-label="No thanks" on:click=move |_| offer.set(None)>"✕"</button>
             </p>
