@@ -2,6 +2,7 @@
 //! converts to the core's SI field, and back. This is the page's edge: the only place where
 //! units change.
 
+use crate::units::UnitSystem;
 use stillroom_core::scenario::{
     Barometer, BarometerReference, CustomCompound, CustomVapourPressure, Scenario,
 };
@@ -64,6 +65,134 @@ fn percent(v: f64) -> f64 {
 }
 fn per_percent(v: f64) -> f64 {
     v * 100.0
+}
+
+/// A field's unit in US customary, with its conversions to and from SI (NIST SP 811 factors,
+/// [`crate::units::sp811`]).
+pub struct Alt {
+    pub unit: &'static str,
+    pub to_si: fn(f64) -> f64,
+    pub from_si: fn(f64) -> f64,
+}
+
+use crate::units::sp811;
+
+fn ft(v: f64) -> f64 {
+    v * sp811::FT_M
+}
+fn per_ft(v: f64) -> f64 {
+    v / sp811::FT_M
+}
+fn lb(v: f64) -> f64 {
+    v * sp811::LB_KG
+}
+fn per_lb(v: f64) -> f64 {
+    v / sp811::LB_KG
+}
+fn fahrenheit(v: f64) -> f64 {
+    crate::units::f_to_c(v)
+}
+fn per_fahrenheit(v: f64) -> f64 {
+    crate::units::c_to_f(v)
+}
+fn gal_m3(v: f64) -> f64 {
+    v * sp811::GAL_M3
+}
+fn per_gal_m3(v: f64) -> f64 {
+    v / sp811::GAL_M3
+}
+/// Gallons of water to kg, water taken as 1 kg per litre as the metric field does.
+fn gal_kg(v: f64) -> f64 {
+    v * sp811::GAL_M3 * 1e3
+}
+fn per_gal_kg(v: f64) -> f64 {
+    v / (sp811::GAL_M3 * 1e3)
+}
+fn inch(v: f64) -> f64 {
+    v * sp811::IN_M
+}
+fn per_inch(v: f64) -> f64 {
+    v / sp811::IN_M
+}
+fn psi(v: f64) -> f64 {
+    v * sp811::PSI_PA
+}
+fn per_psi(v: f64) -> f64 {
+    v / sp811::PSI_PA
+}
+fn inhg(v: f64) -> f64 {
+    v * sp811::INHG_PA
+}
+fn per_inhg(v: f64) -> f64 {
+    v / sp811::INHG_PA
+}
+fn btu_h(v: f64) -> f64 {
+    v * sp811::BTU_H_W
+}
+fn per_btu_h(v: f64) -> f64 {
+    v / sp811::BTU_H_W
+}
+fn btu_u(v: f64) -> f64 {
+    v * sp811::BTU_H_FT2_F_W_M2_K
+}
+fn per_btu_u(v: f64) -> f64 {
+    v / sp811::BTU_H_FT2_F_W_M2_K
+}
+/// A weather-report pressure in either unit people read it in: sea-level pressures lie between
+/// about 25.7 and 32.0 inHg, or 870 and 1085 hPa, so a number under 100 is inHg and one above
+/// is hPa, in both systems.
+fn report_pressure(v: f64) -> f64 {
+    if v.abs() < 100.0 { inhg(v) } else { hecto(v) }
+}
+
+/// The US customary unit of a field, where it differs from the metric one.
+pub fn us_alt(key: &str) -> Option<Alt> {
+    let alt = |unit, to_si, from_si| Some(Alt { unit, to_si, from_si });
+    match key {
+        "altitude" => alt("ft", ft, per_ft),
+        "station_pressure" => alt("inHg", inhg, per_inhg),
+        "sea_level_pressure" => alt("inHg", report_pressure, per_inhg),
+        "ambient" | "cooling_in" | "cooling_out" | "distillate_out" | "own_t1" | "own_t2" => {
+            alt("°F", fahrenheit, per_fahrenheit)
+        }
+        "plant_mass" | "metal_mass" | "harvest" => alt("lb", lb, per_lb),
+        "steam_rate" => alt("lb/h", lb, per_lb),
+        "still_volume" => alt("gal", gal_m3, per_gal_m3),
+        "boiler_water" | "tub_water" => alt("gal", gal_kg, per_gal_kg),
+        "wall_u" | "condensing_u" => alt("BTU/(h ft² °F)", btu_u, per_btu_u),
+        "heat_input" => alt("BTU/h", btu_h, per_btu_h),
+        "tube_od" => alt("in", inch, per_inch),
+        "plant_value" => alt("per lb", per_lb, lb),
+        "own_p1" | "own_p2" => alt("psi", psi, per_psi),
+        _ => None,
+    }
+}
+
+impl NumField {
+    /// The unit the field is typed in under a system.
+    pub fn unit_in(&self, system: UnitSystem) -> &'static str {
+        match (system, us_alt(self.key)) {
+            (UnitSystem::UsCustomary, Some(a)) => a.unit,
+            _ => self.unit,
+        }
+    }
+
+    /// Typed value -> SI, under a system.
+    pub fn to_si_in(&self, system: UnitSystem, v: f64) -> f64 {
+        match (system, us_alt(self.key)) {
+            (UnitSystem::UsCustomary, Some(a)) => (a.to_si)(v),
+            _ if self.key == "sea_level_pressure" => report_pressure(v),
+            _ => (self.to_si)(v),
+        }
+    }
+
+    /// SI -> the value shown, under a system.
+    pub fn from_si_in(&self, system: UnitSystem, si: f64) -> f64 {
+        match (system, us_alt(self.key)) {
+            (UnitSystem::UsCustomary, Some(a)) => (a.from_si)(si),
+            _ => (self.from_si)(si),
+        }
+    }
 }
 
 fn barometer_of(s: &mut Scenario) -> &mut Barometer {
@@ -156,7 +285,7 @@ pub const FIELDS: &[NumField] = &[
         path: "site.barometer.pressure_pa",
         label: "Weather-report pressure",
         unit: "hPa",
-        hint: "The sea-level value a forecast gives, e.g. 1013.",
+        hint: "The sea-level value a forecast gives: hPa (1013) or inHg (29.92), either is read.",
         optional: false,
         to_si: hecto,
         from_si: per_hecto,
@@ -575,30 +704,132 @@ pub enum TextError {
     NotANumber,
 }
 
-/// Reads a number as people type it: spaces ignored, a decimal comma accepted.
-pub fn parse_number(text: &str) -> Result<Option<f64>, TextError> {
-    let t: String = text.chars().filter(|c| !c.is_whitespace()).collect();
-    if t.is_empty() {
+/// A number read from a field's text, with a note when the reading could be taken two ways.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Reading {
+    pub value: f64,
+    /// Shown beside the field, e.g. "read as 1500".
+    pub note: Option<String>,
+}
+
+/// Reads a number the way people type it, by one rule a person can predict:
+///
+/// - spaces (also no-break and thin spaces) are thousands gaps: "1 500" is 1500;
+/// - the Unicode minus "−" and a leading "+" are signs: "−3" is -3;
+/// - with both "," and ".", the last one is the decimal mark and the other groups thousands:
+///   "1.500,5" and "1,500.5" are 1500.5;
+/// - several of the same mark group thousands: "1,500,000" and "1.500.000" are 1500000;
+/// - one "," is a decimal comma ("1,5" is 1.5), except a comma followed by exactly three digits
+///   after one to three digits that are not just "0" ("1,500"): that is taken as thousands,
+///   1500, and noted, since it could be meant as 1.5;
+/// - one "." is a decimal point; "1.500" (the same look) is 1.5 and noted likewise.
+///
+/// Every reading that could be meant another way comes back with a note ("read as 1500").
+pub fn read_number(text: &str) -> Result<Option<Reading>, TextError> {
+    let spaced = text.trim();
+    if spaced.is_empty() {
         return Ok(None);
     }
-    let t = t.replace(',', ".");
-    match t.parse::<f64>() {
-        Ok(v) if v.is_finite() => Ok(Some(v)),
+    let groups: Vec<&str> = spaced.split(char::is_whitespace).filter(|g| !g.is_empty()).collect();
+    // A gap not in front of a group of three digits is read, but said.
+    let odd_gap =
+        groups.len() > 1 && groups[1..].iter().any(|g| g.split([',', '.']).next().map_or(0, str::len) != 3);
+    let t: String = groups.concat().replace('\u{2212}', "-");
+    let (sign, body) = match t.strip_prefix('-') {
+        Some(rest) => ("-", rest),
+        None => ("", t.strip_prefix('+').unwrap_or(&t)),
+    };
+    let commas = body.matches(',').count();
+    let dots = body.matches('.').count();
+    let mut ambiguous = false;
+    let plain: String = match (commas, dots) {
+        (0, 0) => body.to_string(),
+        (c, d) if c > 0 && d > 0 => {
+            let decimal = if body.rfind(',') > body.rfind('.') { ',' } else { '.' };
+            let group = if decimal == ',' { '.' } else { ',' };
+            let (int, frac) = body.rsplit_once(decimal).unwrap_or((body, ""));
+            if frac.contains(group) {
+                return Err(TextError::NotANumber);
+            }
+            format!("{}.{frac}", grouped(int, group)?)
+        }
+        (c, 0) if c > 1 => grouped(body, ',')?,
+        (0, d) if d > 1 => grouped(body, '.')?,
+        (1, 0) => {
+            let (int, frac) = body.split_once(',').unwrap_or((body, ""));
+            if looks_grouped(int, frac) {
+                ambiguous = true;
+                format!("{int}{frac}")
+            } else {
+                format!("{int}.{frac}")
+            }
+        }
+        _ => {
+            let (int, frac) = body.split_once('.').unwrap_or((body, ""));
+            ambiguous = looks_grouped(int, frac);
+            body.to_string()
+        }
+    };
+    if plain.is_empty()
+        || !plain.chars().all(|c| c.is_ascii_digit() || matches!(c, '.' | 'e' | 'E' | '-' | '+'))
+    {
+        return Err(TextError::NotANumber);
+    }
+    match format!("{sign}{plain}").parse::<f64>() {
+        Ok(v) if v.is_finite() => {
+            let note = (ambiguous || odd_gap).then(|| format!("read as {}", crate::units::plain_full(v)));
+            Ok(Some(Reading { value: v, note }))
+        }
         _ => Err(TextError::NotANumber),
     }
 }
 
+/// "1,500": one to three digits, not a lone zero, then exactly three digits.
+fn looks_grouped(int: &str, frac: &str) -> bool {
+    (1..=3).contains(&int.len())
+        && int.chars().all(|c| c.is_ascii_digit())
+        && int != "0"
+        && frac.len() == 3
+        && frac.chars().all(|c| c.is_ascii_digit())
+}
+
+/// "1,500,000" with `mark` grouping thousands: every group after the first has three digits.
+fn grouped(body: &str, mark: char) -> Result<String, TextError> {
+    let mut parts = body.split(mark);
+    let first = parts.next().unwrap_or("");
+    if first.is_empty() || first.len() > 3 || parts.clone().any(|g| g.len() != 3) {
+        return Err(TextError::NotANumber);
+    }
+    Ok(body.replace(mark, ""))
+}
+
+/// The value of a field's text (see [`read_number`]), without the note.
+pub fn parse_number(text: &str) -> Result<Option<f64>, TextError> {
+    read_number(text).map(|r| r.map(|r| r.value))
+}
+
 /// The text a field shows for a scenario value (in the field's unit, without needless digits).
 pub fn text_for(field: &NumField, scenario: &Scenario) -> String {
+    text_for_in(field, scenario, UnitSystem::Metric)
+}
+
+/// The text a field shows for a scenario value in a system of units.
+pub fn text_for_in(field: &NumField, scenario: &Scenario, system: UnitSystem) -> String {
     match (field.get)(scenario) {
         None => String::new(),
-        Some(si) => {
-            let v = (field.from_si)(si);
-            let s = format!("{:.6}", v);
-            let s = s.trim_end_matches('0').trim_end_matches('.');
-            if s == "-0" { "0".to_string() } else { s.to_string() }
-        }
+        Some(si) => text_in(field, si, system),
     }
+}
+
+/// The text for an SI value in a system's unit, to nine significant figures: what a unit switch
+/// writes into a field (the exact SI value stays pinned behind it, see `AppState::set_units`).
+pub fn text_in(field: &NumField, si: f64, system: UnitSystem) -> String {
+    let w = field.from_si_in(system, si);
+    let digits = if w == 0.0 { 0 } else { 8 - w.abs().log10().floor() as i32 };
+    let scale = 10f64.powi(digits);
+    let r = (w * scale).round() / scale;
+    // Shortest form of the rounded number (Display), never "-0" or an exponent.
+    if r == 0.0 || !(1e-6..1e15).contains(&r.abs()) { crate::units::plain(r) } else { format!("{r}") }
 }
 
 #[cfg(test)]
@@ -612,6 +843,71 @@ mod tests {
         assert_eq!(parse_number(""), Ok(None));
         assert_eq!(parse_number("abc"), Err(TextError::NotANumber));
         assert_eq!(parse_number("1e400"), Err(TextError::NotANumber));
+    }
+
+    fn read(t: &str) -> (f64, Option<String>) {
+        let r = read_number(t).unwrap().unwrap();
+        (r.value, r.note)
+    }
+
+    #[wasm_bindgen_test]
+    fn numbers_are_read_by_one_predictable_rule() {
+        // A comma and exactly three digits could be thousands or a decimal: thousands, said.
+        assert_eq!(read("1,500"), (1500.0, Some("read as 1500".into())));
+        assert_eq!(read("12,500"), (12500.0, Some("read as 12500".into())));
+        // Both marks: the last is the decimal one.
+        assert_eq!(read("1.500,5"), (1500.5, None));
+        assert_eq!(read("1,500.5"), (1500.5, None));
+        // One comma otherwise is a decimal comma.
+        assert_eq!(read("1,5"), (1.5, None));
+        assert_eq!(read("0,500"), (0.5, None));
+        assert_eq!(read("1,50"), (1.5, None));
+        assert_eq!(read("1234,567"), (1234.567, None));
+        // Gaps group thousands; an odd gap is read but said.
+        assert_eq!(read("1 500"), (1500.0, None));
+        assert_eq!(read("1\u{a0}500,25"), (1500.25, None));
+        assert_eq!(read("15 0"), (150.0, Some("read as 150".into())));
+        // Repeated marks group thousands.
+        assert_eq!(read("1,500,000"), (1.5e6, None));
+        assert_eq!(read("1.500.000"), (1.5e6, None));
+        // A point with three digits is a decimal point, but said (it could be thousands).
+        assert_eq!(read("1.500"), (1.5, Some("read as 1.5".into())));
+        assert_eq!(read("12.5"), (12.5, None));
+        // Signs.
+        assert_eq!(read("\u{2212}3"), (-3.0, None));
+        assert_eq!(read("-3,5"), (-3.5, None));
+        assert_eq!(read("+4"), (4.0, None));
+        // Not numbers.
+        for bad in ["1,5,0", "1.5,3", "6O", "abc", "1e400", "--3", "1,2.3,4", ",", "."] {
+            assert_eq!(read_number(bad), Err(TextError::NotANumber), "{bad}");
+        }
+        assert_eq!(read_number("   "), Ok(None));
+    }
+
+    #[wasm_bindgen_test]
+    fn us_units_round_trip_and_keep_the_metric_text() {
+        let s = Scenario::default();
+        for f in FIELDS {
+            if let Some(si) = (f.get)(&s) {
+                let us = f.from_si_in(UnitSystem::UsCustomary, si);
+                let back = f.to_si_in(UnitSystem::UsCustomary, us);
+                assert!((back - si).abs() <= 1e-9 * si.abs().max(1.0), "{}", f.key);
+                // What a switch writes, from the exact SI value, and back.
+                let metric = text_for(f, &s);
+                let there = text_in(f, si, UnitSystem::UsCustomary);
+                assert_eq!(text_in(f, si, UnitSystem::Metric), metric, "{}", f.key);
+                let typed_back = f.to_si_in(UnitSystem::UsCustomary, parse_number(&there).unwrap().unwrap());
+                assert!((typed_back - si).abs() <= 1e-8 * si.abs().max(1.0), "{}: {there}", f.key);
+            }
+        }
+        // NIST SP 811: 1 ft = 0.3048 m; 212 °F = 100 °C; 1 BTU/h = 0.2930711 W.
+        assert!((field("altitude").to_si_in(UnitSystem::UsCustomary, 1000.0) - 304.8).abs() < 1e-9);
+        assert!((field("ambient").to_si_in(UnitSystem::UsCustomary, 212.0) - 100.0).abs() < 1e-9);
+        assert!((field("heat_input").to_si_in(UnitSystem::UsCustomary, 1.0) - 0.2930711).abs() < 1e-9);
+        // A weather report is read in hPa or inHg in either system: 29.92 inHg ≈ 1013.2 hPa.
+        let report = field("sea_level_pressure");
+        assert!((report.to_si_in(UnitSystem::Metric, 29.92) - 101_320.8).abs() < 1.0);
+        assert!((report.to_si_in(UnitSystem::UsCustomary, 1013.0) - 101_300.0).abs() < 1e-6);
     }
 
     #[wasm_bindgen_test]

@@ -10,7 +10,7 @@ pub mod store;
 pub mod units;
 
 use components::cautions::Cautions;
-use components::inputs::{EquipmentInputs, EssentialInputs};
+use components::inputs::{EquipmentInputs, EssentialInputs, InstallHint, UnitsChoice};
 use components::kept_aside::{KeptAside, StorageNotices};
 use components::results::{Details, Headline, Warnings};
 use components::runlog::RunLog;
@@ -26,19 +26,29 @@ wasm_bindgen_test::wasm_bindgen_test_configure!(run_in_browser);
 pub fn App() -> impl IntoView {
     let state = AppState::new();
     provide_context(state);
+    // The static loading message of index.html goes once the page is live.
+    if let Some(el) =
+        web_sys::window().and_then(|w| w.document()).and_then(|d| d.get_element_by_id("loading"))
+    {
+        el.remove();
+    }
     view! {
         <header class="masthead">
-            <h1>"Stillroom"</h1>
-            <p class="lede">"Plan a steam-distillation run: steam, time, fuel, water, hydrosol and separator, from your crop and your site."</p>
+            <div class="masthead-row">
+                <h1>"Stillroom"</h1>
+                <UnitsChoice />
+            </div>
+            <p class="lede">"Plan a steam-distillation run from your crop and your site."</p>
+            <InstallHint />
         </header>
         <main class="page">
             <StorageNotices />
             <KeptAside />
-            // On a phone the answers follow the first inputs; on a wide screen inputs sit left.
+            // On a phone the answers come first, the inputs after; on a wide screen inputs sit
+            // left and answers right.
             <div class="columns">
-                <div class="col-in"><EssentialInputs /></div>
                 <div class="col-out"><Headline /><Warnings /></div>
-                <div class="col-in"><EquipmentInputs /><RunLog /><ScenarioText /></div>
+                <div class="col-in"><EssentialInputs /><EquipmentInputs /><RunLog /><ScenarioText /></div>
                 <div class="col-out"><Details /></div>
             </div>
             <Cautions />

@@ -5,11 +5,15 @@
 //! [`crate::fields`]) -> `plan` (memo, the core's one entry point) -> view. The scenario is
 //! what is saved; the plan is always recomputed.
 
-use crate::fields::{FIELDS, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, text_for};
+use crate::fields::{
+    FIELDS, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, text_for_in, text_in,
+};
 use crate::records::{self, Kind};
 use crate::storage;
 use crate::store::Store;
+use crate::units::UnitSystem;
 use leptos::prelude::*;
+use serde::{Deserialize, Serialize};
 use stillroom_core::calibration::RunRecord;
 use stillroom_core::heat::{Fuel, Metal};
 use stillroom_core::scenario::{
@@ -19,6 +23,10 @@ use stillroom_core::{Plan, ScenarioErrors, plan};
 
 /// The largest pasted text the page tries to read (a plan is a few kB).
 pub const MAX_PASTE_BYTES: usize = 256 * 1024;
+/// Storage key of the grower's choice of units (metric or US customary).
+pub const UNITS_KEY: &str = "stillroom.units";
+/// Storage key of the form's texts as typed, even when they are not yet valid.
+pub const DRAFT_KEY: &str = "stillroom.draft";
 
 /// How the site's pressure is known.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -69,6 +77,20 @@ pub struct AppState {
     pub store: Store,
     pub scenario: Memo<Derived>,
     pub plan: Memo<Result<Plan, ScenarioErrors>>,
+    /// The units the form and the answers are shown in.
+    pub units: RwSignal<UnitSystem>,
+    /// The currency every price and cost is in (a label, e.g. "EUR").
+    pub currency: RwSignal<String>,
+    /// The last plan that matched the whole form (kept on screen while the form has a fault),
+    /// with the scenario it was made for; `None` until one is made.
+    pub good: Memo<Option<(Scenario, Plan)>>,
+    /// The plan on screen: the last good one, or the current error when there was none.
+    pub shown: Memo<Result<Plan, ScenarioErrors>>,
+    /// Whether the plan on screen no longer matches the form.
+    pub stale: Memo<bool>,
+    /// Per field, the text a unit switch wrote and the exact SI value it stands for, so a
+    /// switch (and a switch back) leaves the scenario exactly as it was.
+    pinned: StoredValue<Vec<Option<(String, f64)>>>,
 }
 
 /// The scenario built from the form, with the texts that could not be read.
@@ -77,6 +99,46 @@ pub struct Derived {
     pub scenario: Scenario,
     /// (field key, or `mix-<row>` for a line of the oil analysis; the error).
     pub text_errors: Vec<(String, TextError)>,
+}
+
+/// Reads the saved choice of units; anything else is metric.
+pub fn load_units() -> UnitSystem {
+    storage::get(UNITS_KEY).ok().flatten().and_then(|k| UnitSystem::from_key(&k)).unwrap_or_default()
+}
+
+// A failed units or draft save needs no notice of its own: the same storage then fails the plan
+// record, and that failure is told at once (`store.rs`).
+fn save_units(units: UnitSystem) {
+    let _ = storage::set(UNITS_KEY, units.key());
+}
+
+/// The form's texts as typed, by field key, in the units they were typed in.
+#[derive(Serialize, Deserialize, Default)]
+struct Draft {
+    units: String,
+    texts: std::collections::BTreeMap<String, String>,
+}
+
+/// Reads the draft texts typed under `units`; a draft in other units or unreadable is ignored
+/// (the saved scenario holds every valid value, so nothing valid is lost).
+fn load_draft(units: UnitSystem) -> std::collections::BTreeMap<String, String> {
+    storage::get(DRAFT_KEY)
+        .ok()
+        .flatten()
+        .and_then(|raw| serde_json::from_str::<Draft>(&raw).ok())
+        .filter(|d| d.units == units.key())
+        .map(|d| d.texts)
+        .unwrap_or_default()
+}
+
+fn save_draft(units: UnitSystem, texts: &[RwSignal<String>]) {
+    let draft = Draft {
+        units: units.key().to_string(),
+        texts: FIELDS.iter().zip(texts).map(|(f, t)| (f.key.to_string(), t.get())).collect(),
+    };
+    if let Ok(text) = serde_json::to_string(&draft) {
+        let _ = storage::set(DRAFT_KEY, &text);
+    }
 }
 
 impl AppState {
@@ -99,6 +161,9 @@ impl AppState {
         let fuel = RwSignal::new(base.boiler.fuel);
         let metal = RwSignal::new(base.still.metal);
         let condenser_kind = RwSignal::new(base.condenser.kind);
+        let units = RwSignal::new(load_units());
+        let currency = RwSignal::new(base.costs.currency.clone());
+        let pinned = StoredValue::new(vec![None; FIELDS.len()]);
 
         let field_texts = texts.clone();
         let scenario = Memo::new(move |_| {
@@ -115,7 +180,7 @@ impl AppState {
                 .custom_compounds
                 .first()
                 .is_some_and(|c| matches!(c.vapour_pressure, CustomVapourPressure::Antoine { .. }));
-            for (f, text) in FIELDS.iter().zip(&field_texts) {
+            for (i, (f, text)) in FIELDS.iter().zip(&field_texts).enumerate() {
                 let text = text.get();
                 let skip = match f.key {
                     "station_pressure" => mode != PressureMode::Station,
@@ -130,16 +195,14 @@ impl AppState {
                 if skip {
                     continue;
                 }
-                // A field still showing the opened value keeps that value exactly (the text is
-                // rounded for reading; the number underneath is not).
-                if let Some(v) = (f.get)(&opened)
-                    && text == text_for(f, &opened)
-                {
-                    (f.set)(&mut s, Some(v));
+                let exact = pinned.with_value(|p| p[i].as_ref().filter(|(t, _)| *t == text).map(|(_, v)| *v));
+                if let Some(si) = exact {
+                    (f.set)(&mut s, Some(si));
                     continue;
                 }
                 match parse_number(&text) {
-                    Ok(Some(v)) => (f.set)(&mut s, Some((f.to_si)(v))),
+                    // Units read untracked: a switch rewrites the texts first (see `set_units`).
+                    Ok(Some(v)) => (f.set)(&mut s, Some(f.to_si_in(units.get_untracked(), v))),
                     Ok(None) if f.optional => (f.set)(&mut s, None),
                     Ok(None) => text_errors.push((f.key.to_string(), TextError::Empty)),
                     Err(e) => text_errors.push((f.key.to_string(), e)),
@@ -182,12 +245,29 @@ impl AppState {
                 }
                 _ => OilComposition::Compound { id: choice },
             };
+            s.costs.currency = currency.get().trim().to_string();
             s.boiler.fuel = fuel.get();
             s.still.metal = metal.get();
             s.condenser.kind = kind;
             Derived { scenario: s, text_errors }
         });
         let plan = Memo::new(move |_| scenario.with(|d| plan(&d.scenario)));
+        let stale =
+            Memo::new(move |_| scenario.with(|d| !d.text_errors.is_empty()) || plan.with(|r| r.is_err()));
+        let good = Memo::new(move |prev: Option<&Option<(Scenario, Plan)>>| {
+            if stale.get() {
+                // Opened with a fault typed last time: the saved scenario's plan is the last good.
+                return prev.cloned().flatten().or_else(|| {
+                    plan.with(|r| r.as_ref().ok().cloned())
+                        .map(|p| (scenario.with(|d| d.scenario.clone()), p))
+                });
+            }
+            plan.with(|r| r.as_ref().ok().cloned()).map(|p| (scenario.with(|d| d.scenario.clone()), p))
+        });
+        let shown = Memo::new(move |_| match good.with(|g| g.as_ref().map(|(_, p)| p.clone())) {
+            Some(p) => Ok(p),
+            None => plan.get(),
+        });
 
         // Storage sync, in this one place: save what the grower entered whenever it changes.
         Effect::new(move |_| {
@@ -212,6 +292,9 @@ impl AppState {
                 };
             }
         });
+        let draft_texts = texts.clone();
+        Effect::new(move |_| save_draft(units.get(), &draft_texts));
+        Effect::new(move |_| save_units(units.get()));
 
         let state = AppState {
             base: base_signal,
@@ -229,8 +312,20 @@ impl AppState {
             store,
             scenario,
             plan,
+            units,
+            currency,
+            good,
+            shown,
+            stale,
+            pinned,
         };
         state.apply(&base);
+        // What was typed last time, valid or not, goes back over the saved scenario.
+        for (key, text) in load_draft(units.get_untracked()) {
+            if let Some(i) = FIELDS.iter().position(|f| f.key == key) {
+                state.texts[i].set(text);
+            }
+        }
         state
     }
 
@@ -238,8 +333,11 @@ impl AppState {
     /// not show (kept in `base`). Used when the page starts and when a scenario is pasted in.
     pub fn apply(&self, s: &Scenario) {
         self.base.set(s.clone());
-        for (f, text) in FIELDS.iter().zip(&self.texts) {
-            text.set(text_for(f, s));
+        let units = self.units.get_untracked();
+        for (i, (f, text)) in FIELDS.iter().zip(&self.texts).enumerate() {
+            let shown = text_for_in(f, s, units);
+            self.pinned.update_value(|p| p[i] = (f.get)(s).map(|si| (shown.clone(), si)));
+            text.set(shown);
         }
         self.pressure_mode.set(match s.site.barometer.as_ref().map(|b| b.reference) {
             None => PressureMode::Altitude,
@@ -270,6 +368,7 @@ impl AppState {
         self.mixture.set(rows);
         self.own_name.set(s.custom_compounds.first().map(|c| c.name.clone()).unwrap_or_default());
         self.fuel.set(s.boiler.fuel);
+        self.currency.set(s.costs.currency.clone());
         self.metal.set(s.still.metal);
         self.condenser_kind.set(s.condenser.kind);
     }
@@ -314,6 +413,25 @@ impl AppState {
         self.store.save(Kind::Plan, plan);
         let runs = self.runs.with_untracked(|r| records::runs_text(r));
         self.store.save(Kind::RunLog, runs);
+    }
+
+    /// Shows the form and the answers in other units. Every number typed is carried over as
+    /// the same quantity, so the scenario (always SI) does not change.
+    pub fn set_units(&self, to: UnitSystem) {
+        let from = self.units.get_untracked();
+        for (i, (f, text)) in FIELDS.iter().zip(&self.texts).enumerate() {
+            let before = text.get_untracked();
+            // The exact SI value behind the old text: pinned, or read in the old units. Text
+            // that is not a number stays as typed.
+            let exact = self
+                .pinned
+                .with_value(|p| p[i].as_ref().filter(|(t, _)| *t == before).map(|(_, v)| *v))
+                .or_else(|| parse_number(&before).ok().flatten().map(|v| f.to_si_in(from, v)));
+            let converted = exact.map(|si| text_in(f, si, to)).unwrap_or(before);
+            self.pinned.update_value(|p| p[i] = exact.map(|v| (converted.clone(), v)));
+            text.set(converted);
+        }
+        self.units.set(to);
     }
 
     /// Adds a line to the oil analysis.

@@ -74,8 +74,10 @@ async fn bad_input_is_named_beside_its_field() {
     assert!(text_of(&host, "#e-oil_content").contains("100"), "{}", text_of(&host, "#e-oil_content"));
     type_into(&host, "altitude", "7000").await;
     assert!(text_of(&host, "#e-altitude").contains("6000"));
-    // The plan waits instead of showing stale numbers.
-    assert_eq!(text_of(&host, "[data-out=water_boiling_point]"), "–");
+    // The plan on screen is marked as not matching the form, naming the fields to fix.
+    assert!(host.query_selector(".headline.stale").unwrap().is_some(), "answers marked stale");
+    let fix = text_of(&host, "[data-out=plan_stale]");
+    assert!(fix.contains("Plant in the still") && fix.contains("Altitude"), "{fix}");
     // Fixing the fields brings it back.
     type_into(&host, "plant_mass", "15").await;
     type_into(&host, "oil_content", "1").await;
@@ -136,8 +138,8 @@ async fn a_lab_report_mixture_drives_the_plan() {
     let add: HtmlElement = host.query_selector("#mix-add").unwrap().unwrap().unchecked_into();
     add.click();
     leptos::task::tick().await;
-    // The new line starts empty: the plan waits for its share.
-    assert_eq!(text_of(&host, "[data-out=codistillation_temperature]"), "–");
+    // The new line starts empty: the plan on screen is marked stale until its share is given.
+    assert!(text_of(&host, "[data-out=plan_stale]").contains("Oil analysis, line 1"));
     choose(&host, "select[id^=mix-compound-]", "alpha-pinene").await;
     let share: HtmlInputElement =
         host.query_selector("input[id^=mix-percent-]").unwrap().unwrap().unchecked_into();
@@ -146,6 +148,7 @@ async fn a_lab_report_mixture_drives_the_plan() {
     leptos::task::tick().await;
     // Pure α-pinene with water at 1 atm boils at 95.2 °C (thermo 0.6.1 + CoolProp 8.0.0: 95.19).
     assert_eq!(text_of(&host, "[data-out=codistillation_temperature]"), "95.2 °C");
+    assert!(host.query_selector("[data-out=plan_stale]").unwrap().is_none(), "no longer stale");
 }
 
 #[wasm_bindgen_test]

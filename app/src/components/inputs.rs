@@ -1,16 +1,18 @@
 //! The form: small components, one concern each. They read and write the state's signals and
 //! never compute physics.
 
-use crate::fields::{NumField, TextError, field};
+use crate::fields::{NumField, TextError, field, read_number};
 use crate::state::{AppState, CROP_OIL, MIXTURE_OIL, MixRow, PressureMode};
 use crate::units;
+use crate::units::UnitSystem;
 use leptos::prelude::*;
 use stillroom_core::compounds::COMPOUNDS;
 use stillroom_core::crops::CROPS;
 use stillroom_core::heat::{Fuel, Metal};
 use stillroom_core::scenario::CondenserKind;
 
-/// The message shown beside a field: its own text first, then the core's verdict on its value.
+/// The message shown beside a field: its own text first, then the core's verdict on its value,
+/// its limits restated in the field's own unit and precision.
 fn field_message(f: &NumField, state: &AppState) -> Option<String> {
     // Read through `with`: the plan is large and every field asks on every keystroke.
     let text_error =
@@ -21,22 +23,60 @@ fn field_message(f: &NumField, state: &AppState) -> Option<String> {
             TextError::NotANumber => "Enter a number, such as 12.5.".to_string(),
         });
     }
+    let system = state.units.get();
+    let value = state.scenario.with(|d| (f.get)(&d.scenario));
     state.plan.with(|plan| {
         let e = plan.as_ref().err()?.errors.iter().find(|e| e.field == f.path)?;
-        let mut message = first_upper(&e.message);
-        if let (Some(min), Some(max)) = (e.min, e.max) {
-            let (a, b) = ((f.from_si)(min), (f.from_si)(max));
-            message = format!(
-                "{message}. Valid: {} to {} {}.",
-                units::sig3(a.min(b)),
-                units::sig3(a.max(b)),
-                f.unit
-            );
-        } else {
-            message.push('.');
-        }
-        Some(message)
+        Some(limit_message(f, system, e, value))
     })
+}
+
+/// "Must be at least 5 %." from a core error: the bound the value crossed, in the field's unit,
+/// rounded inwards so a value typed as shown is valid.
+pub fn limit_message(
+    f: &NumField,
+    system: crate::units::UnitSystem,
+    e: &stillroom_core::scenario::FieldError,
+    value_si: Option<f64>,
+) -> String {
+    let unit = f.unit_in(system);
+    let with_unit = |v: String| if unit.is_empty() { v } else { format!("{v}\u{a0}{unit}") };
+    // Converted ends, low first (a conversion may turn the order round, as 1/x would).
+    let ends = |min: f64, max: f64| {
+        let (a, b) = (f.from_si_in(system, min), f.from_si_in(system, max));
+        (a.min(b), a.max(b))
+    };
+    let plain_message = || {
+        let m = first_upper(e.message.trim());
+        let m = m.trim_end_matches(['.', ' ']).to_string();
+        m + "."
+    };
+    // Zero means zero in this unit (not so for °F): "more than zero" reads true.
+    let zero_is_zero = f.from_si_in(system, 0.0).abs() < 1e-12;
+    // The core's own words, when they say more than the bound ("too warm to cool …").
+    let reason = if e.message.starts_with("must be") { String::new() } else { plain_message() + " " };
+    match (e.min, e.max, value_si) {
+        (Some(min), Some(max), Some(v)) if v <= 0.0 && min > 0.0 && zero_is_zero => format!(
+            "{reason}Must be more than zero: at least {}.",
+            with_unit(units::limit(ends(min, max).0, true))
+        ),
+        (Some(min), Some(max), Some(v)) if v < min => {
+            format!("{reason}Must be at least {}.", with_unit(units::limit(ends(min, max).0, true)))
+        }
+        (Some(min), Some(max), Some(v)) if v > max => {
+            format!("{reason}Must be at most {}.", with_unit(units::limit(ends(min, max).1, false)))
+        }
+        (Some(min), Some(max), _) => {
+            let (lo, hi) = ends(min, max);
+            format!(
+                "{} Valid: {} to {}.",
+                plain_message(),
+                units::limit(lo, true),
+                with_unit(units::limit(hi, false))
+            )
+        }
+        _ => plain_message(),
+    }
 }
 
 fn first_upper(s: &str) -> String {
@@ -47,22 +87,30 @@ fn first_upper(s: &str) -> String {
     }
 }
 
-/// What an optional field falls back to, shown as its placeholder.
-fn fallback(key: &str, state: &AppState) -> String {
+/// What an optional field falls back to, shown as its placeholder (in the field's unit).
+fn fallback(f: &NumField, state: &AppState) -> String {
     let crop = state.crop.get().and_then(|id| CROPS.iter().find(|c| c.id == id));
-    match (key, crop) {
-        ("oil_content", Some(c)) => format!("{} (crop)", c.oil_content_percent.typical),
-        ("oil_density", Some(c)) => format!("{} (crop)", c.oil_density_kg_per_m3 / 1000.0),
-        ("rate_constant", Some(c)) => format!("{} (crop)", c.rate_constant_per_min.typical),
-        ("distillate_out", Some(c)) => format!("{} (crop)", c.distillate_temperature_c),
-        ("efficiency", _) => {
-            format!("{} (typical)", state.fuel.get().usual_appliance().data().typical_efficiency * 100.0)
-        }
+    let system = state.units.get();
+    let shown = |si: f64, whose: &str| format!("{} ({whose})", units::plain(f.from_si_in(system, si)));
+    match (f.key, crop) {
+        ("oil_content", Some(c)) => shown(c.oil_content_percent.typical, "crop"),
+        ("oil_density", Some(c)) => shown(c.oil_density_kg_per_m3, "crop"),
+        ("rate_constant", Some(c)) => shown(c.rate_constant_per_min.typical, "crop"),
+        ("distillate_out", Some(c)) => shown(c.distillate_temperature_c, "crop"),
+        ("efficiency", _) => shown(state.fuel.get().usual_appliance().data().typical_efficiency, "typical"),
+        ("still_volume", _) => "from the charge".to_string(),
         _ => String::new(),
     }
 }
 
-/// One number field with its label, unit, hint and error message.
+/// Opens the folded section holding an element, so a field with a fault is never hidden.
+pub fn open_section_of(el: &web_sys::Element) {
+    if let Ok(Some(d)) = el.closest("details") {
+        let _ = d.set_attribute("open", "");
+    }
+}
+
+/// One number field with its label, unit, hint, how its text was read, and its error message.
 #[component]
 pub fn NumberInput(key: &'static str) -> impl IntoView {
     let state = expect_context::<AppState>();
@@ -71,14 +119,50 @@ pub fn NumberInput(key: &'static str) -> impl IntoView {
     let msg_state = state.clone();
     let message = Memo::new(move |_| field_message(f, &msg_state));
     let ph_state = state.clone();
-    let placeholder = move || fallback(key, &ph_state);
+    let placeholder = move || fallback(f, &ph_state);
+    let units_signal = state.units;
+    let fuel = state.fuel;
+    // A fuel's price is per the unit it is sold by, whatever units the page shows.
+    let scenario = state.scenario;
+    // Prices carry the scenario's currency; a fuel's price is per the unit it is sold by.
+    let unit = move || {
+        let currency = || scenario.with(|d| d.scenario.costs.currency.clone());
+        match key {
+            "fuel_price" => format!("{} per {}", currency(), fuel.get().data().unit),
+            "plant_value" | "labour" => format!("{} {}", currency(), f.unit_in(units_signal.get())),
+            _ => f.unit_in(units_signal.get()).to_string(),
+        }
+    };
+    // "read as 1500" for a reading that could be meant another way; the weather-report field
+    // also says which unit its number was taken in.
+    let reading = move || {
+        let r = read_number(&text.get()).ok().flatten()?;
+        let mut note = r.note;
+        if key == "sea_level_pressure" {
+            let taken = if r.value.abs() < 100.0 { "inHg" } else { "hPa" };
+            if taken != f.unit_in(units_signal.get()) {
+                note =
+                    Some(format!("{} read as {} {taken}", note.unwrap_or_default(), units::plain(r.value)));
+            }
+        }
+        note.map(|n| n.trim().to_string())
+    };
     let id = format!("f-{key}");
     let err_id = format!("e-{key}");
+    let note_id = format!("n-{key}");
+    let node = NodeRef::<leptos::html::Div>::new();
+    Effect::new(move |_| {
+        if message.get().is_some()
+            && let Some(el) = node.get()
+        {
+            open_section_of(&el);
+        }
+    });
     view! {
-        <div class="field" class:invalid=move || message.get().is_some()>
+        <div class="field" class:invalid=move || message.get().is_some() node_ref=node>
             <label for=id.clone()>
                 <span class="label">{f.label}</span>
-                <span class="unit">{f.unit}</span>
+                <span class="unit">{unit}</span>
             </label>
             <input
                 id=id
@@ -87,12 +171,13 @@ pub fn NumberInput(key: &'static str) -> impl IntoView {
                 inputmode="decimal"
                 autocomplete="off"
                 placeholder=placeholder
-                aria-describedby=err_id.clone()
+                aria-describedby=format!("{err_id} {note_id}")
                 aria-invalid=move || if message.get().is_some() { "true" } else { "false" }
                 prop:value=move || text.get()
                 on:input=move |ev| text.set(event_target_value(&ev))
             />
             <p class="error" id=err_id aria-live="polite">{move || message.get()}</p>
+            <p class="reading" id=note_id aria-live="polite">{reading}</p>
             <p class="hint">{f.hint}</p>
         </div>
     }
@@ -480,10 +565,101 @@ pub fn EquipmentInputs() -> impl IntoView {
                 <NumberInput key="target" />
                 <NumberInput key="rate_constant" />
                 <NumberInput key="harvest" />
+                <CurrencyInput />
                 <NumberInput key="fuel_price" />
                 <NumberInput key="plant_value" />
                 <NumberInput key="labour" />
             </details>
         </section>
+    }
+}
+
+/// Metric or US customary, for the form and the answers; remembered in this browser.
+#[component]
+pub fn UnitsChoice() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let units = state.units;
+    let choose = move |to: UnitSystem| {
+        let state = state.clone();
+        move |_| state.set_units(to)
+    };
+    view! {
+        <div class="units-choice" role="group" aria-label="Units">
+            <button type="button" id="units-metric" class:chosen=move || units.get() == UnitSystem::Metric
+                aria-pressed=move || (units.get() == UnitSystem::Metric).to_string()
+                on:click=choose(UnitSystem::Metric)>"Metric"</button>
+            <button type="button" id="units-us" class:chosen=move || units.get() == UnitSystem::UsCustomary
+                aria-pressed=move || (units.get() == UnitSystem::UsCustomary).to_string()
+                on:click=choose(UnitSystem::UsCustomary)>"US"</button>
+        </div>
+    }
+}
+
+/// A small, dismissable offer to install the page, shown only where the browser offers it
+/// (its `beforeinstallprompt` event).
+#[component]
+pub fn InstallHint() -> impl IntoView {
+    use wasm_bindgen::JsCast;
+    use wasm_bindgen::closure::Closure;
+    let offer = RwSignal::new_local(None::<web_sys::Event>);
+    if let Some(w) = web_sys::window() {
+        let on_offer = Closure::<dyn FnMut(web_sys::Event)>::new(move |ev: web_sys::Event| {
+            ev.prevent_default();
+            offer.set(Some(ev));
+        });
+        let _ = w.add_event_listener_with_callback("beforeinstallprompt", on_offer.as_ref().unchecked_ref());
+        on_offer.forget();
+    }
+    let install = move |_| {
+        if let Some(ev) = offer.get_untracked() {
+            // `prompt()` is the event's own method; called by name to need no extra binding.
+            if let Ok(f) = js_sys_get(&ev, "prompt") {
+                let _ = f.call0(&ev);
+            }
+        }
+        offer.set(None);
+    };
+    view! {
+        <Show when=move || offer.with(|o| o.is_some())>
+            <p class="install-hint" data-out="install_hint">
+                <span>"Keep it on this device, for offline use"</span>
+                <button type="button" on:click=install>"Install"</button>
+                <button type="button" class="quiet" aria-label="No thanks" on:click=move |_| offer.set(None)>"✕"</button>
+            </p>
+        </Show>
+    }
+}
+
+/// A function property of a JS object, by name.
+fn js_sys_get(obj: &web_sys::Event, name: &str) -> Result<web_sys::js_sys::Function, wasm_bindgen::JsValue> {
+    use wasm_bindgen::JsCast;
+    web_sys::js_sys::Reflect::get(obj, &name.into())?.dyn_into::<web_sys::js_sys::Function>()
+}
+
+/// The currency of every price and cost: a label of the grower's choice.
+#[component]
+pub fn CurrencyInput() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let currency = state.currency;
+    let plan = state.plan;
+    let message = Memo::new(move |_| {
+        plan.with(|p| {
+            p.as_ref()
+                .err()?
+                .errors
+                .iter()
+                .find(|e| e.field == "costs.currency")
+                .map(|e| first_upper(e.message.trim_end_matches('.')) + ".")
+        })
+    });
+    view! {
+        <div class="field" class:invalid=move || message.get().is_some()>
+            <label for="f-currency"><span class="label">"Currency"</span></label>
+            <input id="f-currency" type="text" autocomplete="off" placeholder="e.g. EUR"
+                prop:value=move || currency.get()
+                on:input=move |ev| currency.set(event_target_value(&ev)) />
+            <p class="error" id="e-currency" aria-live="polite">{move || message.get()}</p>
+            <p class="hint">"Shown with every price and cost."</p>
+        </div>
     }
 }

@@ -1,17 +1,111 @@
 //! The plan, shown. Every number here comes from the core's plan through [`crate::units`].
 
-use crate::state::AppState;
+use crate::fields::{FIELDS, field};
+use crate::state::{AppState, PressureMode};
 use crate::units;
 use leptos::prelude::*;
+use stillroom_core::crops::CROPS;
 use stillroom_core::plan::{Answer, OilLayer, RunLimit, Uncertainty};
 use stillroom_core::scenario::CondenserKind;
+use stillroom_core::scenario::Scenario;
 use stillroom_core::{Plan, ScenarioErrors};
+use wasm_bindgen::JsCast;
 
 type PlanMemo = Memo<Result<Plan, ScenarioErrors>>;
 
-/// A text derived from the plan, or a dash while the plan cannot be made.
+/// A text derived from the plan, in the grower's units, or a dash while no plan was ever made.
 fn from_plan(plan: PlanMemo, f: impl Fn(&Plan) -> String + Send + Sync + 'static) -> Signal<String> {
-    Signal::derive(move || plan.with(|r| r.as_ref().map(&f).unwrap_or_else(|_| "–".to_string())))
+    let system = expect_context::<AppState>().units;
+    Signal::derive(move || {
+        let system = system.get();
+        plan.with(|r| units::with_system(system, || r.as_ref().map(&f).unwrap_or_else(|_| "–".to_string())))
+    })
+}
+
+/// "15 kg lavender at 300 m": the charge the answers on screen are for.
+fn charge_summary(s: &Scenario) -> String {
+    let crop = s
+        .charge
+        .crop
+        .as_deref()
+        .and_then(|id| CROPS.iter().find(|c| c.id == id))
+        .map(|c| c.name.to_lowercase())
+        .unwrap_or_else(|| "plant".to_string());
+    // "15 kg", not "15.0 kg": the charge as the grower typed it, to three figures.
+    let mass = units::mass(s.charge.plant_mass_kg);
+    let mass = match mass.split_once(' ') {
+        Some((n, unit)) if n.contains('.') => {
+            format!("{} {unit}", n.trim_end_matches('0').trim_end_matches('.'))
+        }
+        _ => mass,
+    };
+    format!("{mass} {crop} at {}", units::altitude(s.site.altitude_m))
+}
+
+/// The fields that keep the form from a plan: (label, id of the element to focus).
+fn failing_fields(state: &AppState) -> Vec<(String, Option<String>)> {
+    let mode = state.pressure_mode.get();
+    let mut out: Vec<(String, Option<String>)> = Vec::new();
+    let mut add = |label: String, id: Option<String>| {
+        if !out.iter().any(|(l, i)| *l == label && *i == id) {
+            out.push((label, id));
+        }
+    };
+    let rows = state.mixture.get();
+    let text_errors = state.scenario.with(|d| d.text_errors.clone());
+    for (key, _) in &text_errors {
+        if let Some(i) = key.strip_prefix("mix-").and_then(|i| i.parse::<usize>().ok()) {
+            let id = rows.get(i).map(|r| format!("mix-percent-{}", r.key));
+            add(format!("Oil analysis, line {}", i + 1), id);
+        } else {
+            add(field(key).label.to_string(), Some(format!("f-{key}")));
+        }
+    }
+    state.plan.with(|r| {
+        for e in r.as_ref().err().map(|e| e.errors.as_slice()).unwrap_or_default() {
+            let visible = FIELDS.iter().filter(|f| f.path == e.field).find(|f| match f.key {
+                "station_pressure" => mode == PressureMode::Station,
+                "sea_level_pressure" => mode == PressureMode::SeaLevel,
+                _ => true,
+            });
+            match visible {
+                Some(f) => add(f.label.to_string(), Some(format!("f-{}", f.key))),
+                None if e.field.starts_with("oil.composition") => add("Oil".into(), Some("f-oil".into())),
+                None => add(e.message.clone(), None),
+            }
+        }
+    });
+    out
+}
+
+/// Focuses a field by id, opening its folded section first.
+fn focus_field(id: &str) {
+    let Some(el) = web_sys::window().and_then(|w| w.document()).and_then(|d| d.get_element_by_id(id)) else {
+        return;
+    };
+    crate::components::inputs::open_section_of(&el);
+    if let Ok(el) = el.dyn_into::<web_sys::HtmlElement>() {
+        let _ = el.focus();
+    }
+}
+
+/// Names the fields to fix, each a link that takes the grower there.
+#[component]
+pub fn FixList() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let list_state = state.clone();
+    let list = move || failing_fields(&list_state);
+    view! {
+        <ul class="fix-list">
+            {move || list().into_iter().map(|(label, id)| match id {
+                Some(id) => {
+                    let href = format!("#{id}");
+                    view! { <li><a href=href on:click=move |ev| { ev.prevent_default(); focus_field(&id); }>{label}</a></li> }.into_any()
+                }
+                None => view! { <li>{label}</li> }.into_any(),
+            }).collect_view()}
+        </ul>
+    }
 }
 
 /// One labelled value; `out` names it for tests and assistive tools.
@@ -52,20 +146,35 @@ fn likely(a: &Answer, show: impl Fn(f64) -> String) -> String {
 #[component]
 pub fn Headline() -> impl IntoView {
     let state = expect_context::<AppState>();
-    let plan = state.plan;
-    let failing = move || plan.with(|r| r.as_ref().err().map(|e| e.errors.len()));
+    let plan = state.shown;
+    let stale = state.stale;
+    let good = state.good;
+    let units_signal = state.units;
+    let summary = move || {
+        let system = units_signal.get();
+        good.with(|g| g.as_ref().map(|(s, _)| units::with_system(system, || charge_summary(s))))
+    };
+    let fuel_now = state.fuel;
+    let fuel_of =
+        move || good.with(|g| g.as_ref().map(|(s, _)| s.boiler.fuel)).unwrap_or_else(|| fuel_now.get());
     view! {
-        <section class="headline" aria-labelledby="h-headline" aria-live="polite">
+        <section class="headline" class:stale=move || stale.get() aria-labelledby="h-headline" aria-live="polite">
             <h2 id="h-headline">"The run at a glance"</h2>
-            <Show when=move || failing().is_some()>
-                <p class="notice" data-out="plan_blocked">
-                    {move || format!("Fix the {} marked field(s) to see the plan.", failing().unwrap_or(0))}
-                </p>
+            <p class="summary" data-out="charge_summary">{move || summary().map(|s| format!("For {s}"))}</p>
+            <Show when=move || stale.get()>
+                <div class="notice stale-note" role="alert" data-out="plan_stale">
+                    <p>{move || if summary().is_some() {
+                        "These answers are for your last complete entries, not the form as it is now. Fix:"
+                    } else {
+                        "No plan yet. Fix:"
+                    }}</p>
+                    <FixList />
+                </div>
             </Show>
             <div class="cards">
                 <Card label="Steam for the run" out="steam_total"
                     value=from_plan(plan, |p| units::mass(p.ranges.steam_kg.central))
-                    note=from_plan(plan, |p| format!("{} kg/h from the boiler; {}", units::sig3(p.run.steam_rate_kg_per_s * 3600.0), likely(&p.ranges.steam_kg, units::mass))) />
+                    note=from_plan(plan, |p| format!("{} from the boiler; {}", units::kg_per_hour(p.run.steam_rate_kg_per_s), likely(&p.ranges.steam_kg, units::mass))) />
                 <Card label="Water used" out="water_total"
                     value=from_plan(plan, |p| units::volume(p.ranges.water_total_kg.central / 1000.0))
                     note=from_plan(plan, |p| format!("boiler {} + cooling {}", units::volume(p.water_use.boiler_feed_kg / 1000.0), units::volume(p.water_use.cooling_water_kg / 1000.0))) />
@@ -85,18 +194,18 @@ pub fn Headline() -> impl IntoView {
                     value=from_plan(plan, |p| units::duration(p.run.total_time_s))
                     note=from_plan(plan, |p| format!("{} of distilling, {}", units::duration(p.run.time_after_first_drop_s), likely(&p.ranges.run_time_s, units::duration))) />
                 <Card label="Fuel for the run" out="fuel_total"
-                    value=from_plan(plan, |p| format!("{} {}", units::sig3(p.energy.fuel_amount), p.energy.fuel_unit))
-                    note=from_plan(plan, |p| likely(&p.ranges.fuel_amount, |v| format!("{} {}", units::sig3(v), p.energy.fuel_unit))) />
+                    value=from_plan(plan, move |p| units::fuel(p.energy.fuel_amount, fuel_of()))
+                    note=from_plan(plan, move |p| likely(&p.ranges.fuel_amount, |v| units::fuel(v, fuel_of()))) />
                 <Card label="Oil to expect" out="oil_volume"
                     value=from_plan(plan, |p| if p.yield_estimate.hydrosol_is_the_product {
                         "almost none".to_string()
                     } else {
-                        units::volume(p.yield_estimate.oil_volume_m3.central)
+                        units::oil_volume(p.yield_estimate.oil_volume_m3.central)
                     })
                     note=from_plan(plan, |p| if p.yield_estimate.hydrosol_is_the_product {
                         format!("{} stays dissolved: the hydrosol is the product", units::mass(p.yield_estimate.dissolved_in_hydrosol_kg))
                     } else {
-                        format!("separable oil, likely {} to {}", units::volume(p.yield_estimate.oil_volume_m3.low), units::volume(p.yield_estimate.oil_volume_m3.high))
+                        format!("separable oil, likely {} to {}", units::oil_volume(p.yield_estimate.oil_volume_m3.low), units::oil_volume(p.yield_estimate.oil_volume_m3.high))
                     }) />
                 <Card label="Hydrosol" out="hydrosol_total"
                     value=from_plan(plan, |p| units::volume(p.run.hydrosol_volume_m3))
@@ -136,13 +245,14 @@ fn doubt_words(u: Uncertainty) -> &'static str {
 }
 
 /// Warning codes about the data rather than about the run: they belong with the ranges.
-const DATA_NOTES: [&str; 2] = ["correlation_out_of_range", "estimated_vapour_pressure"];
+const DATA_NOTES: [&str; 3] =
+    ["correlation_out_of_range", "estimated_vapour_pressure", "still_volume_estimated"];
 
 /// How sure the answers are: the biggest source of doubt, and notes about the data.
 #[component]
 fn HowSure() -> impl IntoView {
     let state = expect_context::<AppState>();
-    let plan = state.plan;
+    let plan = state.shown;
     let lines = move || {
         plan.with(|r| {
             r.as_ref()
@@ -184,7 +294,7 @@ fn HowSure() -> impl IntoView {
 #[component]
 pub fn Warnings() -> impl IntoView {
     let state = expect_context::<AppState>();
-    let plan = state.plan;
+    let plan = state.shown;
     let list = move || {
         plan.with(|r| {
             r.as_ref()
@@ -214,7 +324,7 @@ pub fn Warnings() -> impl IntoView {
 #[component]
 fn RecoveryChart() -> impl IntoView {
     let state = expect_context::<AppState>();
-    let plan = state.plan;
+    let plan = state.shown;
     let points = move || {
         plan.with(|r| {
             r.as_ref()
@@ -249,29 +359,33 @@ fn RecoveryChart() -> impl IntoView {
     }
 }
 
-/// A height in millimetres.
+/// A short height (mm, or inches).
 fn mm(m: f64) -> String {
-    format!("{} mm", units::fixed(m * 1000.0, 0))
+    units::millimetres(m)
 }
 
 /// The full plan, panel by panel.
 #[component]
 pub fn Details() -> impl IntoView {
     let state = expect_context::<AppState>();
-    let plan = state.plan;
+    let plan = state.shown;
+    let good = state.good;
+    let fuel_now = state.fuel;
+    let fuel_of =
+        move || good.with(|g| g.as_ref().map(|(s, _)| s.boiler.fuel)).unwrap_or_else(|| fuel_now.get());
     let p = move |f: fn(&Plan) -> String| from_plan(plan, f);
     view! {
-        <section class="details" aria-labelledby="h-details">
+        <section class="details" class:stale=move || state.stale.get() aria-labelledby="h-details">
             <h2 id="h-details">"The plan in full"</h2>
 
             <h3>"Steam and time"</h3>
             <dl>
                 <Row label="Air pressure at the still" out="pressure" value=p(|p| units::kpa(p.site.pressure_pa)) />
                 <Row label="Oil and water boil together at" out="codistillation_temperature" value=p(|p| units::celsius(p.codistillation.temperature_c)) />
-                <Row label="below water's own boiling point by" out="codistillation_lowering" value=p(|p| format!("{} K", units::fixed(p.codistillation.lowering_k, 1))) />
+                <Row label="below water's own boiling point by" out="codistillation_lowering" value=p(|p| units::kelvin(p.codistillation.lowering_k, 1)) />
                 <Row label="Least steam per kg of oil (a lower bound, at the start)" out="steam_per_kg_oil" value=p(|p| format!("{} kg", units::sig3(p.codistillation.min_steam_per_kg_oil))) />
                 <Row label="Least steam for this charge (a lower bound)" out="min_steam_charge" value=p(|p| format!("{} to the target, {} for all of it", units::mass(p.codistillation.min_steam_to_target_kg), units::mass(p.codistillation.min_steam_whole_charge_kg))) />
-                <Row label="Steam raised" out="steam_rate" value=p(|p| format!("{} kg/h", units::sig3(p.run.steam_rate_kg_per_s * 3600.0))) />
+                <Row label="Steam raised" out="steam_rate" value=p(|p| units::kg_per_hour(p.run.steam_rate_kg_per_s)) />
                 <Row label="Steam through the plant" out="specific_steam" value=p(|p| format!("{} kg/h per kg of charge", units::sig3(p.run.specific_steam_rate_kg_per_h_per_kg))) />
                 <Row label="Steam condensed warming the charge and still" out="startup_condensate" value=p(|p| units::mass(p.run.startup_condensate_kg)) />
                 <Row label="Steam after the first drop" out="distillate_steam" value=p(|p| units::mass(p.run.distillate_steam_kg)) />
@@ -293,11 +407,13 @@ pub fn Details() -> impl IntoView {
             <h3>"Heat and fuel"</h3>
             <dl>
                 <Row label="Heat reaching the water" out="useful_heat" value=p(|p| units::kilowatts(p.run.useful_heat_w)) />
-                <Row label="Fuel for the run" out="fuel" value=p(|p| format!("{} {}", units::sig3(p.energy.fuel_amount), p.energy.fuel_unit)) />
-                <Row label="Heat: boiler water / charge / still" out="heat_split" value=p(|p| format!("{} / {} / {} MJ",
-                    units::sig3(p.energy.boiler_water_heating_j / 1e6), units::sig3(p.energy.charge_heating_j / 1e6), units::sig3(p.energy.still_heating_j / 1e6))) />
-                <Row label="Heat: lost through the wall / carried to the condenser" out="heat_out" value=p(|p| format!("{} / {} MJ",
-                    units::sig3(p.energy.wall_loss_j / 1e6), units::sig3(p.energy.steam_to_condenser_j / 1e6))) />
+                <Row label="Fuel for the run" out="fuel" value=from_plan(plan, move |p| units::fuel(p.energy.fuel_amount, fuel_of())) />
+                <Row label="Heat: boiler water / charge / still" out="heat_split" value=p(|p| format!("{} / {} / {}",
+                    units::megajoules(p.energy.boiler_water_heating_j), units::megajoules(p.energy.charge_heating_j), units::megajoules(p.energy.still_heating_j))) />
+                <Row label="Still volume the wall loss is reckoned on" out="still_volume_used" value=p(|p| format!("{}{}", units::volume(p.run.still_volume_used_m3),
+                    if p.run.still_volume_estimated { " (estimated from the charge)" } else { "" })) />
+                <Row label="Heat: lost through the wall / carried to the condenser" out="heat_out" value=p(|p| format!("{} / {}",
+                    units::megajoules(p.energy.wall_loss_j), units::megajoules(p.energy.steam_to_condenser_j))) />
                 <Row label="Cost of the run" out="cost" value=p(|p| match &p.energy.cost {
                     None => "add prices under “Run, season and costs”".to_string(),
                     Some(c) => format!("{} {}{}", units::sig3(c.total), c.currency,
@@ -315,7 +431,7 @@ pub fn Details() -> impl IntoView {
                     _ => "– (jacketed condenser)".to_string(),
                 }) />
                 <Row label="Tub warms over the run, without a feed" out="tub_rise" value=p(|p| p.condenser.tub_rise_over_run_k
-                    .map(|k| format!("{} K", units::fixed(k, 0))).unwrap_or_else(|| "– (jacketed condenser)".into())) />
+                    .map(|k| units::kelvin(k, 0)).unwrap_or_else(|| "– (jacketed condenser)".into())) />
                 <Row label="Tub at the end of the run" out="tub_end" value=p(|p| p.condenser.tub_end_c
                     .map(units::celsius).unwrap_or_else(|| "– (jacketed condenser)".into())) />
                 <Row label="Distillate leaves at" out="distillate_outlet" value=p(|p| units::celsius(p.condenser.distillate_outlet_c)) />
@@ -398,7 +514,7 @@ pub fn Details() -> impl IntoView {
                     <Row label="Charges" out="season_charges" value=p(|p| p.season.as_ref().map(|s| s.charges.to_string()).unwrap_or_default()) />
                     <Row label="First charge, from cold / each later one, hot" out="season_charge_times" value=p(|p| p.season.as_ref().map(|s| format!("{} / {}", units::duration(s.first_charge_time_s), units::duration(s.later_charge_time_s))).unwrap_or_default()) />
                     <Row label="Still time, with turnarounds" out="season_time" value=p(|p| p.season.as_ref().map(|s| format!("{} h", units::sig3(s.total_time_s / 3600.0))).unwrap_or_default()) />
-                    <Row label="Fuel" out="season_fuel" value=p(|p| p.season.as_ref().map(|s| format!("{} {}", units::sig3(s.fuel_amount), p.energy.fuel_unit)).unwrap_or_default()) />
+                    <Row label="Fuel" out="season_fuel" value=from_plan(plan, move |p| p.season.as_ref().map(|s| units::fuel(s.fuel_amount, fuel_of())).unwrap_or_default()) />
                     <Row label="Water" out="season_water" value=p(|p| p.season.as_ref().map(|s| units::volume(s.water_kg / 1000.0)).unwrap_or_default()) />
                     <Row label="Oil" out="season_oil" value=p(|p| p.season.as_ref().map(|s| units::mass(s.oil_kg)).unwrap_or_default()) />
                 </dl>

@@ -67,7 +67,7 @@ pub(super) fn stepped_run(
     let h_fg = site.latent_heat_j_per_kg;
     let (power_w, steam_kg_per_s) = timeline::heat_source(s, r, h_fg);
     let t_cd_c = eq.temperature_k - 273.15;
-    let wall_w = timeline::wall_loss_w(s, knobs, t_cd_c);
+    let wall_w = timeline::wall_loss_w(s, r, knobs, t_cd_c);
     let boil_c = site.plan.water_boiling_point_c;
     let fill = s.boiler.usable_water_kg;
     let time_to_boil_s = stepped_boil_s(fill, r.feed_temperature_c, boil_c, power_w, site.pressure_pa);

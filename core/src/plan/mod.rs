@@ -34,7 +34,7 @@ mod timeline;
 mod validate;
 mod warnings;
 
-pub use validate::validate;
+pub use validate::{ESTIMATED_FILL_SHARE, ESTIMATED_PACKING_KG_PER_M3, estimated_still_volume_m3, validate};
 
 macro_rules! output {
     ($($item:item)*) => { $(
@@ -190,6 +190,11 @@ output! {
         pub refills: u32,
         /// Share of the charge's oil carried over, by time since the first drop: (s, fraction).
         pub recovery_curve: Vec<(f64, f64)>,
+        /// The still's volume the wall losses are reckoned on, m³: the grower's, or estimated
+        /// from the charge when not given (`still_volume_estimated`).
+        pub still_volume_used_m3: f64,
+        /// Whether `still_volume_used_m3` is an estimate from the charge and its packing.
+        pub still_volume_estimated: bool,
     }
 
     pub struct EnergyPlan {
@@ -434,6 +439,9 @@ pub struct Resolved {
     pub rate_constant_spread: (f64, f64),
     pub distillate_outlet_c: f64,
     pub confidences: Vec<Confidence>,
+    /// The still's volume, m³: given, or estimated from the charge (`validate.rs`).
+    pub still_volume_m3: f64,
+    pub still_volume_estimated: bool,
 }
 
 fn compute_error(field: &str, value: f64, valid: &str, message: &str) -> Box<FieldError> {

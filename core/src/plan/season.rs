@@ -27,8 +27,7 @@ struct HotRestart {
 /// and the water left in the boiler hold (Newton cooling at the hot temperature: an upper
 /// bound, as the still cools while it stands).
 fn turnaround_loss_j(s: &Scenario, tl: &Timeline, left_in_boiler_kg: f64, t_hot_c: f64) -> f64 {
-    let area =
-        s.still.volume_m3.map(|v| heat::cylinder_surface_m2(v, s.still.height_to_diameter)).unwrap_or(0.0);
+    let area = heat::cylinder_surface_m2(tl.plan.still_volume_used_m3, s.still.height_to_diameter);
     let rate_w = heat::wall_loss_w(s.still.wall_u_w_per_m2_k, area, t_hot_c, s.site.ambient_temperature_c);
     let stored_j = tl.still_heating_j + left_in_boiler_kg * tl.heat_per_kg_fill_j;
     (rate_w * s.run.turnaround_min * 60.0).min(stored_j)

@@ -38,11 +38,10 @@ pub(super) fn heat_source(s: &Scenario, r: &Resolved, h_fg: f64) -> (f64, f64) {
     (useful_w, useful_w / h_fg)
 }
 
-/// Heat lost through the still's wall at the co-distillation temperature (U A ΔT); zero when
-/// the still's volume is not given.
-pub(super) fn wall_loss_w(s: &Scenario, knobs: &Knobs, inside_c: f64) -> f64 {
-    let area =
-        s.still.volume_m3.map(|v| heat::cylinder_surface_m2(v, s.still.height_to_diameter)).unwrap_or(0.0);
+/// Heat lost through the still's wall at the co-distillation temperature (U A ΔT), on the
+/// given volume or, without one, the volume estimated from the charge (`Resolved`).
+pub(super) fn wall_loss_w(s: &Scenario, r: &Resolved, knobs: &Knobs, inside_c: f64) -> f64 {
+    let area = heat::cylinder_surface_m2(r.still_volume_m3, s.still.height_to_diameter);
     let u = s.still.wall_u_w_per_m2_k * knobs.wall_u_factor;
     heat::wall_loss_w(u, area, inside_c, s.site.ambient_temperature_c)
 }
@@ -111,8 +110,8 @@ fn run_course(
     );
     if course.time_to_target_s.is_none() {
         return Err(compute_error(
-            "boiler.heat_input_w",
-            s.boiler.heat_input_w,
+            steam_source_field(s).0,
+            steam_source_field(s).1,
             "enough steam to reach the target within a week",
             "the steam is far too little for this charge: the run would last more than a week",
         ));
@@ -184,11 +183,11 @@ pub(super) fn timeline(
     })?;
     let heat_per_kg_fill_j = site.saturated_liquid_enthalpy_j_per_kg - h_feed;
     let (useful_w, steam_rate) = heat_source(s, r, h_fg);
-    let wall_loss_w = wall_loss_w(s, knobs, t_cd_c);
+    let wall_loss_w = wall_loss_w(s, r, knobs, t_cd_c);
     if wall_loss_w >= 0.9 * useful_w {
         return Err(compute_error(
-            "boiler.heat_input_w",
-            s.boiler.heat_input_w,
+            steam_source_field(s).0,
+            steam_source_field(s).1,
             &format!("enough to outrun the still's wall loss of about {:.0} W", wall_loss_w),
             "the boiler is too small: almost all its heat is lost through the still wall",
         ));
@@ -249,6 +248,8 @@ pub(super) fn timeline(
         recovery_curve: course.curve,
         reference_rate_constant_per_min: r.rate_constant_per_s * 60.0,
         vaporisation_efficiency,
+        still_volume_used_m3: r.still_volume_m3,
+        still_volume_estimated: r.still_volume_estimated,
     };
     Ok(Timeline {
         plan,
@@ -263,4 +264,13 @@ pub(super) fn timeline(
         returned_kg,
         steam_velocity_m_per_s: steam_velocity_m_per_s(s, eq, distillate_rate),
     })
+}
+
+/// The field that sets the steam: a measured steam rate when given, else the heat input. An
+/// error about too little steam is the grower's to fix there.
+fn steam_source_field(s: &Scenario) -> (&'static str, f64) {
+    match s.boiler.steam_rate_kg_per_h {
+        Some(rate) => ("boiler.steam_rate_kg_per_h", rate),
+        None => ("boiler.heat_input_w", s.boiler.heat_input_w),
+    }
 }

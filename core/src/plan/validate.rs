@@ -160,6 +160,10 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
         // 1 L: a laboratory flask; 50 m³: past the largest field stills (common practice).
         ck.range("still.volume_m3", v, 0.001, 50.0, "m³");
     }
+    let (still_volume_m3, still_volume_estimated) = match s.still.volume_m3 {
+        Some(v) => (v, false),
+        None => (estimated_still_volume_m3(s.charge.plant_mass_kg, crop), true),
+    };
     // A shallow pan (0.3) to a tall column (5); outside that the wall-area formula means little.
     ck.range("still.height_to_diameter", s.still.height_to_diameter, 0.3, 5.0, "");
     // None (a still whose warming is not counted) up to a 20 t industrial vessel.
@@ -225,8 +229,20 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
     let c = &s.condenser;
     let t_d = c.distillate_outlet_c.or(crop.map(|c| c.distillate_temperature_c)).unwrap_or(30.0);
     // Liquid water that can still cool: just above freezing to 40 °C.
-    ck.range("condenser.cooling_water_inlet_c", c.cooling_water_inlet_c, 0.5, 40.0, "°C");
-    if let Some(b) = boiling_c {
+    let inlet_ok = ck.range("condenser.cooling_water_inlet_c", c.cooling_water_inlet_c, 0.5, 40.0, "°C");
+    // The distillate must leave at least 1 K above the cooling water. When its temperature is
+    // the crop's advice (not typed), the cooling water is what is too warm: said on the inlet.
+    let inlet_too_warm = inlet_ok && c.distillate_outlet_c.is_none() && c.cooling_water_inlet_c + 1.0 > t_d;
+    if inlet_too_warm {
+        ck.push(
+            "condenser.cooling_water_inlet_c",
+            fmt_num(c.cooling_water_inlet_c),
+            format!("at most {} °C, 1 K under the distillate's {} °C", fmt_num(t_d - 1.0), fmt_num(t_d)),
+            format!("too warm to cool the distillate to the crop's {} °C", fmt_num(t_d)),
+        );
+        ck.set_range(0.5, t_d - 1.0);
+    }
+    if let (Some(b), true, false) = (boiling_c, inlet_ok, inlet_too_warm) {
         ck.range(
             "condenser.cooling_water_outlet_c",
             c.cooling_water_outlet_c,
@@ -376,7 +392,31 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
         rate_constant_spread,
         distillate_outlet_c: t_d,
         confidences,
+        still_volume_m3,
+        still_volume_estimated,
     })
+}
+
+/// Share of a still's body a charge fills when its volume is estimated: bodies are loaded to
+/// about four fifths, leaving room under the lid for the steam to gather (common practice, no
+/// source).
+pub const ESTIMATED_FILL_SHARE: f64 = 0.8;
+/// Packing density for an estimate without a crop, kg/m³: 175, the value most crop presets
+/// share (16 of 33 rows of the crop table).
+pub const ESTIMATED_PACKING_KG_PER_M3: f64 = 175.0;
+
+/// A still volume estimated from the charge, m³: V = m / (ρ_packed · f), with the crop's packing
+/// density ρ_packed (or 175 kg/m³ without a crop) and the fill share f = 0.8. So an unstated
+/// volume never makes the wall losses vanish.
+///
+/// ```
+/// use stillroom_core::plan::estimated_still_volume_m3;
+/// // 14 kg at 175 kg/m³, filled to 80 %: 0.1 m³.
+/// assert!((estimated_still_volume_m3(14.0, None) - 0.1).abs() < 1e-12);
+/// ```
+pub fn estimated_still_volume_m3(plant_mass_kg: f64, crop: Option<&crops::Crop>) -> f64 {
+    let packing = crop.map_or(ESTIMATED_PACKING_KG_PER_M3, |c| c.charge_density_kg_per_m3);
+    plant_mass_kg / (packing * ESTIMATED_FILL_SHARE)
 }
 
 /// Mixture shares are rescaled to 100 % only within this tolerance: 98 to 102 % is an analysis
@@ -655,5 +695,34 @@ fn check_law(ck: &mut Checker, f: &str, law: &CustomVapourPressure) {
             "a law rising with temperature".into(),
             format!("this law cannot be used: see {first}"),
         );
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use crate::plan::plan;
+    use crate::scenario::Scenario;
+
+    /// Cooling water warmer than the crop's advised distillate temperature is the cooling
+    /// water's fault: the error names the inlet, not the distillate field the grower left empty.
+    #[test]
+    fn warm_cooling_water_is_reported_on_the_inlet() {
+        let mut s = Scenario::default();
+        s.condenser.distillate_outlet_c = None;
+        s.condenser.cooling_water_inlet_c = 39.0;
+        s.condenser.cooling_water_outlet_c = 45.0;
+        let errors = plan(&s).unwrap_err();
+        assert!(errors.on("condenser.cooling_water_inlet_c").is_some(), "{errors:?}");
+        assert!(errors.on("condenser.distillate_outlet_c").is_none(), "{errors:?}");
+    }
+
+    /// A measured steam rate far too small for the charge is said on the steam rate field.
+    #[test]
+    fn too_little_measured_steam_is_reported_on_the_steam_rate() {
+        let mut s = Scenario::default();
+        s.boiler.steam_rate_kg_per_h = Some(0.01);
+        let errors = plan(&s).unwrap_err();
+        assert!(errors.on("boiler.steam_rate_kg_per_h").is_some(), "{errors:?}");
+        assert!(errors.on("boiler.heat_input_w").is_none(), "{errors:?}");
     }
 }

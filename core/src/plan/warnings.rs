@@ -20,6 +20,15 @@ const TOUCHY_INTERFACE: f64 = 20.0;
 /// A charge this far over the still's usual packing is overpacked (common practice, no source).
 const OVERPACKED_RATIO: f64 = 1.25;
 
+/// Leafy and flowering herbs hold a few per cent of oil at most; over 10 % is most likely a
+/// typing slip (common practice, no source), unless the crop's own high end is above it (dried
+/// buds and seeds in the crop table).
+const MOST_OIL_ANY_CROP_PERCENT: f64 = 10.0;
+/// A barometer more than this share off the standard atmosphere at the stated altitude is most
+/// likely a misread (the weather moves pressure by a few per cent at most: the lowest and highest
+/// sea-level pressures on record, 870 and 1084 hPa, are -14 % and +7 %).
+const BAROMETER_PLAUSIBLE_SHARE: f64 = 0.10;
+
 /// Everything the warnings read.
 pub(super) struct Facts<'a> {
     pub scenario: &'a Scenario,
@@ -42,6 +51,7 @@ fn warn(list: &mut Vec<Warning>, code: &str, message: String) {
 /// yield, capacity.
 pub(super) fn warnings(f: &Facts) -> Vec<Warning> {
     let mut list = Vec::new();
+    plausibility_warnings(f, &mut list);
     data_warnings(f, &mut list);
     density_warnings(f, &mut list);
     run_warnings(f, &mut list);
@@ -51,7 +61,63 @@ pub(super) fn warnings(f: &Facts) -> Vec<Warning> {
     list
 }
 
+/// Entries that are possible but unlikely: said plainly, so a slip is caught before the run.
+fn plausibility_warnings(f: &Facts, list: &mut Vec<Warning>) {
+    let oil_percent = f.resolved.oil_content_fraction * 100.0;
+    let most = f
+        .resolved
+        .crop
+        .map_or(MOST_OIL_ANY_CROP_PERCENT, |c| c.oil_content_percent.high.max(MOST_OIL_ANY_CROP_PERCENT));
+    if oil_percent > most {
+        warn(
+            list,
+            "oil_content_implausible",
+            format!(
+                "{oil_percent:.1} % oil is more than such a crop holds (at most about {most:.0} %): check the oil content, which sets every oil figure here."
+            ),
+        );
+    }
+    let Some(b) = &f.scenario.site.barometer else { return };
+    let (read, standard, what) = match b.reference {
+        crate::scenario::BarometerReference::Station => (
+            b.pressure_pa,
+            crate::atmosphere::standard_pressure_pa(f.scenario.site.altitude_m).ok(),
+            "at the stated altitude",
+        ),
+        crate::scenario::BarometerReference::SeaLevel => {
+            (b.pressure_pa, Some(crate::atmosphere::SEA_LEVEL_PRESSURE_PA), "at sea level")
+        }
+    };
+    if let Some(std_pa) = standard
+        && ((read - std_pa) / std_pa).abs() > BAROMETER_PLAUSIBLE_SHARE
+    {
+        warn(
+            list,
+            "barometer_implausible",
+            format!(
+                "The barometer reads {:.1} kPa, {:.0} % off the standard {:.1} kPa {what}: check the reading, its unit and the altitude.",
+                read / 1e3,
+                (read - std_pa) / std_pa * 100.0,
+                std_pa / 1e3
+            ),
+        );
+    }
+}
+
 fn data_warnings(f: &Facts, list: &mut Vec<Warning>) {
+    if f.resolved.still_volume_estimated {
+        warn(
+            list,
+            "still_volume_estimated",
+            format!(
+                "The still's volume is not given: its wall losses are reckoned on about {:.0} L, the charge at {} packing filling four fifths of the body. Give the volume to firm them up.",
+                f.resolved.still_volume_m3 * 1e3,
+                f.resolved
+                    .crop
+                    .map_or("usual".to_string(), |c| format!("{:.0} kg/m³", c.charge_density_kg_per_m3)),
+            ),
+        );
+    }
     let components = &f.equilibrium.components;
     // Estimates get their own, stronger warning below.
     for c in components.iter().filter(|c| !c.correlation_in_range && c.confidence != Confidence::Estimated) {
@@ -333,5 +399,80 @@ fn capacity_warnings(f: &Facts, list: &mut Vec<Warning>) {
                 mass, cap
             ),
         );
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use crate::crops::CROPS;
+    use crate::plan::plan;
+    use crate::scenario::{Barometer, BarometerReference, Scenario};
+
+    fn codes(s: &Scenario) -> Vec<(String, String)> {
+        plan(s).unwrap().warnings.into_iter().map(|w| (w.code, w.message.to_lowercase())).collect()
+    }
+
+    /// Pairs of advice that pull opposite ways; no plan may give both.
+    const OPPOSITE: [(&str, &str); 4] = [
+        ("more steam", "less steam"),
+        ("more steam", "less heat"),
+        ("smaller flame", "more steam per hour"),
+        ("more heat", "less heat"),
+    ];
+
+    #[test]
+    fn no_two_warnings_give_opposite_advice_on_any_crop_preset() {
+        for crop in CROPS {
+            for (mass, volume) in [(None, None), (Some(5.0), Some(0.02)), (Some(200.0), Some(0.1))] {
+                let mut s = Scenario::default();
+                s.charge.crop = Some(crop.id.to_string());
+                if let Some(m) = mass {
+                    s.charge.plant_mass_kg = m;
+                }
+                s.still.volume_m3 = volume.or(s.still.volume_m3);
+                let Ok(p) = plan(&s) else { continue };
+                let text: Vec<String> = p.warnings.iter().map(|w| w.message.to_lowercase()).collect();
+                for (a, b) in OPPOSITE {
+                    let says = |needle: &str| text.iter().any(|t| t.contains(needle));
+                    assert!(!(says(a) && says(b)), "{}: “{a}” and “{b}” together: {text:#?}", crop.id);
+                }
+            }
+        }
+    }
+
+    #[test]
+    fn an_oil_content_above_any_crop_is_questioned() {
+        let mut s = Scenario::default();
+        s.charge.oil_content_percent = Some(12.0);
+        assert!(codes(&s).iter().any(|(c, _)| c == "oil_content_implausible"));
+        s.charge.oil_content_percent = Some(3.0);
+        assert!(!codes(&s).iter().any(|(c, _)| c == "oil_content_implausible"));
+    }
+
+    #[test]
+    fn a_charge_far_above_the_still_is_called_overpacked() {
+        let mut s = Scenario::default();
+        // 50 L of lavender at its packing holds well under the 40 kg loaded.
+        s.still.volume_m3 = Some(0.05);
+        s.charge.plant_mass_kg = 40.0;
+        s.boiler.heat_input_w = 60_000.0;
+        assert!(codes(&s).iter().any(|(c, _)| c == "overpacked"), "{:?}", codes(&s));
+        // An estimated volume is sized to the charge: never overpacked, but said.
+        s.still.volume_m3 = None;
+        let c = codes(&s);
+        assert!(!c.iter().any(|(c, _)| c == "overpacked"));
+        assert!(c.iter().any(|(c, _)| c == "still_volume_estimated"));
+    }
+
+    #[test]
+    fn a_barometer_far_from_the_standard_atmosphere_is_questioned() {
+        let mut s = Scenario::default();
+        s.site.altitude_m = 0.0;
+        // 80 kPa at sea level is 21 % under 101.325 kPa (USSA 1976): a misread or a wrong altitude.
+        s.site.barometer = Some(Barometer { pressure_pa: 80_000.0, reference: BarometerReference::Station });
+        assert!(codes(&s).iter().any(|(c, _)| c == "barometer_implausible"));
+        // 99 kPa is 2 % under: weather.
+        s.site.barometer = Some(Barometer { pressure_pa: 99_000.0, reference: BarometerReference::Station });
+        assert!(!codes(&s).iter().any(|(c, _)| c == "barometer_implausible"));
     }
 }
