@@ -15,7 +15,7 @@ use crate::units::UnitSystem;
 use leptos::prelude::*;
 use serde::{Deserialize, Serialize};
 use stillroom_core::calibration::RunRecord;
-use stillroom_core::heat::{Fuel, Metal};
+use stillroom_core::heat::{Appliance, Fuel, Metal};
 use stillroom_core::scenario::{
     BarometerReference, CondenserKind, CustomVapourPressure, OilComposition, OilPart, Scenario,
 };
@@ -64,6 +64,12 @@ pub struct AppState {
     pub oil_choice: RwSignal<String>,
     pub pressure_mode: RwSignal<PressureMode>,
     pub fuel: RwSignal<Fuel>,
+    /// What the fuel fires; `None` for the fuel's usual appliance.
+    pub appliance: RwSignal<Option<Appliance>>,
+    /// Whether the separated water goes back to the boiler (cohobation).
+    pub cohobation: RwSignal<bool>,
+    /// Whether the oil is taken as non-ideal (UNIFAC activity coefficients).
+    pub non_ideal: RwSignal<bool>,
     pub metal: RwSignal<Metal>,
     pub condenser_kind: RwSignal<CondenserKind>,
     /// The lines of the grower's own oil analysis.
@@ -159,6 +165,9 @@ impl AppState {
         let next_row_key = RwSignal::new(0);
         let own_name = RwSignal::new(String::new());
         let fuel = RwSignal::new(base.boiler.fuel);
+        let appliance = RwSignal::new(base.boiler.appliance);
+        let cohobation = RwSignal::new(base.run.cohobation);
+        let non_ideal = RwSignal::new(base.oil.non_ideal);
         let metal = RwSignal::new(base.still.metal);
         let condenser_kind = RwSignal::new(base.condenser.kind);
         let units = RwSignal::new(load_units());
@@ -247,6 +256,9 @@ impl AppState {
             };
             s.costs.currency = currency.get().trim().to_string();
             s.boiler.fuel = fuel.get();
+            s.boiler.appliance = appliance.get();
+            s.run.cohobation = cohobation.get();
+            s.oil.non_ideal = non_ideal.get();
             s.still.metal = metal.get();
             s.condenser.kind = kind;
             Derived { scenario: s, text_errors }
@@ -303,6 +315,9 @@ impl AppState {
             oil_choice,
             pressure_mode,
             fuel,
+            appliance,
+            cohobation,
+            non_ideal,
             metal,
             condenser_kind,
             mixture,
@@ -368,6 +383,9 @@ impl AppState {
         self.mixture.set(rows);
         self.own_name.set(s.custom_compounds.first().map(|c| c.name.clone()).unwrap_or_default());
         self.fuel.set(s.boiler.fuel);
+        self.appliance.set(s.boiler.appliance);
+        self.cohobation.set(s.run.cohobation);
+        self.non_ideal.set(s.oil.non_ideal);
         self.currency.set(s.costs.currency.clone());
         self.metal.set(s.still.metal);
         self.condenser_kind.set(s.condenser.kind);

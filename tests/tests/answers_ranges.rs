@@ -64,3 +64,27 @@ async fn the_run_shows_its_likely_range_and_the_biggest_doubt() -> Result<(), Bo
     }
     page.close().await
 }
+
+#[tokio::test]
+async fn the_appliance_and_cohobation_change_the_plan_from_the_page() -> Result<(), BoxError> {
+    let page = browser::open().await?;
+    page.goto("").await?;
+    page.client.execute("localStorage.clear();", vec![]).await?;
+    page.client.refresh().await?;
+    let c = &page.client;
+    c.execute("document.querySelectorAll('details').forEach((d) => { d.open = true; });", vec![]).await?;
+    // The same propane in a boiler with its own firebox: 75 % (US DOE Steam Tip Sheet #4), not
+    // the 45 % of a burner under a kettle.
+    c.find(Locator::Id("f-appliance")).await?.select_by_value("jacketed_boiler").await?;
+    let placeholder =
+        c.find(Locator::Id("f-efficiency")).await?.attr("placeholder").await?.unwrap_or_default();
+    assert!(placeholder.starts_with("75"), "{placeholder}");
+    // An electric element cannot burn propane: the message sits beside the picker.
+    c.find(Locator::Id("f-appliance")).await?.select_by_value("immersion_element").await?;
+    text_when(c, "#e-appliance", |t| t.contains("cannot use")).await?;
+    c.find(Locator::Id("f-appliance")).await?.select_by_value("usual").await?;
+    // Returning the waters: the hydrosol card says how much went back to the boiler.
+    c.find(Locator::Id("f-cohobation")).await?.click().await?;
+    text_when(c, "[data-out=hydrosol_total] + .card-note", |t| t.contains("returned to the boiler")).await?;
+    page.close().await
+}

@@ -8,7 +8,7 @@ use crate::units::UnitSystem;
 use leptos::prelude::*;
 use stillroom_core::compounds::COMPOUNDS;
 use stillroom_core::crops::CROPS;
-use stillroom_core::heat::{Fuel, Metal};
+use stillroom_core::heat::{Appliance, Fuel, Metal};
 use stillroom_core::scenario::CondenserKind;
 
 /// The message shown beside a field: its own text first, then the core's verdict on its value,
@@ -97,7 +97,10 @@ fn fallback(f: &NumField, state: &AppState) -> String {
         ("oil_density", Some(c)) => shown(c.oil_density_kg_per_m3, "crop"),
         ("rate_constant", Some(c)) => shown(c.rate_constant_per_min.typical, "crop"),
         ("distillate_out", Some(c)) => shown(c.distillate_temperature_c, "crop"),
-        ("efficiency", _) => shown(state.fuel.get().usual_appliance().data().typical_efficiency, "typical"),
+        ("efficiency", _) => shown(
+            state.appliance.get().unwrap_or(state.fuel.get().usual_appliance()).data().typical_efficiency,
+            "typical",
+        ),
         ("still_volume", _) => "from the charge".to_string(),
         _ => String::new(),
     }
@@ -447,6 +450,86 @@ pub fn FuelPicker() -> impl IntoView {
     view! { <ChoicePicker id="f-fuel" label="Heat source" value=fuel options=FUELS /> }
 }
 
+/// What the fuel fires: the efficiency belongs to it, not to the fuel.
+const APPLIANCES: &[(Option<Appliance>, &str, &str)] = &[
+    (None, "usual", "The usual one for this fuel"),
+    (Some(Appliance::OpenBurner), "open_burner", "Gas burner under the boiler"),
+    (Some(Appliance::JacketedBoiler), "jacketed_boiler", "Boiler with its own firebox and flue"),
+    (Some(Appliance::ImmersionElement), "immersion_element", "Electric element in the water"),
+    (Some(Appliance::WoodFirebox), "wood_firebox", "Wood fire in a box under the boiler"),
+];
+
+/// The message the plan gives on one field that has no number box, if any.
+fn choice_error(state: &AppState, path: &'static str) -> Signal<String> {
+    let plan = state.plan;
+    Signal::derive(move || {
+        plan.with(|r| {
+            r.as_ref()
+                .err()
+                .and_then(|e| e.errors.iter().find(|e| e.field == path))
+                .map(|e| e.message.clone())
+        })
+        .unwrap_or_default()
+    })
+}
+
+/// Picks the appliance the fuel fires.
+#[component]
+pub fn AppliancePicker() -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let message = choice_error(&state, "boiler.appliance");
+    view! {
+        <ChoicePicker id="f-appliance" label="Fired in" value=state.appliance options=APPLIANCES />
+        <p class="error" id="e-appliance" aria-live="polite">{move || message.get()}</p>
+        <p class="hint">"Sets how much of the fuel's heat reaches the water; gas burners lose some at altitude."</p>
+    }
+}
+
+/// A yes/no setting as a large checkbox with its label and hint.
+#[component]
+fn Toggle(
+    id: &'static str,
+    label: &'static str,
+    hint: &'static str,
+    value: RwSignal<bool>,
+    #[prop(optional)] error_path: Option<&'static str>,
+) -> impl IntoView {
+    let state = expect_context::<AppState>();
+    let message = choice_error(&state, error_path.unwrap_or(""));
+    view! {
+        <div class="field toggle">
+            <label for=id>
+                <input type="checkbox" id=id prop:checked=move || value.get()
+                    on:change=move |ev| value.set(event_target_checked(&ev)) />
+                <span class="label">{label}</span>
+            </label>
+            <p class="error" aria-live="polite">{move || message.get()}</p>
+            <p class="hint">{hint}</p>
+        </div>
+    }
+}
+
+/// Whether the separated water goes back into the boiler.
+#[component]
+pub fn CohobationToggle() -> impl IntoView {
+    let value = expect_context::<AppState>().cohobation;
+    view! {
+        <Toggle id="f-cohobation" label="Return the separated water to the boiler (cohobation)"
+            hint="The oil dissolved in it comes over again; the boiler needs less fresh water." value=value />
+    }
+}
+
+/// Whether the oil's compounds are taken as a non-ideal mixture.
+#[component]
+pub fn NonIdealToggle() -> impl IntoView {
+    let value = expect_context::<AppState>().non_ideal;
+    view! {
+        <Toggle id="f-non_ideal" label="Treat the oil as a non-ideal mixture (UNIFAC)"
+            hint="Off: Raoult's law, the reference. On: activity coefficients by group contribution; library compounds only."
+            value=value error_path="oil.non_ideal" />
+    }
+}
+
 /// Picks the still's metal.
 #[component]
 pub fn MetalPicker() -> impl IntoView {
@@ -530,6 +613,7 @@ pub fn EquipmentInputs() -> impl IntoView {
             <details open>
                 <summary>"Boiler and heat"</summary>
                 <FuelPicker />
+                <AppliancePicker />
                 <NumberInput key="heat_input" />
                 <NumberInput key="efficiency" />
                 <NumberInput key="boiler_water" />
@@ -564,6 +648,8 @@ pub fn EquipmentInputs() -> impl IntoView {
                 <summary>"Run, season and costs"</summary>
                 <NumberInput key="target" />
                 <NumberInput key="rate_constant" />
+                <CohobationToggle />
+                <NonIdealToggle />
                 <NumberInput key="harvest" />
                 <CurrencyInput />
                 <NumberInput key="fuel_price" />
