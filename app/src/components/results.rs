@@ -424,7 +424,11 @@ pub fn Details() -> impl IntoView {
             <h3>"Condenser and water"</h3>
             <dl>
                 <Row label="Heat to take out" out="condenser_duty" value=p(|p| units::kilowatts(p.condenser.duty_w)) />
-                <Row label="Cooling water" out="cooling_flow" value=p(|p| units::litres_per_minute(p.condenser.cooling_water_flow_kg_per_s)) />
+                <Row label="Cooling water" out="cooling_flow" value=p(|p| match p.condenser.tub_feed_from_s {
+                    None if p.condenser.kind == CondenserKind::CoilInTub => "no feed: the tub's own water lasts the run".to_string(),
+                    Some(t) => format!("{}, from {} after the first drop", units::litres_per_minute(p.condenser.cooling_water_flow_kg_per_s), units::duration(t)),
+                    None => units::litres_per_minute(p.condenser.cooling_water_flow_kg_per_s),
+                }) />
                 <Row label="Cooling water per run" out="cooling_per_run" value=p(|p| units::volume(p.condenser.cooling_water_per_run_kg / 1000.0)) />
                 <Row label="Tub water lasts" out="tub_lasts" value=p(|p| match (p.condenser.kind, p.condenser.tub_lasts_s) {
                     (CondenserKind::CoilInTub, Some(t)) => format!("{} without a cold feed", units::duration(t)),
