@@ -32,6 +32,7 @@ pub fn App() -> impl IntoView {
             <Show when=move || notice.get().is_some()>
                 <p class="notice" role="status" data-out="storage_notice">{move || notice.get()}</p>
             </Show>
+            <components::first_still::Modes>
             // On a phone the answers follow the first inputs; on a wide screen inputs sit left.
             <div class="columns">
                 <div class="col-in"><EssentialInputs /></div>
@@ -39,6 +40,7 @@ pub fn App() -> impl IntoView {
                 <div class="col-in"><EquipmentInputs /><RunLog /><ScenarioText /></div>
                 <div class="col-out"><Details /></div>
             </div>
+            </components::first_still::Modes>
             <Cautions />
         </main>
         <footer class="colophon">
