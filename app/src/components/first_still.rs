@@ -107,7 +107,9 @@ impl FirstStillState {
 /// The two views behind a tab bar: the ordinary plan (the children, kept alive while hidden so
 /// nothing typed there is lost) and the first-still design.
 #[component]
-pub fn Modes(children: Children) -> impl IntoView {
+pub fn Modes<C: IntoView + 'static>(children: TypedChildren<C>) -> impl IntoView {
+    // Typed children, not `Children`: boxing the whole plan into an `AnyView` costs ~15 kB.
+    let children = children.into_inner();
     let fs = FirstStillState::new();
     let mode = fs.mode;
     provide_context(fs);
@@ -185,27 +187,17 @@ fn UseDesign() -> impl IntoView {
             })
         })
     };
-    let body = move || {
-        if asking.get() {
-            view! {
-                <div class="confirm" role="group" aria-labelledby="fs-confirm-text">
+    view! {
+        <section class="use-design" aria-labelledby="h-use-design" hidden=move || !ready()>
+                <h2 id="h-use-design">"Plan runs with this design"</h2>
+                <p class="hint">"Opens the bought design in “Plan a run”, where every number of a charge can be followed and changed."</p>
+                // Both states are drawn once and shown in turn: cheaper than swapping views.
+                <div class="confirm" role="group" aria-labelledby="fs-confirm-text" hidden=move || !asking.get()>
                     <p id="fs-confirm-text">{now_holds}" Replace it with this design? (To keep it, copy it first from “This plan as text”.)"</p>
                     <button type="button" id="fs-use-confirm" on:click=move |_| open()>"Replace the plan"</button>
                     <button type="button" id="fs-use-cancel" class="quiet" on:click=move |_| asking.set(false)>"Keep my plan"</button>
                 </div>
-            }
-            .into_any()
-        } else {
-            view! { <button type="button" id="fs-use" on:click=ask>"Use this design"</button> }.into_any()
-        }
-    };
-    view! {
-        <Show when=ready>
-            <section class="use-design" aria-labelledby="h-use-design">
-                <h2 id="h-use-design">"Plan runs with this design"</h2>
-                <p class="hint">"Opens the bought design in “Plan a run”, where every number of a charge can be followed and changed."</p>
-                {body}
-            </section>
-        </Show>
+                <button type="button" id="fs-use" hidden=move || asking.get() on:click=ask>"Use this design"</button>
+        </section>
     }
 }

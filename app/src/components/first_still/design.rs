@@ -367,12 +367,10 @@ pub fn DesignHeadline() -> impl IntoView {
     view! {
         <section class="headline" aria-labelledby="h-fs-design" aria-live="polite">
             <h2 id="h-fs-design">"Your first still"</h2>
-            {move || why.get().map(|(head, others)| view! {
-                <div class="notice" data-out="fs_blocked">
-                    <p>{head}</p>
-                    <ul>{others.into_iter().map(|m| view! { <li>{m}</li> }).collect_view()}</ul>
-                </div>
-            })}
+            <div class="notice" data-out="fs_blocked" hidden=move || why.with(|w| w.is_none())>
+                <p>{move || why.with(|w| w.as_ref().map(|w| w.0.clone()))}</p>
+                <ul>{move || why.with(|w| w.as_ref().map(|w| w.1.clone()).unwrap_or_default()).into_iter().map(|m| view! { <li>{m}</li> }).collect_view()}</ul>
+            </div>
             <div class="cards">
                 {move || shown().into_iter().map(|c| view! {
                     <div class="card">

@@ -70,39 +70,61 @@ fn ChoiceMessage(key: &'static str) -> impl IntoView {
     view! { <p class="error" id=format!("fs-e-{key}") aria-live="polite">{move || message.get()}</p> }
 }
 
-/// Large radio buttons over a fixed set of choices, bound to one signal.
+/// Large radio buttons over a fixed set of choices: `chosen` is the index of the one checked.
+/// One non-generic component for every set of choices keeps the page's code small.
 #[component]
-fn Radios<T>(
+fn Radios(
     legend: &'static str,
     name: &'static str,
-    value: RwSignal<T>,
-    options: &'static [(T, &'static str, &'static str)],
-) -> impl IntoView
-where
-    T: Copy + PartialEq + Send + Sync + 'static,
-{
+    options: &'static [(&'static str, &'static str)],
+    chosen: Signal<usize>,
+    choose: Callback<usize>,
+) -> impl IntoView {
     view! {
         <fieldset class="choices">
             <legend>{legend}</legend>
-            {options.iter().map(|(choice, id, label)| {
-                let choice = *choice;
-                view! {
-                    <label class="choice" for=*id>
-                        <input type="radio" name=name id=*id
-                            prop:checked=move || value.get() == choice
-                            on:change=move |_| value.set(choice) />
-                        <span>{*label}</span>
-                    </label>
-                }
+            {options.iter().enumerate().map(|(i, (id, label))| view! {
+                <label class="choice" for=*id>
+                    <input type="radio" name=name id=*id
+                        prop:checked=move || chosen.get() == i
+                        on:change=move |_| choose.run(i) />
+                    <span>{*label}</span>
+                </label>
             }).collect_view()}
         </fieldset>
     }
 }
 
-const HARVESTS: &[(HarvestMode, &str, &str)] = &[
-    (HarvestMode::PerDay, "fs-per-day", "The same cut each day"),
-    (HarvestMode::PerSeason, "fs-per-season", "A season's harvest in all"),
-];
+/// A set of radio buttons bound to one signal: `values[i]` goes with `options[i]`.
+fn radios<T>(
+    legend: &'static str,
+    name: &'static str,
+    value: RwSignal<T>,
+    values: &'static [T],
+    options: &'static [(&'static str, &'static str)],
+) -> impl IntoView
+where
+    T: Copy + PartialEq + Send + Sync + 'static,
+{
+    let chosen = Signal::derive(move || values.iter().position(|v| *v == value.get()).unwrap_or(0));
+    let choose = Callback::new(move |i: usize| value.set(values[i]));
+    view! { <Radios legend=legend name=name options=options chosen=chosen choose=choose /> }
+}
+
+/// Each set of choices: the values, then (element id, label) in the same order.
+const HARVEST_VALUES: &[HarvestMode] = &[HarvestMode::PerDay, HarvestMode::PerSeason];
+const HARVESTS: &[(&str, &str)] =
+    &[("fs-per-day", "The same cut each day"), ("fs-per-season", "A season's harvest in all")];
+const SUPPLY_VALUES: &[SupplyMode] = &[SupplyMode::Current, SupplyMode::Power];
+const SUPPLIES: &[(&str, &str)] =
+    &[("fs-by-current", "A circuit's current and voltage"), ("fs-by-power", "A power limit")];
+const PHASE_VALUES: &[u8] = &[1, 3];
+const PHASES: &[(&str, &str)] = &[("fs-phase-1", "One phase"), ("fs-phase-3", "Three phases")];
+const CONDENSER_VALUES: &[CondenserKind] = &[CondenserKind::CoilInTub, CondenserKind::TubeInTube];
+const CONDENSERS: &[(&str, &str)] =
+    &[("fs-tub", "Coil in a tub of water"), ("fs-jacket", "Tube in a water jacket, fed")];
+const TUBE_VALUES: &[TubeStandard] = &[TubeStandard::Metric, TubeStandard::Us];
+const TUBES: &[(&str, &str)] = &[("fs-metric", "Metric (mm)"), ("fs-us", "US (inch)")];
 
 const FUELS: &[(Fuel, &str, &str)] = &[
     (Fuel::Propane, "propane", "Propane (bottled gas)"),
@@ -110,21 +132,6 @@ const FUELS: &[(Fuel, &str, &str)] = &[
     (Fuel::Firewood, "firewood", "Firewood"),
     (Fuel::Electricity, "electricity", "Electricity"),
 ];
-
-const SUPPLIES: &[(SupplyMode, &str, &str)] = &[
-    (SupplyMode::Current, "fs-by-current", "A circuit's current and voltage"),
-    (SupplyMode::Power, "fs-by-power", "A power limit"),
-];
-
-const PHASES: &[(u8, &str, &str)] = &[(1, "fs-phase-1", "One phase"), (3, "fs-phase-3", "Three phases")];
-
-const CONDENSERS: &[(CondenserKind, &str, &str)] = &[
-    (CondenserKind::CoilInTub, "fs-tub", "Coil in a tub of water"),
-    (CondenserKind::TubeInTube, "fs-jacket", "Tube in a water jacket, fed"),
-];
-
-const TUBES: &[(TubeStandard, &str, &str)] =
-    &[(TubeStandard::Metric, "fs-metric", "Metric (mm)"), (TubeStandard::Us, "fs-us", "US (inch)")];
 
 /// Picks the crop from the library.
 #[component]
@@ -168,45 +175,56 @@ fn FuelChoice() -> impl IntoView {
     }
 }
 
-/// The whole form, in four parts.
+/// The whole form, in four parts. Fields the choices do not use are hidden, not removed, so
+/// what was typed in them stays.
 #[component]
 pub fn FirstStillForm() -> impl IntoView {
     let fs = expect_context::<FirstStillState>();
     let (harvest, fuel, supply) = (fs.harvest, fs.fuel, fs.supply);
     let electric = move || fuel.get() == Fuel::Electricity;
+    let per_day = move || harvest.get() == HarvestMode::PerDay;
+    let by_current = move || supply.get() == SupplyMode::Current;
     view! {
         <section class="inputs" aria-labelledby="h-fs-crop">
             <h2 id="h-fs-crop">"What you will distil"</h2>
             <p class="hint">{START_NOTE}</p>
             <CropChoice />
-            <Radios legend="Harvest given as" name="fs-harvest" value=harvest options=HARVESTS />
-            <Show when=move || harvest.get() == HarvestMode::PerDay
-                fallback=|| view! { <SizeInput key="kg_per_season" /><SizeInput key="season_days" /> }>
+            {radios("Harvest given as", "fs-harvest", harvest, HARVEST_VALUES, HARVESTS)}
+            <div hidden=move || !per_day()>
                 <SizeInput key="kg_per_day" />
                 <SizeInput key="days" />
-            </Show>
+            </div>
+            <div hidden=per_day>
+                <SizeInput key="kg_per_season" />
+                <SizeInput key="season_days" />
+            </div>
         </section>
         <section class="inputs" aria-labelledby="h-fs-heat">
             <h2 id="h-fs-heat">"Where, and with what heat"</h2>
             <SizeInput key="altitude" />
             <FuelChoice />
-            <Show when=electric fallback=|| view! { <SizeInput key="max_heat" /> }>
-                <Radios legend="The supply's limit" name="fs-supply" value=supply options=SUPPLIES />
-                <Show when=move || supply.get() == SupplyMode::Current
-                    fallback=|| view! { <SizeInput key="max_power" /> }>
+            <div hidden=electric>
+                <SizeInput key="max_heat" />
+            </div>
+            <div hidden=move || !electric()>
+                {radios("The supply's limit", "fs-supply", supply, SUPPLY_VALUES, SUPPLIES)}
+                <div hidden=move || !by_current()>
                     <SizeInput key="current" />
                     <SizeInput key="voltage" />
-                    <Radios legend="Phases" name="fs-phases" value=fs.phases options=PHASES />
+                    {radios("Phases", "fs-phases", fs.phases, PHASE_VALUES, PHASES)}
                     <ChoiceMessage key="phases" />
-                </Show>
-            </Show>
+                </div>
+                <div hidden=by_current>
+                    <SizeInput key="max_power" />
+                </div>
+            </div>
         </section>
         <section class="inputs" aria-labelledby="h-fs-cooling">
             <h2 id="h-fs-cooling">"Cooling water"</h2>
             <SizeInput key="inlet" />
             <SizeInput key="max_flow" />
-            <Radios legend="Condenser" name="fs-condenser" value=fs.condenser options=CONDENSERS />
-            <Radios legend="Copper tube sold as" name="fs-tubes" value=fs.tubes options=TUBES />
+            {radios("Condenser", "fs-condenser", fs.condenser, CONDENSER_VALUES, CONDENSERS)}
+            {radios("Copper tube sold as", "fs-tubes", fs.tubes, TUBE_VALUES, TUBES)}
         </section>
         <section class="inputs" aria-labelledby="h-fs-limits">
             <h2 id="h-fs-limits">"What to hold to"</h2>
