@@ -156,12 +156,14 @@ async fn a_typed_request_gives_the_design_the_core_gives() -> Result<(), BoxErro
     {
         assert!(safety.contains(words), "safety lacks {words:?}: {safety}");
     }
+    c.execute("document.getElementById('h-fs-design').scrollIntoView();", vec![]).await?;
     screenshot(&page, "first-still-phone.png").await?;
     page.cdp(
         "Emulation.setDeviceMetricsOverride",
         serde_json::json!({ "width": 1280, "height": 1400, "deviceScaleFactor": 1, "mobile": false }),
     )
     .await?;
+    c.execute("window.scrollTo(0, 0);", vec![]).await?;
     tokio::time::sleep(Duration::from_millis(300)).await;
     screenshot(&page, "first-still-desktop.png").await?;
     page.close().await

@@ -156,7 +156,7 @@ fn or_dash(v: Option<String>) -> String {
 
 /// "needs A → buy B (rounded)".
 fn bought(p: &Purchase, show: fn(f64) -> String) -> String {
-    format!("{} → {}", buy(p, show), show(p.rounded))
+    format!("{} ({})", buy(p, show), show(p.rounded))
 }
 
 /// Each part of the design in full.

@@ -138,7 +138,9 @@ const FUELS: &[(Fuel, &str, &str)] = &[
 fn CropChoice() -> impl IntoView {
     let fs = expect_context::<FirstStillState>();
     let crop = fs.crop;
-    let material = move || CROPS.iter().find(|c| c.id == crop.get()).map(|c| c.material);
+    let material = move || {
+        CROPS.iter().find(|c| c.id == crop.get()).map(|c| format!("{}.", c.material.trim_end_matches('.')))
+    };
     view! {
         <div class="field">
             <label for="fs-crop"><span class="label">"Crop"</span></label>
