@@ -156,6 +156,21 @@ async fn a_typed_request_gives_the_design_the_core_gives() -> Result<(), BoxErro
     {
         assert!(safety.contains(words), "safety lacks {words:?}: {safety}");
     }
+    // How long one design takes in the page: an edit that changes the request, until the
+    // page has redrawn (reported, not asserted: speed is measured, never a test's verdict).
+    let ms = c
+        .execute_async(
+            r#"const done = arguments[arguments.length - 1];
+               const el = document.getElementById("fs-warmest");
+               const t0 = performance.now();
+               el.value = "39"; el.dispatchEvent(new Event("input", { bubbles: true }));
+               setTimeout(() => done(performance.now() - t0), 0);"#,
+            vec![],
+        )
+        .await?;
+    println!("one design in the page: {ms} ms");
+    set_field(c, "warmest", "40").await?;
+    wait_text(c, "[data-out=fs_still]", |t| t == want.still.volume_m3.label).await?;
     c.execute("document.getElementById('h-fs-design').scrollIntoView();", vec![]).await?;
     screenshot(&page, "first-still-phone.png").await?;
     page.cdp(
