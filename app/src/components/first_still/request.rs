@@ -462,3 +462,90 @@ pub fn unplaced(errors: &SizingErrors, c: &Choices) -> Vec<String> {
         .map(|e| format!("{}: {}", e.field, error_words(None, e, None)))
         .collect()
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use wasm_bindgen_test::wasm_bindgen_test;
+
+    fn starting_text(key: &str) -> String {
+        size_field(key).start.to_string()
+    }
+
+    #[wasm_bindgen_test]
+    fn the_starting_entries_are_the_documented_example_request() {
+        // The invented request of DEVELOPERS.md's sizing section, read by serde: an independent
+        // path to the same request.
+        let documented: SizingRequest = serde_json::from_str(
+            r#"{
+              "crop": "lavender",
+              "harvest": { "kind": "per_day", "kg_per_day": 40, "days": 20 },
+              "site": { "altitude_m": 300 },
+              "heat": { "kind": "fuel", "fuel": "propane" },
+              "cooling": { "inlet_c": 15 },
+              "limits": { "max_charges_per_day": 2, "max_run_s": 10800, "warmest_cooling_water_c": 45 }
+            }"#,
+        )
+        .unwrap();
+        assert_eq!(build_request(&starting_text, &Choices::default()), Ok(documented));
+    }
+
+    #[wasm_bindgen_test]
+    fn units_convert_at_the_edge_and_hidden_fields_are_ignored() {
+        let c = Choices {
+            fuel: Fuel::Electricity,
+            supply: SupplyMode::Power,
+            harvest: HarvestMode::PerSeason,
+            ..Choices::default()
+        };
+        let text = |key: &str| match key {
+            "max_power" => "6,5".to_string(),
+            "max_flow" => "30".to_string(),
+            "longest_run" => "2.5".to_string(),
+            "kg_per_season" => "900".to_string(),
+            "season_days" => "15".to_string(),
+            // Hidden for these choices: never read.
+            "current" | "kg_per_day" | "max_heat" => "nonsense".to_string(),
+            k => starting_text(k),
+        };
+        let r = build_request(&text, &c).unwrap();
+        assert_eq!(r.heat, HeatSupply::Electric { supply: ElectricSupply::Power { max_power_w: 6500.0 } });
+        assert_eq!(r.cooling.max_flow_kg_per_s, Some(0.5));
+        assert_eq!(r.limits.max_run_s, 9000.0);
+        assert_eq!(r.harvest, Harvest::PerSeason { kg_per_season: 900.0, days: 15 });
+    }
+
+    #[wasm_bindgen_test]
+    fn unreadable_texts_are_named_by_field() {
+        let text = |key: &str| match key {
+            "charges" => "2.5".to_string(),
+            "inlet" => "cold".to_string(),
+            "altitude" => String::new(),
+            k => starting_text(k),
+        };
+        let problems = build_request(&text, &Choices::default()).unwrap_err();
+        assert!(problems.contains(&("charges", TextProblem::NotWhole)));
+        assert!(problems.contains(&("inlet", TextProblem::NotANumber)));
+        assert!(problems.contains(&("altitude", TextProblem::Empty)));
+        assert_eq!(problems.len(), 3);
+    }
+
+    #[wasm_bindgen_test]
+    fn the_cores_bounds_are_restated_in_the_fields_unit() {
+        let c = Choices::default();
+        let mut r = build_request(&starting_text, &c).unwrap();
+        r.limits.max_run_s = 100.0 * 3600.0;
+        let e = stillroom_core::size(&r).unwrap_err();
+        let err = e.on("limits.max_run_s").unwrap();
+        assert_eq!(shown_on(&err.field, &c), Some("longest_run"));
+        assert_eq!(
+            error_words(Some(size_field("longest_run")), err, Some(r.limits.max_run_s)),
+            "Must be at most 48 h."
+        );
+        assert_eq!(
+            shown_on("heat.supply", &Choices { supply: SupplyMode::Power, ..c.clone() }),
+            Some("max_power")
+        );
+        assert_eq!(shown_on("base.still.metal_mass_kg", &c), None);
+    }
+}
