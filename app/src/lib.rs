@@ -44,6 +44,7 @@ pub fn App() -> impl IntoView {
         <main class="page">
             <StorageNotices />
             <KeptAside />
+            <components::first_still::Modes>
             // On a phone the answers come first, the inputs after; on a wide screen inputs sit
             // left and answers right.
             <div class="columns">
@@ -51,6 +52,7 @@ pub fn App() -> impl IntoView {
                 <div class="col-in"><EssentialInputs /><EquipmentInputs /><RunLog /><ScenarioText /></div>
                 <div class="col-out"><Details /></div>
             </div>
+            </components::first_still::Modes>
             <Cautions />
         </main>
         <footer class="colophon">

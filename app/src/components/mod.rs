@@ -1,6 +1,7 @@
 //! The page's components.
 
 pub mod cautions;
+pub mod first_still;
 pub mod inputs;
 pub mod kept_aside;
 pub mod results;

@@ -1,0 +1,551 @@
+//! The first-still form's edge: each field's label, unit and conversion to the core's
+//! `SizingRequest`, which fields a set of choices uses, and the words beside a field for the
+//! core's verdict. Units change here and nowhere else in the first-still mode.
+
+use crate::fields::{TextError, parse_number};
+use crate::units;
+use stillroom_core::heat::Fuel;
+use stillroom_core::scenario::{CondenserKind, FieldError};
+use stillroom_core::sizing::{
+    CoolingSupply, ElectricSupply, Harvest, HeatSupply, Limits, SiteRequest, SizingErrors, SizingRequest,
+    TubeStandard,
+};
+
+/// One number field of the request.
+pub struct SizeField {
+    /// Stable key: element ids (`fs-<key>`, `fs-e-<key>`) and tests use it.
+    pub key: &'static str,
+    /// The core's dotted request path, to match its errors.
+    pub path: &'static str,
+    pub label: &'static str,
+    pub unit: &'static str,
+    pub hint: &'static str,
+    /// Whether the field may be left empty.
+    pub optional: bool,
+    /// Whether only whole numbers make sense (charges, days).
+    pub whole: bool,
+    /// Shown-unit value -> SI value.
+    pub to_si: fn(f64) -> f64,
+    /// SI value -> shown-unit value.
+    pub from_si: fn(f64) -> f64,
+    /// The text the form starts with: an invented farm (see [`START_NOTE`]).
+    pub start: &'static str,
+}
+
+/// Says where the starting entries come from.
+pub const START_NOTE: &str = "The starting entries are invented: Larkfield Farm's 40 kg of lavender a day for 20 days, at 300 m, over propane.";
+
+fn same(v: f64) -> f64 {
+    v
+}
+fn kilo(v: f64) -> f64 {
+    v * 1e3
+}
+fn per_kilo(v: f64) -> f64 {
+    v / 1e3
+}
+fn hours(v: f64) -> f64 {
+    v * 3600.0
+}
+fn per_hours(v: f64) -> f64 {
+    v / 3600.0
+}
+/// L/min of cooling water -> kg/s, taking a litre of cool water as a kilogram (999 kg/m³ at
+/// 15 °C, IAPWS-IF97: 0.1 % off, well inside what a tap's flow is known to).
+fn per_minute(v: f64) -> f64 {
+    v / 60.0
+}
+fn minutes_of(v: f64) -> f64 {
+    v * 60.0
+}
+
+const fn field(
+    key: &'static str,
+    path: &'static str,
+    label: &'static str,
+    unit: &'static str,
+    hint: &'static str,
+    start: &'static str,
+) -> SizeField {
+    SizeField {
+        key,
+        path,
+        label,
+        unit,
+        hint,
+        optional: false,
+        whole: false,
+        to_si: same,
+        from_si: same,
+        start,
+    }
+}
+
+/// Every number field of the first-still form, in page order.
+pub const SIZE_FIELDS: &[SizeField] = &[
+    field(
+        "kg_per_day",
+        "harvest.kg_per_day",
+        "Plant cut each day",
+        "kg",
+        "Fresh weight, as it goes into the still.",
+        "40",
+    ),
+    SizeField {
+        whole: true,
+        optional: true,
+        ..field(
+            "days",
+            "harvest.days",
+            "Days of harvest",
+            "days",
+            "For the season's totals; leave empty for one day.",
+            "20",
+        )
+    },
+    field(
+        "kg_per_season",
+        "harvest.kg_per_season",
+        "Plant for the whole season",
+        "kg",
+        "Spread evenly over the days of harvest.",
+        "800",
+    ),
+    SizeField {
+        whole: true,
+        ..field(
+            "season_days",
+            "harvest.days",
+            "Days to distil it in",
+            "days",
+            "Days the still can run in the season.",
+            "20",
+        )
+    },
+    field(
+        "altitude",
+        "site.altitude_m",
+        "Altitude of the still",
+        "m",
+        "Height above sea level, from a map or GPS.",
+        "300",
+    ),
+    SizeField {
+        optional: true,
+        to_si: kilo,
+        from_si: per_kilo,
+        ..field(
+            "max_heat",
+            "heat.max_heat_input_w",
+            "Largest burner or fire you can run",
+            "kW",
+            "Gas at its sea-level rating. Leave empty to choose from the usual sizes.",
+            "",
+        )
+    },
+    SizeField {
+        to_si: kilo,
+        from_si: per_kilo,
+        ..field(
+            "max_power",
+            "heat.supply.max_power_w",
+            "Most power the supply gives",
+            "kW",
+            "What the circuit may carry for hours, not its peak.",
+            "9",
+        )
+    },
+    field(
+        "current",
+        "heat.supply.current_a",
+        "Circuit rating",
+        "A",
+        "The breaker or fuse of the circuit for the elements.",
+        "16",
+    ),
+    field(
+        "voltage",
+        "heat.supply.voltage_v",
+        "Supply voltage",
+        "V",
+        "Line to line on three phases (for example 400 V).",
+        "230",
+    ),
+    field(
+        "inlet",
+        "cooling.inlet_c",
+        "Cooling water comes in at",
+        "°C",
+        "Tap, well or stream water, in the warmest weeks.",
+        "15",
+    ),
+    SizeField {
+        optional: true,
+        to_si: per_minute,
+        from_si: minutes_of,
+        ..field(
+            "max_flow",
+            "cooling.max_flow_kg_per_s",
+            "Most cooling water you can run",
+            "L/min",
+            "Time a bucket at the tap. Leave empty if there is plenty.",
+            "",
+        )
+    },
+    SizeField {
+        whole: true,
+        ..field(
+            "charges",
+            "limits.max_charges_per_day",
+            "Most charges in a day",
+            "charges",
+            "More charges a day make a smaller still.",
+            "2",
+        )
+    },
+    SizeField {
+        to_si: hours,
+        from_si: per_hours,
+        ..field(
+            "longest_run",
+            "limits.max_run_s",
+            "Longest a charge may take",
+            "h",
+            "From lighting the heat to the end of the first charge's run.",
+            "3",
+        )
+    },
+    field(
+        "warmest",
+        "limits.warmest_cooling_water_c",
+        "Warmest the cooling water may get",
+        "°C",
+        "The tub at the end of a run, or the jacket's outflow.",
+        "45",
+    ),
+];
+
+/// Looks a field up by key.
+pub fn size_field(key: &str) -> &'static SizeField {
+    SIZE_FIELDS.iter().find(|f| f.key == key).unwrap_or(&SIZE_FIELDS[0])
+}
+
+/// How the harvest is given.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum HarvestMode {
+    PerDay,
+    PerSeason,
+}
+
+/// How an electric supply's limit is given.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum SupplyMode {
+    Power,
+    Current,
+}
+
+/// The form's choices (everything that is not a number field).
+#[derive(Debug, Clone, PartialEq)]
+pub struct Choices {
+    pub crop: String,
+    pub harvest: HarvestMode,
+    pub fuel: Fuel,
+    pub supply: SupplyMode,
+    pub phases: u8,
+    pub condenser: CondenserKind,
+    pub tubes: TubeStandard,
+}
+
+impl Default for Choices {
+    /// The invented farm's choices (see [`START_NOTE`]).
+    fn default() -> Self {
+        Choices {
+            crop: "lavender".into(),
+            harvest: HarvestMode::PerDay,
+            fuel: Fuel::Propane,
+            supply: SupplyMode::Current,
+            phases: 1,
+            condenser: CondenserKind::CoilInTub,
+            tubes: TubeStandard::Metric,
+        }
+    }
+}
+
+/// Whether a field is part of the request for these choices.
+pub fn active(key: &str, c: &Choices) -> bool {
+    let electric = c.fuel == Fuel::Electricity;
+    match key {
+        "kg_per_day" | "days" => c.harvest == HarvestMode::PerDay,
+        "kg_per_season" | "season_days" => c.harvest == HarvestMode::PerSeason,
+        "max_heat" => !electric,
+        "max_power" => electric && c.supply == SupplyMode::Power,
+        "current" | "voltage" => electric && c.supply == SupplyMode::Current,
+        _ => true,
+    }
+}
+
+/// Why a field's text could not be used.
+#[derive(Debug, Clone, PartialEq)]
+pub enum TextProblem {
+    Empty,
+    NotANumber,
+    NotWhole,
+}
+
+impl TextProblem {
+    pub fn words(&self) -> &'static str {
+        match self {
+            TextProblem::Empty => "Enter a value.",
+            TextProblem::NotANumber => "Enter a number, such as 12.5.",
+            TextProblem::NotWhole => "Enter a whole number, such as 2.",
+        }
+    }
+}
+
+/// A field's text in the core's SI unit: `Ok(None)` when empty.
+pub fn si_value(f: &SizeField, text: &str) -> Result<Option<f64>, TextProblem> {
+    match parse_number(text) {
+        Ok(None) => Ok(None),
+        Err(TextError::NotANumber | TextError::Empty) => Err(TextProblem::NotANumber),
+        Ok(Some(v)) if f.whole && (v.fract() != 0.0 || !(0.0..=1.0e6).contains(&v)) => {
+            Err(TextProblem::NotWhole)
+        }
+        Ok(Some(v)) => Ok(Some((f.to_si)(v))),
+    }
+}
+
+/// Builds the request from the texts (looked up by key) and the choices, or lists every text
+/// that cannot be read.
+pub fn build_request(
+    text: &dyn Fn(&str) -> String,
+    c: &Choices,
+) -> Result<SizingRequest, Vec<(&'static str, TextProblem)>> {
+    let mut problems = Vec::new();
+    let mut get = |key: &'static str| -> Option<f64> {
+        if !active(key, c) {
+            return None;
+        }
+        let f = size_field(key);
+        match si_value(f, &text(key)) {
+            Ok(Some(v)) => Some(v),
+            Ok(None) if f.optional => None,
+            Ok(None) => {
+                problems.push((key, TextProblem::Empty));
+                None
+            }
+            Err(p) => {
+                problems.push((key, p));
+                None
+            }
+        }
+    };
+    let harvest = match c.harvest {
+        HarvestMode::PerDay => {
+            let kg = get("kg_per_day");
+            let days = get("days");
+            kg.map(|kg_per_day| Harvest::PerDay { kg_per_day, days: days.map(|d| d as u32) })
+        }
+        HarvestMode::PerSeason => {
+            let kg = get("kg_per_season");
+            let days = get("season_days");
+            kg.zip(days).map(|(kg_per_season, d)| Harvest::PerSeason { kg_per_season, days: d as u32 })
+        }
+    };
+    let altitude = get("altitude");
+    let heat = if c.fuel == Fuel::Electricity {
+        match c.supply {
+            SupplyMode::Power => get("max_power")
+                .map(|max_power_w| HeatSupply::Electric { supply: ElectricSupply::Power { max_power_w } }),
+            SupplyMode::Current => {
+                let a = get("current");
+                let v = get("voltage");
+                a.zip(v).map(|(current_a, voltage_v)| HeatSupply::Electric {
+                    supply: ElectricSupply::Current { current_a, voltage_v, phases: Some(c.phases) },
+                })
+            }
+        }
+    } else {
+        Some(HeatSupply::Fuel { fuel: c.fuel, appliance: None, max_heat_input_w: get("max_heat") })
+    };
+    let inlet = get("inlet");
+    let max_flow = get("max_flow");
+    let charges = get("charges");
+    let longest = get("longest_run");
+    let warmest = get("warmest");
+    let (
+        Some(harvest),
+        Some(altitude_m),
+        Some(heat),
+        Some(inlet_c),
+        Some(charges),
+        Some(max_run_s),
+        Some(warmest),
+    ) = (harvest, altitude, heat, inlet, charges, longest, warmest)
+    else {
+        return Err(problems);
+    };
+    if !problems.is_empty() {
+        return Err(problems);
+    }
+    Ok(SizingRequest {
+        crop: Some(c.crop.clone()),
+        base: None,
+        harvest,
+        site: SiteRequest { altitude_m, ambient_temperature_c: None },
+        heat,
+        cooling: CoolingSupply {
+            inlet_c,
+            max_flow_kg_per_s: max_flow,
+            condenser: c.condenser,
+            tube_standard: c.tubes,
+        },
+        limits: Limits {
+            max_charges_per_day: charges as u32,
+            max_run_s,
+            max_water_per_run_kg: None,
+            warmest_cooling_water_c: warmest,
+            working_day_s: None,
+        },
+        packing_density_kg_per_m3: None,
+        steam_rate_kg_per_h_per_kg: None,
+    })
+}
+
+/// The form key that shows an error on `path`, or `None` for one that belongs to no field
+/// shown (it is listed with the design instead).
+pub fn shown_on(path: &str, c: &Choices) -> Option<&'static str> {
+    match path {
+        "crop" | "base.charge.crop" => return Some("crop"),
+        "heat" | "heat.fuel" | "heat.appliance" => return Some("fuel"),
+        "heat.supply.phases" => return Some("phases"),
+        // A supply too small (or too big for the catalogue) as a whole.
+        "heat.supply" => {
+            return Some(if c.supply == SupplyMode::Power { "max_power" } else { "current" });
+        }
+        _ => {}
+    }
+    SIZE_FIELDS.iter().find(|f| f.path == path && active(f.key, c)).map(|f| f.key)
+}
+
+/// A bound in the field's unit, without needless digits.
+fn bound(v: f64) -> String {
+    let s = units::sig3(v);
+    if s.contains('.') { s.trim_end_matches('0').trim_end_matches('.').to_string() } else { s }
+}
+
+/// The words beside a field for the core's error on it. A range is restated in the field's
+/// own unit (the core's bounds are SI); any other verdict is the core's own sentence.
+pub fn error_words(f: Option<&SizeField>, e: &FieldError, si: Option<f64>) -> String {
+    if let (Some(f), Some(min), Some(max), Some(v)) = (f, e.min, e.max, si) {
+        let unit = if f.unit.is_empty() { String::new() } else { format!(" {}", f.unit) };
+        let (lo, hi) = ((f.from_si)(min), (f.from_si)(max));
+        if v <= min {
+            let how = if e.message.contains("more than") { "more than" } else { "at least" };
+            return format!("Must be {how} {}{unit}.", bound(lo));
+        }
+        if v > max {
+            return format!("Must be at most {}{unit}.", bound(hi));
+        }
+    }
+    let mut c = e.message.chars();
+    let first: String = c.next().map(|f| f.to_uppercase().collect()).unwrap_or_default();
+    let text = first + c.as_str();
+    if text.ends_with('.') { text } else { text + "." }
+}
+
+/// Every error of a verdict that no shown field carries, in words.
+pub fn unplaced(errors: &SizingErrors, c: &Choices) -> Vec<String> {
+    errors
+        .errors
+        .iter()
+        .filter(|e| shown_on(&e.field, c).is_none())
+        .map(|e| format!("{}: {}", e.field, error_words(None, e, None)))
+        .collect()
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use wasm_bindgen_test::wasm_bindgen_test;
+
+    fn starting_text(key: &str) -> String {
+        size_field(key).start.to_string()
+    }
+
+    #[wasm_bindgen_test]
+    fn the_starting_entries_are_the_documented_example_request() {
+        // The invented request of DEVELOPERS.md's sizing section, read by serde: an independent
+        // path to the same request.
+        let documented: SizingRequest = serde_json::from_str(
+            r#"{
+              "crop": "lavender",
+              "harvest": { "kind": "per_day", "kg_per_day": 40, "days": 20 },
+              "site": { "altitude_m": 300 },
+              "heat": { "kind": "fuel", "fuel": "propane" },
+              "cooling": { "inlet_c": 15 },
+              "limits": { "max_charges_per_day": 2, "max_run_s": 10800, "warmest_cooling_water_c": 45 }
+            }"#,
+        )
+        .unwrap();
+        assert_eq!(build_request(&starting_text, &Choices::default()), Ok(documented));
+    }
+
+    #[wasm_bindgen_test]
+    fn units_convert_at_the_edge_and_hidden_fields_are_ignored() {
+        let c = Choices {
+            fuel: Fuel::Electricity,
+            supply: SupplyMode::Power,
+            harvest: HarvestMode::PerSeason,
+            ..Choices::default()
+        };
+        let text = |key: &str| match key {
+            "max_power" => "6,5".to_string(),
+            "max_flow" => "30".to_string(),
+            "longest_run" => "2.5".to_string(),
+            "kg_per_season" => "900".to_string(),
+            "season_days" => "15".to_string(),
+            // Hidden for these choices: never read.
+            "current" | "kg_per_day" | "max_heat" => "nonsense".to_string(),
+            k => starting_text(k),
+        };
+        let r = build_request(&text, &c).unwrap();
+        assert_eq!(r.heat, HeatSupply::Electric { supply: ElectricSupply::Power { max_power_w: 6500.0 } });
+        assert_eq!(r.cooling.max_flow_kg_per_s, Some(0.5));
+        assert_eq!(r.limits.max_run_s, 9000.0);
+        assert_eq!(r.harvest, Harvest::PerSeason { kg_per_season: 900.0, days: 15 });
+    }
+
+    #[wasm_bindgen_test]
+    fn unreadable_texts_are_named_by_field() {
+        let text = |key: &str| match key {
+            "charges" => "2.5".to_string(),
+            "inlet" => "cold".to_string(),
+            "altitude" => String::new(),
+            k => starting_text(k),
+        };
+        let problems = build_request(&text, &Choices::default()).unwrap_err();
+        assert!(problems.contains(&("charges", TextProblem::NotWhole)));
+        assert!(problems.contains(&("inlet", TextProblem::NotANumber)));
+        assert!(problems.contains(&("altitude", TextProblem::Empty)));
+        assert_eq!(problems.len(), 3);
+    }
+
+    #[wasm_bindgen_test]
+    fn the_cores_bounds_are_restated_in_the_fields_unit() {
+        let c = Choices::default();
+        let mut r = build_request(&starting_text, &c).unwrap();
+        r.limits.max_run_s = 100.0 * 3600.0;
+        let e = stillroom_core::size(&r).unwrap_err();
+        let err = e.on("limits.max_run_s").unwrap();
+        assert_eq!(shown_on(&err.field, &c), Some("longest_run"));
+        assert_eq!(
+            error_words(Some(size_field("longest_run")), err, Some(r.limits.max_run_s)),
+            "Must be at most 48 h."
+        );
+        assert_eq!(
+            shown_on("heat.supply", &Choices { supply: SupplyMode::Power, ..c.clone() }),
+            Some("max_power")
+        );
+        assert_eq!(shown_on("base.still.metal_mass_kg", &c), None);
+    }
+}
