@@ -10,6 +10,7 @@ pub mod store;
 pub mod units;
 
 use components::cautions::Cautions;
+use components::first_still::{Mode, ModeTabs, ShownMode};
 use components::inputs::{EquipmentInputs, EssentialInputs, InstallHint, UnitsChoice};
 use components::kept_aside::{KeptAside, StorageNotices};
 use components::results::{Details, Headline, Warnings};
@@ -26,6 +27,8 @@ wasm_bindgen_test::wasm_bindgen_test_configure!(run_in_browser);
 pub fn App() -> impl IntoView {
     let state = AppState::new();
     provide_context(state);
+    let mode = RwSignal::new(Mode::Plan);
+    provide_context(ShownMode(mode));
     // The static loading message of index.html goes once the page is live.
     if let Some(el) =
         web_sys::window().and_then(|w| w.document()).and_then(|d| d.get_element_by_id("loading"))
@@ -44,15 +47,14 @@ pub fn App() -> impl IntoView {
         <main class="page">
             <StorageNotices />
             <KeptAside />
-            <components::first_still::Modes>
+            <ModeTabs />
             // On a phone the answers come first, the inputs after; on a wide screen inputs sit
             // left and answers right.
-            <div class="columns">
+            <div id="plan-view" role="tabpanel" aria-labelledby="mode-plan" class="columns" hidden=move || mode.get() != Mode::Plan>
                 <div class="col-out"><Headline /><Warnings /></div>
                 <div class="col-in"><EssentialInputs /><EquipmentInputs /><RunLog /><ScenarioText /></div>
                 <div class="col-out"><Details /></div>
             </div>
-            </components::first_still::Modes>
             <Cautions />
         </main>
         <footer class="colophon">

@@ -72,6 +72,7 @@ async fn the_appliance_and_cohobation_change_the_plan_from_the_page() -> Result<
     page.client.execute("localStorage.clear();", vec![]).await?;
     page.client.refresh().await?;
     let c = &page.client;
+    c.wait().at_most(WAIT).for_element(Locator::Id("f-appliance")).await?;
     c.execute("document.querySelectorAll('details').forEach((d) => { d.open = true; });", vec![]).await?;
     // The same propane in a boiler with its own firebox: 75 % (US DOE Steam Tip Sheet #4), not
     // the 45 % of a burner under a kettle.
@@ -86,5 +87,19 @@ async fn the_appliance_and_cohobation_change_the_plan_from_the_page() -> Result<
     // Returning the waters: the hydrosol card says how much went back to the boiler.
     c.find(Locator::Id("f-cohobation")).await?.click().await?;
     text_when(c, "[data-out=hydrosol_total] + .card-note", |t| t.contains("returned to the boiler")).await?;
+    page.close().await
+}
+
+#[tokio::test]
+async fn the_first_still_designer_loads_only_when_its_tab_is_opened() -> Result<(), BoxError> {
+    let page = browser::open().await?;
+    page.goto("").await?;
+    let c = &page.client;
+    c.wait().at_most(WAIT).for_element(Locator::Id("f-plant_mass")).await?;
+    let fetched = "return performance.getEntriesByType('resource').some((e) => e.name.includes('stillroom_first_still'));";
+    assert_eq!(c.execute(fetched, vec![]).await?, serde_json::json!(false), "loaded before it was asked for");
+    c.find(Locator::Id("mode-first")).await?.click().await?;
+    c.wait().at_most(WAIT).for_element(Locator::Id("first-still")).await?;
+    assert_eq!(c.execute(fetched, vec![]).await?, serde_json::json!(true));
     page.close().await
 }

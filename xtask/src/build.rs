@@ -10,6 +10,10 @@ use std::path::{Path, PathBuf};
 /// The app crate and the stem of the files wasm-bindgen writes.
 pub const APP_PACKAGE: &str = "stillroom-app";
 pub const OUT_NAME: &str = "stillroom_app";
+/// The first-still mode, a module of its own that the page loads when the mode is first opened,
+/// so the first load carries only what a first plan needs.
+pub const LAZY_BIN: &str = "stillroom-first-still";
+pub const LAZY_OUT_NAME: &str = "stillroom_first_still";
 /// Replaced by the build id in `dist/sw.js` and `dist/index.html`.
 pub const BUILD_ID_TOKEN: &str = "__STILLROOM_BUILD_ID__";
 /// Replaced in `dist/sw.js` by the list of files to precache.
@@ -114,41 +118,46 @@ pub fn write_compressed_copies(dir: &Path) -> Result<Vec<String>> {
     Ok(written)
 }
 
+/// wasm-bindgen's glue for one wasm binary of the page, then wasm-opt -Oz over its module.
+fn bind_and_optimise(root: &Path, tools: &BuildTools, dist: &Path, bin: &str, out_name: &str) -> Result<()> {
+    let wasm = crate::target_dir(root).join(WASM_TARGET).join("release").join(format!("{bin}.wasm"));
+    if !wasm.is_file() {
+        return Err(Failure::new(format!("cargo finished but {} is not there", wasm.display())));
+    }
+    let mut bindgen = proc::command(&tools.wasm_bindgen);
+    bindgen
+        .args(["--target", "web", "--no-typescript", "--out-dir"])
+        .arg(dist)
+        .args(["--out-name", out_name])
+        .arg(&wasm);
+    run(&mut bindgen)?;
+    let bg = dist.join(format!("{out_name}_bg.wasm"));
+    let optimised = dist.join(format!("{out_name}_bg.opt.wasm"));
+    let mut opt = proc::command(&tools.wasm_opt);
+    opt.arg("-Oz").args(WASM_OPT_FEATURES).arg(&bg).arg("-o").arg(&optimised);
+    run(&mut opt)?;
+    io_ctx(std::fs::rename(&optimised, &bg), bg.display())
+}
+
 /// Build the release page into `<root>/dist` and measure it.
 pub fn build(root: &Path, tools: &BuildTools) -> Result<Built> {
     run(proc::cargo_command().current_dir(root).args([
         "build",
         "-p",
         APP_PACKAGE,
+        "--bins",
         "--release",
         "--target",
         WASM_TARGET,
     ]))?;
-    let wasm = crate::target_dir(root).join(WASM_TARGET).join("release").join(format!("{APP_PACKAGE}.wasm"));
-    if !wasm.is_file() {
-        return Err(Failure::new(format!("cargo finished but {} is not there", wasm.display())));
-    }
-
     let dist = crate::dist_dir(root);
     if dist.exists() {
         io_ctx(std::fs::remove_dir_all(&dist), dist.display())?;
     }
     io_ctx(std::fs::create_dir_all(&dist), dist.display())?;
-
-    let mut bindgen = proc::command(&tools.wasm_bindgen);
-    bindgen
-        .args(["--target", "web", "--no-typescript", "--out-dir"])
-        .arg(&dist)
-        .args(["--out-name", OUT_NAME])
-        .arg(&wasm);
-    run(&mut bindgen)?;
-
-    let bg = dist.join(format!("{OUT_NAME}_bg.wasm"));
-    let optimised = dist.join(format!("{OUT_NAME}_bg.opt.wasm"));
-    let mut opt = proc::command(&tools.wasm_opt);
-    opt.arg("-Oz").args(WASM_OPT_FEATURES).arg(&bg).arg("-o").arg(&optimised);
-    run(&mut opt)?;
-    io_ctx(std::fs::rename(&optimised, &bg), bg.display())?;
+    for (bin, out_name) in [(APP_PACKAGE, OUT_NAME), (LAZY_BIN, LAZY_OUT_NAME)] {
+        bind_and_optimise(root, tools, &dist, bin, out_name)?;
+    }
 
     let public = root.join("public");
     copy_tree(&public, &dist)?;

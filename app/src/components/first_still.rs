@@ -43,8 +43,6 @@ pub struct FirstStillState {
     pub request: Memo<Parsed>,
     /// `None` while the request cannot be read.
     pub design: Memo<Option<Result<Design, SizingErrors>>>,
-    /// The view shown.
-    pub mode: RwSignal<Mode>,
 }
 
 impl FirstStillState {
@@ -93,7 +91,6 @@ impl FirstStillState {
             choices,
             request,
             design,
-            mode: RwSignal::new(Mode::Plan),
         }
     }
 
@@ -104,88 +101,114 @@ impl FirstStillState {
     }
 }
 
-/// The two views behind a tab bar: the ordinary plan (the children, kept alive while hidden so
-/// nothing typed there is lost) and the first-still design.
+/// The event the first-still module sends with a design's scenario (JSON) for the plan.
+pub const USE_DESIGN_EVENT: &str = "stillroom-use-design";
+
+/// Asks the page's start-up script to load the first-still module (`public/start.js`).
+fn load_first_still_module() {
+    use wasm_bindgen::JsCast;
+    let Some(window) = web_sys::window() else { return };
+    let loader = js_sys::Reflect::get(&window, &"stillroomFirstStill".into()).ok();
+    if let Some(f) = loader.and_then(|f| f.dyn_into::<js_sys::Function>().ok()) {
+        let _ = f.call0(&window);
+    }
+}
+
+/// Which view the page shows, shared through context by the tab bar, the plan's wrapper in
+/// `App` and the first-still root.
+#[derive(Debug, Clone, Copy)]
+pub struct ShownMode(pub RwSignal<Mode>);
+
+/// The tab bar over the page's two views: the ordinary plan (kept alive while hidden, so nothing
+/// typed there is lost) and the first-still design, a module of its own loaded the first time its
+/// tab is opened. A design it sends back is opened in the plan.
 #[component]
-pub fn Modes<C: IntoView + 'static>(children: TypedChildren<C>) -> impl IntoView {
-    // Typed children, not `Children`: boxing the whole plan into an `AnyView` costs ~15 kB.
-    let children = children.into_inner();
-    let fs = FirstStillState::new();
-    let mode = fs.mode;
-    provide_context(fs);
+pub fn ModeTabs() -> impl IntoView {
+    let mode = expect_context::<ShownMode>().0;
+    // The start-up script loads the module once and keeps it; after a failed load, opening the
+    // tab again tries again.
+    Effect::new(move |_| {
+        if mode.get() == Mode::FirstStill {
+            load_first_still_module();
+        }
+    });
+    let app = expect_context::<AppState>();
+    let handle = window_event_listener_untyped(USE_DESIGN_EVENT, move |ev| {
+        use wasm_bindgen::JsCast;
+        let json = ev.dyn_into::<web_sys::CustomEvent>().ok().and_then(|e| e.detail().as_string());
+        if let Some(s) = json.and_then(|j| crate::records::read_scenario(&j).ok()) {
+            app.apply(&s);
+            mode.set(Mode::Plan);
+            if let Some(w) = web_sys::window() {
+                w.scroll_to_with_x_and_y(0.0, 0.0);
+            }
+        }
+    });
+    on_cleanup(move || handle.remove());
     let tab = move |m: Mode| move || if mode.get() == m { "true" } else { "false" };
     view! {
         <div class="modes" role="tablist" aria-label="What to work out">
             <button type="button" role="tab" id="mode-plan" aria-controls="plan-view"
                 aria-selected=tab(Mode::Plan) class:chosen=move || mode.get() == Mode::Plan
                 on:click=move |_| mode.set(Mode::Plan)>"Plan a run"</button>
-            <button type="button" role="tab" id="mode-first" aria-controls="first-still"
+            <button type="button" role="tab" id="mode-first" aria-controls="first-still-root"
                 aria-selected=tab(Mode::FirstStill) class:chosen=move || mode.get() == Mode::FirstStill
                 on:click=move |_| mode.set(Mode::FirstStill)>"Design a first still"</button>
         </div>
-        <div id="plan-view" role="tabpanel" aria-labelledby="mode-plan" hidden=move || mode.get() != Mode::Plan>
-            {children()}
+        <div id="first-still-root" role="tabpanel" aria-labelledby="mode-first" hidden=move || mode.get() != Mode::FirstStill>
+            <p class="hint">"Loading the first-still designer…"</p>
         </div>
-        <Show when=move || mode.get() == Mode::FirstStill>
-            <div id="first-still" role="tabpanel" aria-labelledby="mode-first" class="columns">
-                <div class="col-in"><form::FirstStillForm /></div>
-                <div class="col-out">
-                    <design::DesignHeadline />
-                    <UseDesign />
-                    <design::BuilderSafety />
-                    <design::DesignDetails />
-                </div>
-            </div>
-        </Show>
     }
 }
 
-/// "Use this design": opens the design in the ordinary plan, asking first (inside the page)
-/// when that would replace what the plan's form holds.
+/// The first-still view: the form, the design, and the way back to the plan.
+#[component]
+pub fn FirstStillView() -> impl IntoView {
+    provide_context(FirstStillState::new());
+    view! {
+        <div id="first-still" class="columns">
+            <div class="col-in"><form::FirstStillForm /></div>
+            <div class="col-out">
+                <design::DesignHeadline />
+                <UseDesign />
+                <design::BuilderSafety />
+                <design::DesignDetails />
+            </div>
+        </div>
+    }
+}
+
+/// Mounts the first-still view into the page's `#first-still-root`, replacing its loading line
+/// (the first-still module's entry point).
+pub fn mount() {
+    let root =
+        web_sys::window().and_then(|w| w.document()).and_then(|d| d.get_element_by_id("first-still-root"));
+    if let Some(root) = root {
+        use wasm_bindgen::JsCast;
+        root.set_inner_html("");
+        if let Ok(root) = root.dyn_into::<web_sys::HtmlElement>() {
+            leptos::mount::mount_to(root, FirstStillView).forget();
+        }
+    }
+}
+
+/// "Use this design": sends the design to the plan (an event the plan's view listens for),
+/// asking first inside the page, since it replaces what the plan's form holds.
 #[component]
 fn UseDesign() -> impl IntoView {
     let fs = expect_context::<FirstStillState>();
-    // Stored, so the closures below are `Copy` and can be rebuilt with the view.
-    let app = StoredValue::new(expect_context::<AppState>());
     let design = fs.design;
-    let mode = fs.mode;
     let asking = RwSignal::new(false);
     let ready = move || design.with(|d| matches!(d, Some(Ok(_))));
     let open = move || {
         design.with_untracked(|d| {
-            if let Some(Ok(d)) = d {
-                app.with_value(|a| a.apply(&d.scenario));
+            if let Some(Ok(d)) = d
+                && let Ok(json) = serde_json::to_string(&d.scenario)
+            {
+                send_to_plan(&json);
             }
         });
         asking.set(false);
-        mode.set(Mode::Plan);
-        if let Some(w) = web_sys::window() {
-            w.scroll_to_with_x_and_y(0.0, 0.0);
-        }
-    };
-    let ask = move |_| {
-        let same = design.with_untracked(|d| match d {
-            Some(Ok(d)) => app.with_value(|a| a.scenario.with_untracked(|s| s.scenario == d.scenario)),
-            _ => false,
-        });
-        if same { open() } else { asking.set(true) }
-    };
-    let now_holds = move || {
-        app.with_value(|a| {
-            a.scenario.with(|d| {
-                let s = &d.scenario;
-                let crop = s
-                    .charge
-                    .crop
-                    .as_deref()
-                    .and_then(|id| stillroom_core::crops::CROPS.iter().find(|c| c.id == id));
-                format!(
-                    "The plan's form now holds a {} charge of {}.",
-                    crate::units::mass(s.charge.plant_mass_kg),
-                    crop.map(|c| c.name.to_lowercase()).unwrap_or_else(|| "the grower's own plant".into())
-                )
-            })
-        })
     };
     view! {
         <section class="use-design" aria-labelledby="h-use-design" hidden=move || !ready()>
@@ -193,11 +216,21 @@ fn UseDesign() -> impl IntoView {
                 <p class="hint">"Opens the bought design in “Plan a run”, where every number of a charge can be followed and changed."</p>
                 // Both states are drawn once and shown in turn: cheaper than swapping views.
                 <div class="confirm" role="group" aria-labelledby="fs-confirm-text" hidden=move || !asking.get()>
-                    <p id="fs-confirm-text">{now_holds}" Replace it with this design? (To keep it, copy it first from “This plan as text”.)"</p>
+                    <p id="fs-confirm-text">"This replaces what the plan's form holds now. Replace it with this design? (To keep it, copy it first from “This plan as text”.)"</p>
                     <button type="button" id="fs-use-confirm" on:click=move |_| open()>"Replace the plan"</button>
                     <button type="button" id="fs-use-cancel" class="quiet" on:click=move |_| asking.set(false)>"Keep my plan"</button>
                 </div>
-                <button type="button" id="fs-use" hidden=move || asking.get() on:click=ask>"Use this design"</button>
+                <button type="button" id="fs-use" hidden=move || asking.get() on:click=move |_| asking.set(true)>"Use this design"</button>
         </section>
+    }
+}
+
+/// Dispatches [`USE_DESIGN_EVENT`] on the window with the scenario's JSON.
+fn send_to_plan(json: &str) {
+    let Some(window) = web_sys::window() else { return };
+    let init = web_sys::CustomEventInit::new();
+    init.set_detail(&wasm_bindgen::JsValue::from_str(json));
+    if let Ok(ev) = web_sys::CustomEvent::new_with_event_init_dict(USE_DESIGN_EVENT, &init) {
+        let _ = window.dispatch_event(&ev);
     }
 }
