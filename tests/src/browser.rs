@@ -342,3 +342,25 @@ pub fn build_id() -> Result<String, BoxError> {
     }
     Ok(id.to_string())
 }
+
+/// How long a test waits for the page to show something (updates are asynchronous).
+pub const WAIT: Duration = Duration::from_secs(15);
+
+/// Waits until the text of the first element matching `css` satisfies `ok`, and returns it; an
+/// error naming what the page showed after [`WAIT`].
+pub async fn wait_text(client: &Client, css: &str, ok: impl Fn(&str) -> bool) -> Result<String, BoxError> {
+    let start = Instant::now();
+    loop {
+        let got = match client.find(fantoccini::Locator::Css(css)).await {
+            Ok(e) => e.text().await.unwrap_or_default(),
+            Err(_) => String::new(),
+        };
+        if ok(&got) {
+            return Ok(got);
+        }
+        if start.elapsed() > WAIT {
+            return Err(format!("{css}: page shows {got:?}").into());
+        }
+        tokio::time::sleep(Duration::from_millis(50)).await;
+    }
+}

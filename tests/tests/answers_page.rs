@@ -7,30 +7,12 @@ use fantoccini::{Client, Locator};
 use serde_json::json;
 use std::time::Duration;
 use stillroom_tests::BoxError;
-use stillroom_tests::browser;
+use stillroom_tests::browser::{self, wait_text};
 
 const WAIT: Duration = Duration::from_secs(15);
 
 async fn out(client: &Client, key: &str) -> Result<String, BoxError> {
     Ok(client.find(Locator::Css(&format!("[data-out={key}]"))).await?.text().await?)
-}
-
-/// Waits until a CSS selector's text satisfies `ok` (updates are asynchronous).
-async fn wait_text(client: &Client, css: &str, ok: impl Fn(&str) -> bool) -> Result<String, BoxError> {
-    let start = std::time::Instant::now();
-    loop {
-        let got = match client.find(Locator::Css(css)).await {
-            Ok(e) => e.text().await.unwrap_or_default(),
-            Err(_) => String::new(),
-        };
-        if ok(&got) {
-            return Ok(got);
-        }
-        if start.elapsed() > WAIT {
-            return Err(format!("{css}: page shows {got:?}").into());
-        }
-        tokio::time::sleep(Duration::from_millis(50)).await;
-    }
 }
 
 async fn set_field(client: &Client, key: &str, text: &str) -> Result<(), BoxError> {

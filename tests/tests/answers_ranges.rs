@@ -2,30 +2,13 @@
 //! most, and keeps notes about the data apart from what the grower should act on. The numbers
 //! must be the core's own: the same scenario planned natively gives the same range.
 
-use fantoccini::{Client, Locator};
+use fantoccini::Locator;
 use std::time::Duration;
 use stillroom_core::{Scenario, plan};
 use stillroom_tests::BoxError;
-use stillroom_tests::browser;
+use stillroom_tests::browser::{self, wait_text};
 
 const WAIT: Duration = Duration::from_secs(15);
-
-async fn text_when(client: &Client, css: &str, pred: impl Fn(&str) -> bool) -> Result<String, BoxError> {
-    let start = std::time::Instant::now();
-    loop {
-        let got = match client.find(Locator::Css(css)).await {
-            Ok(e) => e.text().await.unwrap_or_default(),
-            Err(_) => String::new(),
-        };
-        if pred(&got) {
-            return Ok(got);
-        }
-        if start.elapsed() > WAIT {
-            return Err(format!("{css}: page shows {got:?}").into());
-        }
-        tokio::time::sleep(Duration::from_millis(50)).await;
-    }
-}
 
 /// "1 h 02 min" as the page writes durations (rounded to the minute).
 fn duration(s: f64) -> String {
@@ -45,15 +28,15 @@ async fn the_run_shows_its_likely_range_and_the_biggest_doubt() -> Result<(), Bo
     let p = plan(&Scenario::default()).map_err(|e| e.to_string())?;
     let r = &p.ranges.run_time_s;
     let want = format!("likely {} to {}", duration(r.low), duration(r.high));
-    let note = text_when(c, "[data-out=total_time] + .card-note", |t| t.contains("likely")).await?;
+    let note = wait_text(c, "[data-out=total_time] + .card-note", |t| t.contains("likely")).await?;
     assert!(note.contains(&want), "{note:?} should contain {want:?}");
     // The oil card gives the separable oil's range.
-    let oil = text_when(c, "[data-out=oil_volume] + .card-note", |t| t.contains("likely")).await?;
+    let oil = wait_text(c, "[data-out=oil_volume] + .card-note", |t| t.contains("likely")).await?;
     assert!(oil.starts_with("separable oil, likely"), "{oil}");
     // "How sure is this?" names what moves the run most, in plain words.
     let sure = c.find(Locator::Css("[data-out=how_sure] summary")).await?;
     sure.click().await?;
-    let doubt = text_when(c, "[data-note=doubt_run]", |t| !t.is_empty()).await?;
+    let doubt = wait_text(c, "[data-note=doubt_run]", |t| !t.is_empty()).await?;
     assert!(doubt.starts_with("Run length: mostly"), "{doubt}");
     // Notes about the data sit there, not under "Watch out".
     let watch = c.find_all(Locator::Css(".warnings [data-warning=estimated_vapour_pressure]")).await?;
@@ -82,11 +65,11 @@ async fn the_appliance_and_cohobation_change_the_plan_from_the_page() -> Result<
     assert!(placeholder.starts_with("75"), "{placeholder}");
     // An electric element cannot burn propane: the message sits beside the picker.
     c.find(Locator::Id("f-appliance")).await?.select_by_value("immersion_element").await?;
-    text_when(c, "#e-appliance", |t| t.contains("cannot use")).await?;
+    wait_text(c, "#e-appliance", |t| t.contains("cannot use")).await?;
     c.find(Locator::Id("f-appliance")).await?.select_by_value("usual").await?;
     // Returning the waters: the hydrosol card says how much went back to the boiler.
     c.find(Locator::Id("f-cohobation")).await?.click().await?;
-    text_when(c, "[data-out=hydrosol_total] + .card-note", |t| t.contains("returned to the boiler")).await?;
+    wait_text(c, "[data-out=hydrosol_total] + .card-note", |t| t.contains("returned to the boiler")).await?;
     page.close().await
 }
 

@@ -10,7 +10,7 @@ use stillroom_core::sizing::{
     size,
 };
 use stillroom_tests::BoxError;
-use stillroom_tests::browser;
+use stillroom_tests::browser::{self, wait_text};
 
 const WAIT: Duration = Duration::from_secs(20);
 
@@ -61,24 +61,6 @@ async fn click(c: &Client, id: &str) -> Result<(), BoxError> {
 async fn card_si(c: &Client, out: &str) -> Result<f64, BoxError> {
     let el = c.wait().at_most(WAIT).for_element(Locator::Css(&format!("[data-out={out}][data-si]"))).await?;
     Ok(el.attr("data-si").await?.ok_or("no data-si")?.parse()?)
-}
-
-/// Waits until a condition on the page's text holds.
-async fn wait_text(c: &Client, css: &str, want: impl Fn(&str) -> bool) -> Result<String, BoxError> {
-    let start = std::time::Instant::now();
-    loop {
-        let got = match c.find(Locator::Css(css)).await {
-            Ok(el) => el.text().await.unwrap_or_default(),
-            Err(_) => String::new(),
-        };
-        if want(&got) {
-            return Ok(got);
-        }
-        if start.elapsed() > WAIT {
-            return Err(format!("{css}: page shows {got:?}").into());
-        }
-        tokio::time::sleep(Duration::from_millis(100)).await;
-    }
 }
 
 async fn fresh(page: &browser::Page) -> Result<(), BoxError> {
