@@ -27,15 +27,26 @@ pub struct NumField {
     pub set: fn(&mut Scenario, Option<f64>),
 }
 
-fn same(v: f64) -> f64 {
-    v
+/// Plain SI conversions shared by the page's two forms (this one and the first-still form).
+pub(crate) mod convert {
+    pub(crate) fn same(v: f64) -> f64 {
+        v
+    }
+    pub(crate) fn kilo(v: f64) -> f64 {
+        v * 1e3
+    }
+    pub(crate) fn per_kilo(v: f64) -> f64 {
+        v / 1e3
+    }
+    pub(crate) fn minutes(v: f64) -> f64 {
+        v * 60.0
+    }
+    pub(crate) fn per_minutes(v: f64) -> f64 {
+        v / 60.0
+    }
 }
-fn kilo(v: f64) -> f64 {
-    v * 1e3
-}
-fn per_kilo(v: f64) -> f64 {
-    v / 1e3
-}
+use convert::{kilo, minutes, per_kilo, per_minutes, same};
+
 fn hecto(v: f64) -> f64 {
     v * 1e2
 }
@@ -53,12 +64,6 @@ fn micro(v: f64) -> f64 {
 }
 fn per_micro(v: f64) -> f64 {
     v * 1e6
-}
-fn minutes(v: f64) -> f64 {
-    v * 60.0
-}
-fn per_minutes(v: f64) -> f64 {
-    v / 60.0
 }
 fn percent(v: f64) -> f64 {
     v / 100.0

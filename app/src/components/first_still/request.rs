@@ -35,28 +35,13 @@ pub struct SizeField {
 /// Says where the starting entries come from.
 pub const START_NOTE: &str = "The starting entries are invented: Larkfield Farm's 40 kg of lavender a day for 20 days, at 300 m, over propane.";
 
-fn same(v: f64) -> f64 {
-    v
-}
-fn kilo(v: f64) -> f64 {
-    v * 1e3
-}
-fn per_kilo(v: f64) -> f64 {
-    v / 1e3
-}
+use crate::fields::convert::{kilo, minutes, per_kilo, per_minutes, same};
+
 fn hours(v: f64) -> f64 {
     v * 3600.0
 }
 fn per_hours(v: f64) -> f64 {
     v / 3600.0
-}
-/// L/min of cooling water -> kg/s, taking a litre of cool water as a kilogram (999 kg/m³ at
-/// 15 °C, IAPWS-IF97: 0.1 % off, well inside what a tap's flow is known to).
-fn per_minute(v: f64) -> f64 {
-    v / 60.0
-}
-fn minutes_of(v: f64) -> f64 {
-    v * 60.0
 }
 
 const fn field(
@@ -181,8 +166,10 @@ pub const SIZE_FIELDS: &[SizeField] = &[
     ),
     SizeField {
         optional: true,
-        to_si: per_minute,
-        from_si: minutes_of,
+        // L/min -> kg/s, a litre of cool water taken as a kilogram (999 kg/m³ at 15 °C,
+        // IAPWS-IF97: 0.1 % off, well inside what a tap's flow is known to).
+        to_si: per_minutes,
+        from_si: minutes,
         ..field(
             "max_flow",
             "cooling.max_flow_kg_per_s",
