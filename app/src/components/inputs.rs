@@ -707,7 +707,7 @@ pub fn InstallHint() -> impl IntoView {
     };
     view! {
         <Show when=move || offer.with(|o| o.is_some())>
-            <p class="install-hint" data-out="install_hint">
+            <p class="install-hint">
                 <span>"Keep it on this device, for offline use"</span>
                 <button type="button" on:click=install>"Install"</button>
                 <button type="button" class="quiet" aria-label="No thanks" on:click=move |_| offer.set(None)>"✕"</button>
