@@ -12,19 +12,24 @@ init({ module_or_path: new URL("./stillroom_app_bg.wasm", import.meta.url) }).ca
   console.error(err);
 });
 
-// The first-still designer is a module of its own, loaded the first time its tab is opened (the
-// page calls this), so a first visit downloads only what a first plan needs.
-let firstStill = null;
-window.stillroomFirstStill = () => {
-  firstStill ??= import("./stillroom_first_still.js")
-    .then((m) => m.default({ module_or_path: new URL("./stillroom_first_still_bg.wasm", import.meta.url) }))
-    .catch((err) => {
-      firstStill = null;
-      const root = document.getElementById("first-still-root");
-      if (root) root.textContent = "The first-still designer could not be loaded (" + err + "). Check the connection and open the tab again.";
-    });
-  return firstStill;
-};
+// The first-still designer and the workbench are modules of their own, each loaded the first
+// time its tab is opened (the page calls these), so a first visit downloads only what a first
+// plan needs.
+function lazyModule(stem, rootId, what) {
+  let loading = null;
+  return () => {
+    loading ??= import("./" + stem + ".js")
+      .then((m) => m.default({ module_or_path: new URL("./" + stem + "_bg.wasm", import.meta.url) }))
+      .catch((err) => {
+        loading = null;
+        const root = document.getElementById(rootId);
+        if (root) root.textContent = "The " + what + " could not be loaded (" + err + "). Check the connection and open the tab again.";
+      });
+    return loading;
+  };
+}
+window.stillroomFirstStill = lazyModule("stillroom_first_still", "first-still-root", "first-still designer");
+window.stillroomWorkbench = lazyModule("stillroom_workbench", "workbench-root", "workbench");
 
 // A new version's service worker installs in the background and then waits. The grower is told,
 // and it takes over only when they tap "Use the new version" (never in the middle of an entry);

@@ -1,6 +1,7 @@
 //! The Stillroom page: a thin shell around the core. It collects the inputs, calls the core's
 //! one entry point, and shows the plan.
 
+pub mod bridge;
 pub mod components;
 pub mod fields;
 pub mod records;
@@ -8,14 +9,13 @@ pub mod state;
 pub mod storage;
 pub mod store;
 pub mod units;
+pub mod workbench;
 
 use components::cautions::Cautions;
-use components::first_still::{Mode, ModeTabs, ShownMode};
 use components::inputs::{EquipmentInputs, EssentialInputs, InstallHint, UnitsChoice};
 use components::kept_aside::{KeptAside, StorageNotices};
+use components::modes::{Mode, ModeTabs, ShownMode};
 use components::results::{Details, Headline, Warnings};
-use components::runlog::RunLog;
-use components::share::ScenarioText;
 use leptos::prelude::*;
 use state::AppState;
 
@@ -52,7 +52,7 @@ pub fn App() -> impl IntoView {
             // left and answers right.
             <div id="plan-view" role="tabpanel" aria-labelledby="mode-plan" class="columns" hidden=move || mode.get() != Mode::Plan>
                 <div class="col-out"><Headline /><Warnings /></div>
-                <div class="col-in"><EssentialInputs /><EquipmentInputs /><RunLog /><ScenarioText /></div>
+                <div class="col-in"><EssentialInputs /><EquipmentInputs /></div>
                 <div class="col-out"><Details /></div>
             </div>
             <Cautions />

@@ -14,7 +14,6 @@ use crate::store::Store;
 use crate::units::UnitSystem;
 use leptos::prelude::*;
 use serde::{Deserialize, Serialize};
-use stillroom_core::calibration::RunRecord;
 use stillroom_core::heat::{Appliance, Fuel, Metal};
 use stillroom_core::scenario::{
     BarometerReference, CondenserKind, CustomVapourPressure, OilComposition, OilPart, Scenario,
@@ -77,8 +76,6 @@ pub struct AppState {
     next_row_key: RwSignal<u32>,
     /// Name of the grower's own compound; empty means none.
     pub own_name: RwSignal<String>,
-    /// The grower's log of finished runs.
-    pub runs: RwSignal<Vec<RunRecord>>,
     /// Saved data: notices, kept-aside copies, the storage sync.
     pub store: Store,
     pub scenario: Memo<Derived>,
@@ -152,10 +149,11 @@ impl AppState {
     pub fn new() -> AppState {
         let store = Store::new();
         let base = store.load(Kind::Plan, records::read_scenario).unwrap_or_default();
-        let logged = store.load(Kind::RunLog, records::read_runs).unwrap_or_default();
+        // The run log belongs to the workbench; checked here too, so an unreadable log is kept
+        // aside and reported on the first screen, not only when the workbench opens.
+        let _ = store.load(Kind::RunLog, records::read_runs);
         store.report_found();
         store.refresh_kept();
-        let runs = RwSignal::new(logged);
         let texts: Vec<RwSignal<String>> = FIELDS.iter().map(|_| RwSignal::new(String::new())).collect();
         let base_signal = RwSignal::new(Scenario::default());
         let pressure_mode = RwSignal::new(PressureMode::Altitude);
@@ -286,10 +284,6 @@ impl AppState {
             let text = scenario.with(|d| records::scenario_text(&d.scenario));
             store.save(Kind::Plan, text);
         });
-        Effect::new(move |_| {
-            let text = runs.with(|r| records::runs_text(r));
-            store.save(Kind::RunLog, text);
-        });
         // The page's shell reads this before applying an update (a reload would drop entries
         // that only live on the page).
         Effect::new(move |_| {
@@ -306,7 +300,16 @@ impl AppState {
         });
         let draft_texts = texts.clone();
         Effect::new(move |_| save_draft(units.get(), &draft_texts));
-        Effect::new(move |_| save_units(units.get()));
+        Effect::new(move |_| {
+            let chosen = units.get();
+            save_units(chosen);
+            crate::bridge::send(crate::bridge::UNITS_EVENT, chosen.key());
+        });
+        // What the other modules read of the plan: the form's scenario and the units.
+        crate::bridge::expose_current_plan(move || {
+            scenario.with_untracked(|d| records::scenario_text(&d.scenario))
+        });
+        crate::bridge::expose_units(move || units.get_untracked().key().to_string());
 
         let state = AppState {
             base: base_signal,
@@ -323,7 +326,6 @@ impl AppState {
             mixture,
             next_row_key,
             own_name,
-            runs,
             store,
             scenario,
             plan,
@@ -417,11 +419,9 @@ impl AppState {
 
     /// Everything the page holds, offered as a file.
     pub fn download_everything(&self) -> Result<(), String> {
-        let text = self.scenario.with_untracked(|d| {
-            self.runs.with_untracked(|r| {
-                self.store.kept.with_untracked(|k| storage::everything(&d.scenario, r, k))
-            })
-        });
+        let text = self
+            .scenario
+            .with_untracked(|d| self.store.kept.with_untracked(|k| storage::everything(&d.scenario, k)));
         storage::download(&format!("stillroom-everything-{}.json", storage::file_stamp()), &text)
     }
 
@@ -429,8 +429,6 @@ impl AppState {
     pub fn save_now(&self) {
         let plan = self.scenario.with_untracked(|d| records::scenario_text(&d.scenario));
         self.store.save(Kind::Plan, plan);
-        let runs = self.runs.with_untracked(|r| records::runs_text(r));
-        self.store.save(Kind::RunLog, runs);
     }
 
     /// Shows the form and the answers in other units. Every number typed is carried over as

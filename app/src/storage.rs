@@ -5,7 +5,6 @@
 use crate::records::{self, BACKUP_PREFIX, Kind};
 use serde_json::Value;
 use stillroom_core::Scenario;
-use stillroom_core::calibration::RunRecord;
 use wasm_bindgen::JsCast;
 
 /// Why a write did not happen.
@@ -180,9 +179,10 @@ pub fn file_stamp() -> String {
     local_time(now_ms()).replace(' ', "-").replace(':', "")
 }
 
-/// Everything the page holds, as one JSON text: today's plan and run log (from memory, so the
-/// latest entries are in it even when they could not be saved) and every kept-aside text.
-pub fn everything(scenario: &Scenario, runs: &[RunRecord], kept: &[KeptCopy]) -> String {
+/// Everything the page holds, as one JSON text: today's plan (from memory, so the latest entries
+/// are in it even when they could not be saved), every other saved record of the page as stored
+/// (the workbench's saved plans and stills, the run log), and every kept-aside text.
+pub fn everything(scenario: &Scenario, kept: &[KeptCopy]) -> String {
     let kept: Vec<Value> = kept
         .iter()
         .map(|k| {
@@ -196,8 +196,13 @@ pub fn everything(scenario: &Scenario, runs: &[RunRecord], kept: &[KeptCopy]) ->
     let all = serde_json::json!({
         "stillroom_export": 1,
         "plan_record": serde_json::from_str::<Value>(&records::scenario_text(scenario)).unwrap_or(Value::Null),
-        "run_log_record": serde_json::from_str::<Value>(&records::runs_text(runs)).unwrap_or(Value::Null),
+        "run_log_record": stored_json(Kind::RunLog.key()),
         "kept_aside": kept,
     });
     serde_json::to_string_pretty(&all).unwrap_or_default()
+}
+
+/// A stored record as JSON (`null` when absent or not JSON: a kept-aside copy holds such text).
+fn stored_json(key: &str) -> Value {
+    get(key).ok().flatten().and_then(|t| serde_json::from_str(&t).ok()).unwrap_or(Value::Null)
 }

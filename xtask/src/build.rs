@@ -10,10 +10,11 @@ use std::path::{Path, PathBuf};
 /// The app crate and the stem of the files wasm-bindgen writes.
 pub const APP_PACKAGE: &str = "stillroom-app";
 pub const OUT_NAME: &str = "stillroom_app";
-/// The first-still mode, a module of its own that the page loads when the mode is first opened,
-/// so the first load carries only what a first plan needs.
-pub const LAZY_BIN: &str = "stillroom-first-still";
-pub const LAZY_OUT_NAME: &str = "stillroom_first_still";
+/// The modules the page loads only when their tab is first opened (the first-still designer; the
+/// workbench of saved plans, comparisons, tables and batch records), so the first load carries
+/// only what a first plan needs: (cargo bin, output name).
+pub const LAZY_BINS: [(&str, &str); 2] =
+    [("stillroom-first-still", "stillroom_first_still"), ("stillroom-workbench", "stillroom_workbench")];
 /// Replaced by the build id in `dist/sw.js` and `dist/index.html`.
 pub const BUILD_ID_TOKEN: &str = "__STILLROOM_BUILD_ID__";
 /// Replaced in `dist/sw.js` by the list of files to precache.
@@ -155,7 +156,7 @@ pub fn build(root: &Path, tools: &BuildTools) -> Result<Built> {
         io_ctx(std::fs::remove_dir_all(&dist), dist.display())?;
     }
     io_ctx(std::fs::create_dir_all(&dist), dist.display())?;
-    for (bin, out_name) in [(APP_PACKAGE, OUT_NAME), (LAZY_BIN, LAZY_OUT_NAME)] {
+    for (bin, out_name) in std::iter::once((APP_PACKAGE, OUT_NAME)).chain(LAZY_BINS) {
         bind_and_optimise(root, tools, &dist, bin, out_name)?;
     }
 

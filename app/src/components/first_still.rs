@@ -10,19 +10,12 @@ mod design;
 mod form;
 pub mod request;
 
-use crate::state::AppState;
+use crate::bridge;
 use leptos::prelude::*;
 use request::{Choices, HarvestMode, SIZE_FIELDS, SupplyMode, TextProblem, build_request};
 use stillroom_core::heat::Fuel;
 use stillroom_core::scenario::CondenserKind;
 use stillroom_core::sizing::{Design, SizingErrors, SizingRequest, TubeStandard};
-
-/// Which of the page's two views is shown.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
-pub enum Mode {
-    Plan,
-    FirstStill,
-}
 
 /// The request as typed: the request, or every field whose text cannot be read.
 pub type Parsed = Result<SizingRequest, Vec<(&'static str, TextProblem)>>;
@@ -101,66 +94,6 @@ impl FirstStillState {
     }
 }
 
-/// The event the first-still module sends with a design's scenario (JSON) for the plan.
-pub const USE_DESIGN_EVENT: &str = "stillroom-use-design";
-
-/// Asks the page's start-up script to load the first-still module (`public/start.js`).
-fn load_first_still_module() {
-    use wasm_bindgen::JsCast;
-    let Some(window) = web_sys::window() else { return };
-    let loader = js_sys::Reflect::get(&window, &"stillroomFirstStill".into()).ok();
-    if let Some(f) = loader.and_then(|f| f.dyn_into::<js_sys::Function>().ok()) {
-        let _ = f.call0(&window);
-    }
-}
-
-/// Which view the page shows, shared through context by the tab bar, the plan's wrapper in
-/// `App` and the first-still root.
-#[derive(Debug, Clone, Copy)]
-pub struct ShownMode(pub RwSignal<Mode>);
-
-/// The tab bar over the page's two views: the ordinary plan (kept alive while hidden, so nothing
-/// typed there is lost) and the first-still design, a module of its own loaded the first time its
-/// tab is opened. A design it sends back is opened in the plan.
-#[component]
-pub fn ModeTabs() -> impl IntoView {
-    let mode = expect_context::<ShownMode>().0;
-    // The start-up script loads the module once and keeps it; after a failed load, opening the
-    // tab again tries again.
-    Effect::new(move |_| {
-        if mode.get() == Mode::FirstStill {
-            load_first_still_module();
-        }
-    });
-    let app = expect_context::<AppState>();
-    let handle = window_event_listener_untyped(USE_DESIGN_EVENT, move |ev| {
-        use wasm_bindgen::JsCast;
-        let json = ev.dyn_into::<web_sys::CustomEvent>().ok().and_then(|e| e.detail().as_string());
-        if let Some(s) = json.and_then(|j| crate::records::read_scenario(&j).ok()) {
-            app.apply(&s);
-            mode.set(Mode::Plan);
-            if let Some(w) = web_sys::window() {
-                w.scroll_to_with_x_and_y(0.0, 0.0);
-            }
-        }
-    });
-    on_cleanup(move || handle.remove());
-    let tab = move |m: Mode| move || if mode.get() == m { "true" } else { "false" };
-    view! {
-        <div class="modes" role="tablist" aria-label="What to work out">
-            <button type="button" role="tab" id="mode-plan" aria-controls="plan-view"
-                aria-selected=tab(Mode::Plan) class:chosen=move || mode.get() == Mode::Plan
-                on:click=move |_| mode.set(Mode::Plan)>"Plan a run"</button>
-            <button type="button" role="tab" id="mode-first" aria-controls="first-still-root"
-                aria-selected=tab(Mode::FirstStill) class:chosen=move || mode.get() == Mode::FirstStill
-                on:click=move |_| mode.set(Mode::FirstStill)>"Design a first still"</button>
-        </div>
-        <div id="first-still-root" role="tabpanel" aria-labelledby="mode-first" hidden=move || mode.get() != Mode::FirstStill>
-            <p class="hint">"Loading the first-still designer…"</p>
-        </div>
-    }
-}
-
 /// The first-still view: the form, the design, and the way back to the plan.
 #[component]
 pub fn FirstStillView() -> impl IntoView {
@@ -205,7 +138,7 @@ fn UseDesign() -> impl IntoView {
             if let Some(Ok(d)) = d
                 && let Ok(json) = serde_json::to_string(&d.scenario)
             {
-                send_to_plan(&json);
+                bridge::send(bridge::OPEN_PLAN_EVENT, &json);
             }
         });
         asking.set(false);
@@ -216,21 +149,11 @@ fn UseDesign() -> impl IntoView {
                 <p class="hint">"Opens the bought design in “Plan a run”, where every number of a charge can be followed and changed."</p>
                 // Both states are drawn once and shown in turn: cheaper than swapping views.
                 <div class="confirm" role="group" aria-labelledby="fs-confirm-text" hidden=move || !asking.get()>
-                    <p id="fs-confirm-text">"This replaces what the plan's form holds now. Replace it with this design? (To keep it, copy it first from “This plan as text”.)"</p>
+                    <p id="fs-confirm-text">"This replaces what the plan's form holds now. Replace it with this design? (To keep it, save it first under “Saved plans”.)"</p>
                     <button type="button" id="fs-use-confirm" on:click=move |_| open()>"Replace the plan"</button>
                     <button type="button" id="fs-use-cancel" class="quiet" on:click=move |_| asking.set(false)>"Keep my plan"</button>
                 </div>
                 <button type="button" id="fs-use" hidden=move || asking.get() on:click=move |_| asking.set(true)>"Use this design"</button>
         </section>
-    }
-}
-
-/// Dispatches [`USE_DESIGN_EVENT`] on the window with the scenario's JSON.
-fn send_to_plan(json: &str) {
-    let Some(window) = web_sys::window() else { return };
-    let init = web_sys::CustomEventInit::new();
-    init.set_detail(&wasm_bindgen::JsValue::from_str(json));
-    if let Ok(ev) = web_sys::CustomEvent::new_with_event_init_dict(USE_DESIGN_EVENT, &init) {
-        let _ = window.dispatch_event(&ev);
     }
 }

@@ -1,6 +1,8 @@
 //! Saved data the page could not read, and the notices about saved data: what was found at
 //! start, entries that could not be saved, and the way out (download everything).
 
+use crate::bridge;
+use crate::components::modes::{ShownMode, to_workbench};
 use crate::records::{self, Kind};
 use crate::state::AppState;
 use crate::storage::{self, KeptCopy};
@@ -75,20 +77,22 @@ fn KeptLine(copy: KeptCopy, index: usize) -> impl IntoView {
         outcome.set(storage::download(&name, &text).err().map(Err));
     };
     let open_key = key.clone();
-    let open_state = state.clone();
+    let mode = expect_context::<ShownMode>().0;
+    // Opened in the workbench: a plan as a new saved plan (never over the form), a run log
+    // merged into the runs.
     let open = move |_| {
         let text = storage::get(&open_key).ok().flatten().unwrap_or_default();
         let result = match kind {
-            Some(Kind::RunLog) => records::read_runs(&text)
-                .map(|found| {
-                    let n = found.len();
-                    open_state.runs.update(|r| r.extend(found));
-                    format!("Opened: {n} run(s) added to your runs.")
-                })
-                .map_err(|e| format!("It still cannot be read: {e}.")),
-            _ => open_state.import(&text).map(|()| "Opened: the form now shows this plan.".to_string()),
+            Some(Kind::RunLog) => records::read_runs(&text).map(|_| bridge::INBOX_RUNLOG),
+            _ => records::read_scenario(&text).map(|_| bridge::INBOX_PLAN),
         };
-        outcome.set(Some(result));
+        match result {
+            Ok(inbox) => {
+                to_workbench(mode, inbox, &text);
+                outcome.set(Some(Ok("Opened in “Saved, compare, runs”.".to_string())));
+            }
+            Err(e) => outcome.set(Some(Err(format!("It still cannot be read: {e}.")))),
+        }
     };
     let del_key = key.clone();
     let del_state = state.clone();

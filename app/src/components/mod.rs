@@ -4,6 +4,5 @@ pub mod cautions;
 pub mod first_still;
 pub mod inputs;
 pub mod kept_aside;
+pub mod modes;
 pub mod results;
-pub mod runlog;
-pub mod share;

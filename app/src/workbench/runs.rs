@@ -1,11 +1,33 @@
 //! The grower's log of finished runs, and what it says about the next one.
 
+use super::Workbench;
 use crate::fields::{TextError, parse_number};
-use crate::state::AppState;
+use crate::records::{self, Kind};
 use crate::units;
 use leptos::prelude::*;
 use stillroom_core::calibration::{RunRecord, calibrate, oil_content_percent_from_run};
 use stillroom_core::crops::CROPS;
+
+/// The log of finished runs, saved under [`Kind::RunLog`]'s key.
+#[derive(Clone, Copy)]
+pub struct Runs {
+    pub runs: RwSignal<Vec<RunRecord>>,
+}
+
+impl Runs {
+    /// Reads the saved log (anything unreadable kept aside and reported) and keeps it saved.
+    fn new(wb: Workbench) -> Runs {
+        let store = wb.store;
+        let logged = store.load(Kind::RunLog, records::read_runs).unwrap_or_default();
+        store.report_found();
+        let runs = RwSignal::new(logged);
+        Effect::new(move |_| {
+            let text = runs.with(|r| records::runs_text(r));
+            store.save(Kind::RunLog, text);
+        });
+        Runs { runs }
+    }
+}
 
 fn crop_name(id: &Option<String>) -> String {
     id.as_deref()
@@ -26,8 +48,9 @@ fn read(text: &str, what: &str) -> Result<f64, String> {
 /// The log: a short form for a finished run, the list, and the suggestion for the next plan.
 #[component]
 pub fn RunLog() -> impl IntoView {
-    let state = expect_context::<AppState>();
-    let runs = state.runs;
+    let wb = expect_context::<Workbench>();
+    let runs = Runs::new(wb).runs;
+    provide_context(Runs { runs });
     let date = RwSignal::new(String::new());
     let minutes = RwSignal::new(String::new());
     let oil_ml = RwSignal::new(String::new());
@@ -41,11 +64,15 @@ pub fn RunLog() -> impl IntoView {
         }
     };
 
-    let log_state = state.clone();
     let log = move |_| {
-        let derived = log_state.scenario.get_untracked();
-        let plan = log_state.plan.get_untracked();
-        let Ok(plan) = plan else {
+        wb.refresh();
+        let Some(scenario) = wb.current.get_untracked() else {
+            problem.set(Some(
+                "The plan's form could not be read: open “Plan a run” once, then log the run.".into(),
+            ));
+            return;
+        };
+        let Ok(plan) = stillroom_core::plan(&scenario) else {
             problem.set(Some(
                 "Fix the plan's marked fields first: the log uses its plant mass and oil density.".into(),
             ));
@@ -59,8 +86,8 @@ pub fn RunLog() -> impl IntoView {
                 problem.set(None);
                 let record = RunRecord {
                     date: date.get_untracked().trim().to_string(),
-                    crop: derived.scenario.charge.crop.clone(),
-                    plant_mass_kg: derived.scenario.charge.plant_mass_kg,
+                    crop: scenario.charge.crop.clone(),
+                    plant_mass_kg: scenario.charge.plant_mass_kg,
                     distilling_time_s: m * 60.0,
                     oil_volume_m3: ml * 1e-6,
                     oil_density_kg_per_m3: plan.oil.density_kg_per_m3,
@@ -74,15 +101,14 @@ pub fn RunLog() -> impl IntoView {
         }
     };
 
-    let sug_state = state.clone();
     let suggestion = Memo::new(move |_| {
-        let crop = sug_state.crop.get();
+        let crop = wb.current.with(|s| s.as_ref().and_then(|s| s.charge.crop.clone()));
         runs.with(|r| calibrate(r, crop.as_deref())).map(|c| (c, crop_name(&crop)))
     });
-    let use_state = state.clone();
     let use_it = move |_| {
-        if let Some((c, _)) = suggestion.get_untracked() {
-            use_state.text("oil_content").set(units::fixed(c.oil_content_percent, 2));
+        if let (Some((c, _)), Some(mut s)) = (suggestion.get_untracked(), wb.current.get_untracked()) {
+            s.charge.oil_content_percent = Some(c.oil_content_percent);
+            wb.open_in_plan(&s);
         }
     };
 

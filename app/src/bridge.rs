@@ -1,0 +1,126 @@
+//! How the page's modules talk: the plan (the first module) and the modules loaded later (the
+//! first-still designer, the workbench) share no memory, only the window. Three channels:
+//!
+//! - [`OPEN_PLAN_EVENT`]: a module asks the plan to open a scenario (its record text or bare
+//!   JSON) in the form; the plan reads it like any pasted plan.
+//! - the inbox: the plan hands the workbench a text to take in (a share link, a kept-aside copy
+//!   to try again), queued on `window.stillroomInbox` so nothing is lost while the module is
+//!   still loading, and announced with [`INBOX_EVENT`].
+//! - `window.stillroomCurrentPlan()` and `window.stillroomUnits()`, set by the plan: the form's
+//!   scenario as a record text, and the units in force ([`UNITS_EVENT`] announces a change).
+
+use wasm_bindgen::JsCast;
+use wasm_bindgen::prelude::*;
+
+/// A module asks the plan to open a scenario in the form (detail: its JSON text).
+pub const OPEN_PLAN_EVENT: &str = "stillroom-open-plan";
+/// Something waits in the workbench's inbox.
+pub const INBOX_EVENT: &str = "stillroom-inbox";
+/// The workbench's tab was shown again: what it read from the plan may have changed.
+pub const SHOWN_EVENT: &str = "stillroom-workbench-shown";
+/// The grower switched units (detail: the units' key).
+pub const UNITS_EVENT: &str = "stillroom-units";
+/// What an inbox item holds.
+pub const INBOX_LINK: &str = "link";
+pub const INBOX_PLAN: &str = "plan";
+pub const INBOX_RUNLOG: &str = "runlog";
+
+const INBOX: &str = "stillroomInbox";
+const CURRENT_PLAN: &str = "stillroomCurrentPlan";
+const UNITS: &str = "stillroomUnits";
+
+fn window() -> Option<web_sys::Window> {
+    web_sys::window()
+}
+
+/// Dispatches `event` on the window with a text as its detail.
+pub fn send(event: &str, detail: &str) {
+    let Some(window) = window() else { return };
+    let init = web_sys::CustomEventInit::new();
+    init.set_detail(&JsValue::from_str(detail));
+    if let Ok(ev) = web_sys::CustomEvent::new_with_event_init_dict(event, &init) {
+        let _ = window.dispatch_event(&ev);
+    }
+}
+
+/// The text an event of [`send`] carries.
+pub fn detail(ev: web_sys::Event) -> Option<String> {
+    ev.dyn_into::<web_sys::CustomEvent>().ok().and_then(|e| e.detail().as_string())
+}
+
+fn inbox(window: &web_sys::Window) -> Option<js_sys::Array> {
+    let found =
+        js_sys::Reflect::get(window, &INBOX.into()).ok().and_then(|v| v.dyn_into::<js_sys::Array>().ok());
+    found.or_else(|| {
+        let fresh = js_sys::Array::new();
+        js_sys::Reflect::set(window, &INBOX.into(), &fresh).ok()?;
+        Some(fresh)
+    })
+}
+
+/// Queues `(kind, text)` for the workbench and announces it.
+pub fn post(kind: &str, text: &str) {
+    let Some(w) = window() else { return };
+    if let Some(list) = inbox(&w) {
+        list.push(&js_sys::Array::of2(&kind.into(), &text.into()));
+    }
+    send(INBOX_EVENT, kind);
+}
+
+/// Everything queued for the workbench, oldest first; the queue is emptied.
+pub fn take_inbox() -> Vec<(String, String)> {
+    let Some(list) = window().and_then(|w| inbox(&w)) else { return Vec::new() };
+    let items: Vec<(String, String)> = list
+        .iter()
+        .filter_map(|item| {
+            let pair = item.dyn_into::<js_sys::Array>().ok()?;
+            Some((pair.get(0).as_string()?, pair.get(1).as_string()?))
+        })
+        .collect();
+    list.set_length(0);
+    items
+}
+
+/// Sets `window.<name>` to a function returning a text.
+fn expose(name: &str, f: impl Fn() -> String + 'static) {
+    let Some(w) = window() else { return };
+    let closure = Closure::<dyn Fn() -> String>::new(f);
+    let _ = js_sys::Reflect::set(&w, &name.into(), closure.as_ref());
+    closure.forget();
+}
+
+fn call(name: &str) -> Option<String> {
+    let w = window()?;
+    let f = js_sys::Reflect::get(&w, &name.into()).ok()?.dyn_into::<js_sys::Function>().ok()?;
+    f.call0(&w).ok()?.as_string()
+}
+
+/// The plan offers its form's scenario (as a record text) to the other modules.
+pub fn expose_current_plan(f: impl Fn() -> String + 'static) {
+    expose(CURRENT_PLAN, f);
+}
+
+/// The plan's form scenario now, as a record text; `None` when the plan is not running.
+pub fn current_plan_text() -> Option<String> {
+    call(CURRENT_PLAN)
+}
+
+/// The plan offers the units in force.
+pub fn expose_units(f: impl Fn() -> String + 'static) {
+    expose(UNITS, f);
+}
+
+/// The units in force on the page (metric if the plan does not say).
+pub fn units() -> crate::units::UnitSystem {
+    call(UNITS).and_then(|k| crate::units::UnitSystem::from_key(&k)).unwrap_or_default()
+}
+
+/// Asks the page's start-up script to load a lazily loaded module by the name of its loader on
+/// the window (`public/start.js`): it loads once and is kept; a failed load tries again.
+pub fn load_module(loader: &str) {
+    let Some(w) = window() else { return };
+    let f = js_sys::Reflect::get(&w, &loader.into()).ok().and_then(|f| f.dyn_into::<js_sys::Function>().ok());
+    if let Some(f) = f {
+        let _ = f.call0(&w);
+    }
+}

@@ -1,0 +1,87 @@
+//! The workbench: what an extension agent and a working still need beyond one plan. A module of
+//! its own (`src/workbench_main.rs`), loaded the first time its tab is opened; it talks to the
+//! plan only through [`crate::bridge`]: it reads the form's scenario and the units from the
+//! plan, and asks the plan to open a scenario in the form.
+//!
+//! Each part keeps its own state, provided through context, and its own saved record through a
+//! [`Store`] (the storage sync of the module, in one place per record).
+
+pub mod runs;
+
+use crate::bridge;
+use crate::records;
+use crate::store::Store;
+use crate::units::UnitSystem;
+use leptos::prelude::*;
+use stillroom_core::Scenario;
+
+/// What every part of the workbench shares: the units in force, the plan's form scenario as last
+/// seen, and the module's storage notices.
+#[derive(Clone, Copy)]
+pub struct Workbench {
+    pub units: RwSignal<UnitSystem>,
+    /// The plan's form scenario, read when the workbench is opened or shown again.
+    pub current: RwSignal<Option<Scenario>>,
+    pub store: Store,
+}
+
+impl Workbench {
+    fn new() -> Workbench {
+        let wb = Workbench {
+            units: RwSignal::new(bridge::units()),
+            current: RwSignal::new(None),
+            store: Store::new(),
+        };
+        wb.refresh();
+        wb
+    }
+
+    /// Reads the plan's form scenario and units again.
+    pub fn refresh(&self) {
+        let current = bridge::current_plan_text().and_then(|t| records::read_scenario(&t).ok());
+        self.current.set(current);
+        self.units.set(bridge::units());
+    }
+
+    /// Asks the plan to open `scenario` in its form.
+    pub fn open_in_plan(&self, scenario: &Scenario) {
+        if let Ok(json) = serde_json::to_string(scenario) {
+            bridge::send(bridge::OPEN_PLAN_EVENT, &json);
+        }
+    }
+}
+
+/// The workbench's sections.
+#[component]
+pub fn WorkbenchView() -> impl IntoView {
+    let wb = Workbench::new();
+    provide_context(wb);
+    let shown = window_event_listener_untyped(bridge::SHOWN_EVENT, move |_| wb.refresh());
+    on_cleanup(move || shown.remove());
+    let units = window_event_listener_untyped(bridge::UNITS_EVENT, move |_| wb.units.set(bridge::units()));
+    on_cleanup(move || units.remove());
+    let notice = wb.store.notice;
+    view! {
+        <div id="workbench" class="workbench">
+            <Show when=move || notice.with(|n| n.is_some())>
+                <p class="notice" role="status">{move || notice.get()}</p>
+            </Show>
+            <p class="error" role="alert">{move || wb.store.unsaved()}</p>
+            <runs::RunLog />
+        </div>
+    }
+}
+
+/// Mounts the workbench into the page's `#workbench-root`, replacing its loading line (the
+/// workbench module's entry point).
+pub fn mount() {
+    let root =
+        web_sys::window().and_then(|w| w.document()).and_then(|d| d.get_element_by_id("workbench-root"));
+    if let Some(root) = root {
+        use wasm_bindgen::JsCast;
+        root.set_inner_html("");
+        if let Ok(root) = root.dyn_into::<web_sys::HtmlElement>() {
+            leptos::mount::mount_to(root, WorkbenchView).forget();
+        }
+    }
+}
