@@ -56,6 +56,8 @@ impl Workbench {
 pub fn WorkbenchView() -> impl IntoView {
     let wb = Workbench::new();
     provide_context(wb);
+    // Every part's state first, so any part may use another's.
+    provide_context(runs::Runs::new(wb));
     let shown = window_event_listener_untyped(bridge::SHOWN_EVENT, move |_| wb.refresh());
     on_cleanup(move || shown.remove());
     let units = window_event_listener_untyped(bridge::UNITS_EVENT, move |_| wb.units.set(bridge::units()));

@@ -16,7 +16,7 @@ pub struct Runs {
 
 impl Runs {
     /// Reads the saved log (anything unreadable kept aside and reported) and keeps it saved.
-    fn new(wb: Workbench) -> Runs {
+    pub fn new(wb: Workbench) -> Runs {
         let store = wb.store;
         let logged = store.load(Kind::RunLog, records::read_runs).unwrap_or_default();
         store.report_found();
@@ -49,8 +49,7 @@ fn read(text: &str, what: &str) -> Result<f64, String> {
 #[component]
 pub fn RunLog() -> impl IntoView {
     let wb = expect_context::<Workbench>();
-    let runs = Runs::new(wb).runs;
-    provide_context(Runs { runs });
+    let runs = expect_context::<Runs>().runs;
     let date = RwSignal::new(String::new());
     let minutes = RwSignal::new(String::new());
     let oil_ml = RwSignal::new(String::new());
