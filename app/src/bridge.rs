@@ -24,6 +24,7 @@ pub const UNITS_EVENT: &str = "stillroom-units";
 pub const INBOX_LINK: &str = "link";
 pub const INBOX_PLAN: &str = "plan";
 pub const INBOX_RUNLOG: &str = "runlog";
+pub const INBOX_LIBRARY: &str = "library";
 
 const INBOX: &str = "stillroomInbox";
 const CURRENT_PLAN: &str = "stillroomCurrentPlan";

@@ -15,6 +15,8 @@ use stillroom_core::calibration::RunRecord;
 pub const SCENARIO_KEY: &str = "stillroom.scenario";
 /// Storage key of the grower's log of finished runs.
 pub const RUNS_KEY: &str = "stillroom.runs";
+/// Storage key of the workbench's saved plans and stills.
+pub const LIBRARY_KEY: &str = "stillroom.library";
 /// Prefix of keys holding saved data that could not be read, kept so nothing is lost.
 pub const BACKUP_PREFIX: &str = "stillroom.unreadable.";
 /// Version of the stored records' envelope (the scenario inside carries its own version).
@@ -27,6 +29,8 @@ const RUN_REQUIRED: [&str; 3] = ["plant_mass_kg", "distilling_time_s", "oil_volu
 pub enum Kind {
     Plan,
     RunLog,
+    /// The workbench's saved plans and stills.
+    Library,
 }
 
 impl Kind {
@@ -35,6 +39,7 @@ impl Kind {
         match self {
             Kind::Plan => SCENARIO_KEY,
             Kind::RunLog => RUNS_KEY,
+            Kind::Library => LIBRARY_KEY,
         }
     }
 
@@ -43,6 +48,7 @@ impl Kind {
         match self {
             Kind::Plan => "plan",
             Kind::RunLog => "run log",
+            Kind::Library => "saved plans and stills",
         }
     }
 
@@ -51,6 +57,7 @@ impl Kind {
         match self {
             Kind::Plan => "plan",
             Kind::RunLog => "runlog",
+            Kind::Library => "library",
         }
     }
 
@@ -59,6 +66,7 @@ impl Kind {
         match self {
             Kind::Plan => read_scenario(raw).err(),
             Kind::RunLog => read_runs(raw).err(),
+            Kind::Library => crate::workbench::library::read_library(raw).err(),
         }
     }
 }
@@ -153,6 +161,33 @@ fn version(value: &Value) -> Result<(), String> {
             "it was written by a newer version of the page (record version {v}; this page reads up to {RECORD_VERSION})"
         )),
         _ => Ok(()),
+    }
+}
+
+/// Reads a record `{record_version, ...}` of type `T` whose version is at most `newest`, strictly:
+/// it must be a JSON object, of a known version, with no field the page does not know, and come
+/// back unchanged when written again. `what` names it in messages.
+pub fn read_strict<T: serde::de::DeserializeOwned + Serialize>(
+    raw: &str,
+    what: &str,
+    newest: u32,
+) -> Result<T, String> {
+    let value: Value = serde_json::from_str(raw).map_err(|e| format!("not JSON text ({e})"))?;
+    object(&value, what)?;
+    match value.get("record_version").and_then(Value::as_u64) {
+        None => return Err(format!("a saved {what} record has a whole-number record_version")),
+        Some(v) if v > u64::from(newest) => {
+            return Err(format!(
+                "it was written by a newer version of the page (record version {v}; this page reads up to {newest})"
+            ));
+        }
+        Some(_) => {}
+    }
+    let record: T = typed(value.clone())?;
+    let back = serde_json::to_value(&record).map_err(|e| e.to_string())?;
+    match lost_part(&value, &back, "") {
+        Some(p) => Err(p),
+        None => Ok(record),
     }
 }
 

@@ -122,6 +122,7 @@ pub fn kept_copies(held: &[Kind]) -> Vec<KeptCopy> {
             let kind = match slug {
                 "plan" => Some(Kind::Plan),
                 "runlog" => Some(Kind::RunLog),
+                "library" => Some(Kind::Library),
                 _ => None,
             };
             let stamp = stamp.split('-').next().and_then(|s| s.parse::<f64>().ok());
@@ -197,6 +198,7 @@ pub fn everything(scenario: &Scenario, kept: &[KeptCopy]) -> String {
         "stillroom_export": 1,
         "plan_record": serde_json::from_str::<Value>(&records::scenario_text(scenario)).unwrap_or(Value::Null),
         "run_log_record": stored_json(Kind::RunLog.key()),
+        "library_record": stored_json(Kind::Library.key()),
         "kept_aside": kept,
     });
     serde_json::to_string_pretty(&all).unwrap_or_default()

@@ -191,6 +191,7 @@ impl Store {
                 1 => format!("your latest {}", match first.0 {
                     Kind::Plan => "changes to the plan",
                     Kind::RunLog => "changes to the run log",
+                    Kind::Library => "changes to the saved plans and stills",
                 }),
                 _ => "your latest changes".to_string(),
             };

@@ -71,7 +71,7 @@ fn KeptLine(copy: KeptCopy, index: usize) -> impl IntoView {
         let text = storage::get(&dl_key).ok().flatten().unwrap_or_default();
         let name = format!(
             "stillroom-kept-{}-{}.json",
-            kind.map(|k| if k == Kind::Plan { "plan" } else { "runlog" }).unwrap_or("data"),
+            kind.map(Kind::slug).unwrap_or("data"),
             storage::file_stamp()
         );
         outcome.set(storage::download(&name, &text).err().map(Err));
@@ -84,6 +84,9 @@ fn KeptLine(copy: KeptCopy, index: usize) -> impl IntoView {
         let text = storage::get(&open_key).ok().flatten().unwrap_or_default();
         let result = match kind {
             Some(Kind::RunLog) => records::read_runs(&text).map(|_| bridge::INBOX_RUNLOG),
+            Some(Kind::Library) => {
+                crate::workbench::library::read_library(&text).map(|_| bridge::INBOX_LIBRARY)
+            }
             _ => records::read_scenario(&text).map(|_| bridge::INBOX_PLAN),
         };
         match result {

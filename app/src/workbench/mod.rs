@@ -6,6 +6,7 @@
 //! Each part keeps its own state, provided through context, and its own saved record through a
 //! [`Store`] (the storage sync of the module, in one place per record).
 
+pub mod library;
 pub mod runs;
 
 use crate::bridge;
@@ -58,6 +59,7 @@ pub fn WorkbenchView() -> impl IntoView {
     provide_context(wb);
     // Every part's state first, so any part may use another's.
     provide_context(runs::Runs::new(wb));
+    provide_context(library::Library::new(wb));
     let shown = window_event_listener_untyped(bridge::SHOWN_EVENT, move |_| wb.refresh());
     on_cleanup(move || shown.remove());
     let units = window_event_listener_untyped(bridge::UNITS_EVENT, move |_| wb.units.set(bridge::units()));
