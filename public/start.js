@@ -4,7 +4,8 @@
 // needs no 'unsafe-inline'.
 import init from "./stillroom_app.js";
 
-init({ module_or_path: new URL("./stillroom_app_bg.wasm", import.meta.url) }).catch((err) => {
+const started = init({ module_or_path: new URL("./stillroom_app_bg.wasm", import.meta.url) });
+started.catch((err) => {
   const p = document.createElement("p");
   p.className = "notice";
   p.textContent = "Stillroom could not start: " + err;
@@ -74,11 +75,17 @@ function watch(reg) {
   });
 }
 
+// The offline copy is made once the first plan is on screen and the page's own files have
+// arrived: the worker then finds them in the HTTP cache (see sw.js), so a first visit does not
+// download the page twice, and it never competes with the page for a slow link.
+const loaded = new Promise((done) => {
+  if (document.readyState === "complete") done();
+  else window.addEventListener("load", done, { once: true });
+});
 if ("serviceWorker" in navigator) {
-  window.addEventListener("load", () => {
-    navigator.serviceWorker
-      .register("./sw.js")
-      .then(watch)
-      .catch((err) => console.warn("offline cache off:", err));
-  });
+  Promise.all([started, loaded])
+    .then(() => new Promise((done) => requestAnimationFrame(() => setTimeout(done, 0))))
+    .then(() => navigator.serviceWorker.register("./sw.js"))
+    .then(watch)
+    .catch((err) => console.warn("offline cache off:", err));
 }

@@ -16,6 +16,7 @@ use components::inputs::{EquipmentInputs, EssentialInputs, InstallHint, UnitsCho
 use components::kept_aside::{KeptAside, StorageNotices};
 use components::modes::{Mode, ModeTabs, ShownMode};
 use components::results::{Details, Headline, Warnings};
+use components::run_sheet::{PrintSheet, RunSheet};
 use leptos::prelude::*;
 use state::AppState;
 
@@ -51,7 +52,7 @@ pub fn App() -> impl IntoView {
             // On a phone the answers come first, the inputs after; on a wide screen inputs sit
             // left and answers right.
             <div id="plan-view" role="tabpanel" aria-labelledby="mode-plan" class="columns" hidden=move || mode.get() != Mode::Plan>
-                <div class="col-out"><Headline /><Warnings /></div>
+                <div class="col-out"><Headline /><Warnings /><RunSheet /><PrintSheet /></div>
                 <div class="col-in"><EssentialInputs /><EquipmentInputs /></div>
                 <div class="col-out"><Details /></div>
             </div>

@@ -24,6 +24,8 @@ use stillroom_core::{Plan, ScenarioErrors, plan};
 pub const MAX_PASTE_BYTES: usize = 256 * 1024;
 /// Storage key of the grower's choice of units (metric or US customary).
 pub const UNITS_KEY: &str = "stillroom.units";
+/// How long after the last edit the entries are saved.
+const SAVE_DELAY: std::time::Duration = std::time::Duration::from_millis(250);
 /// Storage key of the form's texts as typed, even when they are not yet valid.
 pub const DRAFT_KEY: &str = "stillroom.draft";
 
@@ -279,11 +281,45 @@ impl AppState {
             None => plan.get(),
         });
 
-        // Storage sync, in this one place: save what the grower entered whenever it changes.
-        Effect::new(move |_| {
-            let text = scenario.with(|d| records::scenario_text(&d.scenario));
+        // Storage sync, in this one place: what the grower entered is saved a moment after the
+        // last change, not on every keystroke (serialising and writing cost a frame on a slow
+        // phone), and at once when the page is hidden or closed, so nothing typed is lost.
+        let draft_texts = StoredValue::new(texts.clone());
+        let save_all = move || {
+            let text = scenario.with_untracked(|d| records::scenario_text(&d.scenario));
             store.save(Kind::Plan, text);
+            draft_texts.with_value(|t| save_draft(units.get_untracked(), t));
+        };
+        let waiting = StoredValue::new(None::<TimeoutHandle>);
+        let flush = move || {
+            if let Some(h) = waiting.get_value() {
+                h.clear();
+                waiting.set_value(None);
+                save_all();
+            }
+        };
+        Effect::new(move |ran: Option<()>| {
+            scenario.track();
+            draft_texts.with_value(|t| t.iter().for_each(|x| x.track()));
+            if ran.is_none() {
+                return save_all();
+            }
+            if let Some(h) = waiting.get_value() {
+                h.clear();
+            }
+            let next = set_timeout_with_handle(
+                move || {
+                    waiting.set_value(None);
+                    save_all();
+                },
+                SAVE_DELAY,
+            );
+            waiting.set_value(next.ok());
         });
+        let hidden = window_event_listener_untyped("pagehide", move |_| flush());
+        let away = window_event_listener_untyped("visibilitychange", move |_| flush());
+        // The state lives as long as the page: the listeners are never removed.
+        std::mem::forget((hidden, away));
         // The page's shell reads this before applying an update (a reload would drop entries
         // that only live on the page).
         Effect::new(move |_| {
@@ -298,8 +334,12 @@ impl AppState {
                 };
             }
         });
-        let draft_texts = texts.clone();
-        Effect::new(move |_| save_draft(units.get(), &draft_texts));
+        Effect::new(move |ran: Option<()>| {
+            units.track();
+            if ran.is_some() {
+                save_all();
+            }
+        });
         Effect::new(move |_| {
             let chosen = units.get();
             save_units(chosen);

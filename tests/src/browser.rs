@@ -220,6 +220,11 @@ pub async fn open_at(dist: &std::path::Path) -> Result<Page, BoxError> {
 }
 
 impl Page {
+    /// What the page's server has sent so far (responses and bytes over the wire).
+    pub fn traffic(&self) -> &xtask::serve::Traffic {
+        self.server.as_ref().expect("the server lives as long as the page").traffic()
+    }
+
     /// The served page's URL for `path` (relative, no leading slash; "" is the page itself).
     pub fn url(&self, path: &str) -> String {
         format!("{}{}", self.base, path.trim_start_matches('/'))
@@ -341,6 +346,41 @@ pub fn build_id() -> Result<String, BoxError> {
         return Err(format!("build id `{id}` is not 16 hex digits").into());
     }
     Ok(id.to_string())
+}
+
+/// A paper size for [`Page::print_pdf`], in inches (what DevTools takes).
+#[derive(Debug, Clone, Copy)]
+pub struct Paper {
+    pub name: &'static str,
+    pub width_in: f64,
+    pub height_in: f64,
+}
+
+/// ISO 216 A4, 210 x 297 mm.
+pub const A4: Paper = Paper { name: "A4", width_in: 210.0 / 25.4, height_in: 297.0 / 25.4 };
+/// US Letter, 8.5 x 11 in (ANSI/ASME Y14.1).
+pub const LETTER: Paper = Paper { name: "US Letter", width_in: 8.5, height_in: 11.0 };
+
+impl Page {
+    /// The page printed to PDF as the browser's print dialog would (the print stylesheet, the
+    /// page's own `@page` margins), on `paper`.
+    pub async fn print_pdf(&self, paper: Paper) -> Result<Vec<u8>, BoxError> {
+        use base64::Engine;
+        let out = self
+            .cdp(
+                "Page.printToPDF",
+                json!({"paperWidth": paper.width_in, "paperHeight": paper.height_in, "preferCSSPageSize": false}),
+            )
+            .await?;
+        let data = out["data"].as_str().ok_or("printToPDF gave no data")?;
+        Ok(base64::engine::general_purpose::STANDARD.decode(data)?)
+    }
+}
+
+/// Pages in a PDF: its page objects (`/Type /Page`, not the `/Pages` tree nodes).
+pub fn pdf_pages(pdf: &[u8]) -> usize {
+    let text = String::from_utf8_lossy(pdf);
+    text.match_indices("/Type /Page").filter(|(i, _)| !text[i + 11..].starts_with('s')).count()
 }
 
 /// How long a test waits for the page to show something (updates are asynchronous).

@@ -14,6 +14,8 @@
 //!   [`CACHE_CONTROL`]; files carry their MIME type and, if the build wrote `NAME.br` / `NAME.gz`,
 //!   the best one the browser accepts is sent with `Content-Encoding` and `Vary: Accept-Encoding`.
 //!   (The 400/431 hyper writes itself for an unreadable head bypasses the service and has no body.)
+//! - Every response is logged in the server's [`Traffic`] (path, status, body bytes) and every byte
+//!   written to a connection is counted, so a test can tell what a visit cost over the wire.
 
 use http::header::{self, HeaderValue};
 use http::{Request, Response};
@@ -155,13 +157,56 @@ fn files(dir: &Path) -> io::Result<Files> {
         .precompressed_gzip())
 }
 
+/// One response as served: what was asked, the status, and the body's length (0 for a 304).
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub struct Served {
+    pub path: String,
+    pub status: u16,
+    pub body_bytes: u64,
+}
+
+/// What the server sent: each response, and the bytes written to connections (heads, bodies
+/// and framing: what crossed the wire).
+#[derive(Debug, Default)]
+pub struct Traffic {
+    log: std::sync::Mutex<Vec<Served>>,
+    wire_bytes: std::sync::atomic::AtomicU64,
+}
+
+impl Traffic {
+    /// The responses so far, in order.
+    pub fn served(&self) -> Vec<Served> {
+        self.log.lock().map(|l| l.clone()).unwrap_or_default()
+    }
+
+    /// Bytes written to connections so far.
+    pub fn wire_bytes(&self) -> u64 {
+        self.wire_bytes.load(std::sync::atomic::Ordering::Relaxed)
+    }
+
+    fn wrote(&self, n: usize) {
+        self.wire_bytes.fetch_add(n as u64, std::sync::atomic::Ordering::Relaxed);
+    }
+}
+
 /// One request: the file service, then the headers every response carries.
 async fn answer(
     mut files: Files,
+    traffic: Arc<Traffic>,
     req: Request<Incoming>,
 ) -> Result<Response<ServeFileSystemResponseBody>, Infallible> {
     let mime = mime_for_target(req.uri().path());
+    let path = req.uri().path().to_string();
     let mut resp = files.call(req).await?;
+    let body_bytes = resp
+        .headers()
+        .get(header::CONTENT_LENGTH)
+        .and_then(|v| v.to_str().ok())
+        .and_then(|v| v.parse().ok())
+        .unwrap_or(0);
+    if let Ok(mut log) = traffic.log.lock() {
+        log.push(Served { path, status: resp.status().as_u16(), body_bytes });
+    }
     let h = resp.headers_mut();
     if let Some(mime) = mime
         && h.contains_key(header::CONTENT_TYPE)
@@ -180,13 +225,14 @@ async fn answer(
 struct WriteDeadline<T> {
     io: T,
     limit: Duration,
+    traffic: Arc<Traffic>,
     /// Armed when a write blocks, cleared when one goes through.
     stalled: Option<Pin<Box<tokio::time::Sleep>>>,
 }
 
 impl<T> WriteDeadline<T> {
-    fn new(io: T, limit: Duration) -> Self {
-        WriteDeadline { io, limit, stalled: None }
+    fn new(io: T, limit: Duration, traffic: Arc<Traffic>) -> Self {
+        WriteDeadline { io, limit, traffic, stalled: None }
     }
 
     /// After a blocked write: still waiting, or out of time.
@@ -206,6 +252,13 @@ impl<T> WriteDeadline<T> {
         self.stalled = None;
         r
     }
+
+    fn counted(&mut self, r: Poll<io::Result<usize>>) -> Poll<io::Result<usize>> {
+        if let Poll::Ready(Ok(n)) = &r {
+            self.traffic.wrote(*n);
+        }
+        self.progressed(r)
+    }
 }
 
 impl<T: hyper::rt::Read + Unpin> hyper::rt::Read for WriteDeadline<T> {
@@ -223,7 +276,7 @@ impl<T: hyper::rt::Write + Unpin> hyper::rt::Write for WriteDeadline<T> {
         let this = self.get_mut();
         match Pin::new(&mut this.io).poll_write(cx, buf) {
             Poll::Pending => this.blocked(cx),
-            done => this.progressed(done),
+            done => this.counted(done),
         }
     }
 
@@ -235,7 +288,7 @@ impl<T: hyper::rt::Write + Unpin> hyper::rt::Write for WriteDeadline<T> {
         let this = self.get_mut();
         match Pin::new(&mut this.io).poll_write_vectored(cx, bufs) {
             Poll::Pending => this.blocked(cx),
-            done => this.progressed(done),
+            done => this.counted(done),
         }
     }
 
@@ -275,6 +328,7 @@ async fn serve_loop(
     listener: tokio::net::TcpListener,
     files: Files,
     limits: Limits,
+    traffic: Arc<Traffic>,
     mut stop: oneshot::Receiver<()>,
 ) {
     let slots = Arc::new(Semaphore::new(limits.max_connections));
@@ -309,14 +363,16 @@ async fn serve_loop(
             }
         };
         let files = files.clone();
+        let traffic = Arc::clone(&traffic);
         tokio::spawn(async move {
             let _slot = slot;
-            let service = hyper::service::service_fn(move |req| answer(files.clone(), req));
+            let log = Arc::clone(&traffic);
+            let service = hyper::service::service_fn(move |req| answer(files.clone(), Arc::clone(&log), req));
             let mut http = hyper::server::conn::http1::Builder::new();
             http.timer(TokioTimer::new())
                 .header_read_timeout(limits.header_read_timeout)
                 .max_header_size(limits.max_header_bytes);
-            let io = WriteDeadline::new(TokioIo::new(stream), limits.write_stall_timeout);
+            let io = WriteDeadline::new(TokioIo::new(stream), limits.write_stall_timeout, traffic);
             // A client that goes away or times out ends only its own connection.
             let _ = http.serve_connection(io, service).await;
         });
@@ -343,13 +399,14 @@ fn prepare(
 pub fn serve_dir(dir: &Path, listener: TcpListener) -> io::Result<()> {
     let (rt, listener, files) = prepare(dir, listener)?;
     let (_keep, stop) = oneshot::channel();
-    rt.block_on(serve_loop(listener, files, Limits::default(), stop));
+    rt.block_on(serve_loop(listener, files, Limits::default(), Arc::default(), stop));
     Ok(())
 }
 
 /// A server running on a thread of its own; stops when dropped.
 pub struct Server {
     addr: SocketAddr,
+    traffic: Arc<Traffic>,
     stop: Option<oneshot::Sender<()>>,
     thread: Option<JoinHandle<()>>,
 }
@@ -370,16 +427,23 @@ impl Server {
         let addr = listener.local_addr()?;
         let (rt, listener, files) = prepare(&dir.into(), listener)?;
         let (tx, stop) = oneshot::channel();
+        let traffic = Arc::new(Traffic::default());
+        let log = Arc::clone(&traffic);
         let thread = std::thread::Builder::new().name("stillroom-static".into()).spawn(move || {
-            rt.block_on(serve_loop(listener, files, limits, stop));
+            rt.block_on(serve_loop(listener, files, limits, log, stop));
             // Ends open connections; file reads in flight take at most this long.
             rt.shutdown_timeout(Duration::from_secs(1));
         })?;
-        Ok(Server { addr, stop: Some(tx), thread: Some(thread) })
+        Ok(Server { addr, traffic, stop: Some(tx), thread: Some(thread) })
     }
 
     pub fn addr(&self) -> SocketAddr {
         self.addr
+    }
+
+    /// What the server has sent so far.
+    pub fn traffic(&self) -> &Traffic {
+        &self.traffic
     }
 
     /// The base URL, ending in `/`.

@@ -401,7 +401,7 @@ pub fn PressureInputs() -> impl IntoView {
 }
 
 /// The heat sources the page offers: (value, option key, label).
-const FUELS: &[(Fuel, &str, &str)] = &[
+pub const FUELS: &[(Fuel, &str, &str)] = &[
     (Fuel::Propane, "propane", "Propane (bottled gas)"),
     (Fuel::NaturalGas, "natural_gas", "Natural gas"),
     (Fuel::Firewood, "firewood", "Firewood"),
@@ -409,7 +409,7 @@ const FUELS: &[(Fuel, &str, &str)] = &[
 ];
 
 /// The still metals the page offers.
-const METALS: &[(Metal, &str, &str)] = &[
+pub const METALS: &[(Metal, &str, &str)] = &[
     (Metal::Copper, "copper", "Copper"),
     (Metal::StainlessSteel, "stainless", "Stainless steel"),
     (Metal::CarbonSteel, "carbon", "Carbon steel"),
@@ -552,7 +552,7 @@ const PRESSURE_MODES: &[(PressureMode, &str, &str)] = &[
 ];
 
 /// The condenser builds the page offers.
-const CONDENSERS: &[(CondenserKind, &str, &str)] = &[
+pub const CONDENSERS: &[(CondenserKind, &str, &str)] = &[
     (CondenserKind::CoilInTub, "c-tub", "Coil in a tub of water"),
     (CondenserKind::TubeInTube, "c-jacket", "Tube in a water jacket"),
 ];

@@ -6,3 +6,4 @@ pub mod inputs;
 pub mod kept_aside;
 pub mod modes;
 pub mod results;
+pub mod run_sheet;
