@@ -111,6 +111,35 @@ pub fn expose_units(f: impl Fn() -> String + 'static) {
     expose(UNITS, f);
 }
 
+/// For `cargo xtask bench`: `window.stillroomBenchPlan(batches, per_batch)` plans the form's
+/// scenario `batches` times `per_batch` times and returns each batch's time per plan in µs
+/// (JSON), timed with `performance.now()` (whose resolution, 0.1 ms in Chromium, is why plans
+/// are timed in batches); `window.stillroomWasmBytes()` is the module's memory in bytes.
+pub fn expose_bench(plan_once: impl Fn() + 'static) {
+    let Some(w) = window() else { return };
+    let timed = Closure::<dyn Fn(u32, u32) -> String>::new(move |batches: u32, per_batch: u32| {
+        let Some(perf) = window().and_then(|w| w.performance()) else { return String::new() };
+        let per_batch = per_batch.max(1);
+        let times: Vec<String> = (0..batches.min(10_000))
+            .map(|_| {
+                let start = perf.now();
+                for _ in 0..per_batch {
+                    plan_once();
+                }
+                format!("{:.2}", (perf.now() - start) * 1000.0 / f64::from(per_batch))
+            })
+            .collect();
+        format!("[{}]", times.join(","))
+    });
+    let _ = js_sys::Reflect::set(&w, &"stillroomBenchPlan".into(), timed.as_ref());
+    timed.forget();
+    expose("stillroomWasmBytes", || {
+        let buffer = js_sys::Reflect::get(&wasm_bindgen::memory(), &"buffer".into());
+        let bytes = buffer.and_then(|b| js_sys::Reflect::get(&b, &"byteLength".into()));
+        bytes.ok().and_then(|b| b.as_f64()).map(|b| format!("{b}")).unwrap_or_default()
+    });
+}
+
 /// The units in force on the page (metric if the plan does not say).
 pub fn units() -> crate::units::UnitSystem {
     call(UNITS).and_then(|k| crate::units::UnitSystem::from_key(&k)).unwrap_or_default()

@@ -350,6 +350,11 @@ impl AppState {
             scenario.with_untracked(|d| records::scenario_text(&d.scenario))
         });
         crate::bridge::expose_units(move || units.get_untracked().key().to_string());
+        crate::bridge::expose_bench(move || {
+            scenario.with_untracked(|d| {
+                let _ = std::hint::black_box(stillroom_core::plan(std::hint::black_box(&d.scenario)));
+            })
+        });
 
         let state = AppState {
             base: base_signal,

@@ -75,7 +75,15 @@ impl Store {
                 Some(v)
             }
             Err(_) => {
-                let held = storage::keep_aside(kind, &raw).is_err();
+                // Once the copy is made the original goes: the record's key is free for the
+                // module that owns it, and the next start finds nothing new to report.
+                let held = match storage::keep_aside(kind, &raw) {
+                    Ok(_) => {
+                        storage::remove(kind.key());
+                        false
+                    }
+                    Err(_) => true,
+                };
                 if held {
                     self.held.update(|h| h.push(kind));
                 }
