@@ -90,7 +90,10 @@ pub fn take_inbox_of(kind: &str) -> Vec<String> {
     let mut i = 0;
     while i < list.length() {
         let pair = list.get(i).dyn_into::<js_sys::Array>().ok();
-        let text = pair.as_ref().filter(|p| p.get(0).as_string().as_deref() == Some(kind)).map(|p| p.get(1).as_string());
+        let text = pair
+            .as_ref()
+            .filter(|p| p.get(0).as_string().as_deref() == Some(kind))
+            .map(|p| p.get(1).as_string());
         match text {
             Some(text) => {
                 list.splice_many(i, 1, &[]);

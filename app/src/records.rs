@@ -159,8 +159,11 @@ pub fn scenario_text(scenario: &Scenario) -> String {
 
 /// The record text for a run log and the grower's lot pattern.
 pub fn runs_text(runs: &[RunRecord], lot_pattern: &str) -> String {
-    let record =
-        RunsRecord { record_version: RUNS_RECORD_VERSION, runs: runs.to_vec(), lot_pattern: lot_pattern.to_string() };
+    let record = RunsRecord {
+        record_version: RUNS_RECORD_VERSION,
+        runs: runs.to_vec(),
+        lot_pattern: lot_pattern.to_string(),
+    };
     serde_json::to_string(&record).unwrap_or_default()
 }
 
@@ -351,7 +354,10 @@ mod tests {
             oil_volume_m3: 2.1e-4,
             fuel_used: Some(3.2),
             fuel_unit: "kg".into(),
-            earlier: Some(stillroom_core::calibration::EarlierReading { time_s: 1200.0, oil_volume_m3: 1e-4 }),
+            earlier: Some(stillroom_core::calibration::EarlierReading {
+                time_s: 1200.0,
+                oil_volume_m3: 1e-4,
+            }),
             ..RunRecord::default()
         };
         let back = read_runs(&runs_text(std::slice::from_ref(&run), "{CROP}-{N}")).unwrap();
@@ -396,7 +402,10 @@ mod tests {
         let log = read_runs(v1).unwrap();
         assert_eq!(log.record_version, RUNS_RECORD_VERSION);
         let r = &log.runs[0];
-        assert_eq!((r.date.as_str(), r.crop.as_deref(), r.note.as_str()), ("2026-07-14", Some("lavender"), "first cut"));
+        assert_eq!(
+            (r.date.as_str(), r.crop.as_deref(), r.note.as_str()),
+            ("2026-07-14", Some("lavender"), "first cut")
+        );
         assert_eq!((r.plant_mass_kg, r.distilling_time_s, r.oil_volume_m3), (20.0, 3600.0, 0.0002));
         assert_eq!((r.oil_density_kg_per_m3, r.rate_constant_per_min), (885.0, 0.05));
         // Version 1's own defaults for what a run left out.
@@ -409,7 +418,10 @@ mod tests {
 
     #[wasm_bindgen_test]
     fn an_oversized_log_is_refused_by_its_size() {
-        let big = format!(r#"{{"record_version":2,"runs":[],"lot_pattern":"{}"}}"#, "x".repeat(MAX_RUNS_TEXT_BYTES));
+        let big = format!(
+            r#"{{"record_version":2,"runs":[],"lot_pattern":"{}"}}"#,
+            "x".repeat(MAX_RUNS_TEXT_BYTES)
+        );
         assert!(read_runs(&big).unwrap_err().contains("kB"));
     }
 

@@ -38,7 +38,10 @@ pub fn CalibrationPanel() -> impl IntoView {
     };
     let content = move || {
         fitted.get().map(|(c, _)| {
-            let pm = c.oil_content_spread_percent.map(|s| format!(" ± {}", units::fixed(s, 2))).unwrap_or_default();
+            let pm = c
+                .oil_content_spread_percent
+                .map(|s| format!(" ± {}", units::fixed(s, 2)))
+                .unwrap_or_default();
             format!("{} %{pm} from {}", units::fixed(c.oil_content_percent, 2), runs_word(c.oil_content_runs))
         })
     };

@@ -125,7 +125,8 @@ fn read_form(wb: Workbench, runs: Runs, t: Texts) -> Result<RunRecord, Vec<(&'st
     let mass = take("run-mass", positive(&t.mass.get_untracked(), "the charge loaded"));
     let minutes = take("run-minutes", positive(&t.minutes.get_untracked(), "the minutes distilled"));
     let oil = take("run-oil", positive(&t.oil.get_untracked(), "the oil collected"));
-    let mut opt = |id: &'static str, r: Result<Option<f64>, String>| r.map_err(|e| errors.push((id, e))).ok().flatten();
+    let mut opt =
+        |id: &'static str, r: Result<Option<f64>, String>| r.map_err(|e| errors.push((id, e))).ok().flatten();
     let fuel = opt("run-fuel", optional(&t.fuel.get_untracked(), "The fuel used"));
     let hydrosol = opt("run-hydrosol", optional(&t.hydrosol.get_untracked(), "The hydrosol"));
     let early_min = opt("run-early-min", optional(&t.early_min.get_untracked(), "The earlier time"));
@@ -134,11 +135,20 @@ fn read_form(wb: Workbench, runs: Runs, t: Texts) -> Result<RunRecord, Vec<(&'st
         (None, None) => None,
         (Some(m), Some(o)) => {
             if minutes.is_some_and(|t| m >= t) {
-                errors.push(("run-early-min", "The earlier reading must come before the end of the run.".into()));
+                errors.push((
+                    "run-early-min",
+                    "The earlier reading must come before the end of the run.".into(),
+                ));
             } else if oil.is_some_and(|v| o >= v) {
-                errors.push(("run-early-oil", "By the earlier time there was less oil than at the end.".into()));
+                errors.push((
+                    "run-early-oil",
+                    "By the earlier time there was less oil than at the end.".into(),
+                ));
             } else if m <= 0.0 || o <= 0.0 {
-                errors.push(("run-early-oil", "An earlier reading needs a time and an amount above zero.".into()));
+                errors.push((
+                    "run-early-oil",
+                    "An earlier reading needs a time and an amount above zero.".into(),
+                ));
             }
             Some(EarlierReading { time_s: m * 60.0, oil_volume_m3: o * oil_unit(u).to_si })
         }
@@ -164,11 +174,18 @@ fn read_form(wb: Workbench, runs: Runs, t: Texts) -> Result<RunRecord, Vec<(&'st
     let planned = scenario.as_ref().map(|s| (s, stillroom_core::plan(s)));
     let conditions = match (&planned, mass) {
         (None, _) => {
-            errors.push(("run-mass", "The plan's form could not be read: open “Plan a run” once, then log the run.".into()));
+            errors.push((
+                "run-mass",
+                "The plan's form could not be read: open “Plan a run” once, then log the run.".into(),
+            ));
             None
         }
         (Some((_, Err(_))), _) => {
-            errors.push(("run-mass", "Fix the plan's marked fields first: the record keeps the plan's oil density and steam rate.".into()));
+            errors.push((
+                "run-mass",
+                "Fix the plan's marked fields first: the record keeps the plan's oil density and steam rate."
+                    .into(),
+            ));
             None
         }
         (Some((s, Ok(p))), Some(m)) => logged_conditions(s, p, m * mass_unit(u).to_si),
@@ -177,7 +194,9 @@ fn read_form(wb: Workbench, runs: Runs, t: Texts) -> Result<RunRecord, Vec<(&'st
     if !errors.is_empty() {
         return Err(errors);
     }
-    let (Some(mass), Some(minutes), Some(oil), Some(c), Some((s, _))) = (mass, minutes, oil, conditions, planned) else {
+    let (Some(mass), Some(minutes), Some(oil), Some(c), Some((s, _))) =
+        (mass, minutes, oil, conditions, planned)
+    else {
         return Err(vec![("run-mass", "The record could not be made from these numbers.".into())]);
     };
     Ok(RunRecord {

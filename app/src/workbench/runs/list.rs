@@ -44,7 +44,7 @@ fn sheet_lines(r: &RunRecord) -> Vec<(&'static str, String)> {
 
 fn set_printing(on: bool) {
     let Some(doc) = web_sys::window().and_then(|w| w.document()) else { return };
-    if let Some(old) = doc.get_element_by_id(PRINT_ID) {
+    if !on && let Some(old) = doc.get_element_by_id(PRINT_ID) {
         old.remove();
     }
     if let Some(html) = doc.document_element() {

@@ -39,7 +39,11 @@ fn fill(pattern: &str, crop: Option<&str>, year: &str, n: usize) -> String {
 /// bumped past any lot in use. A pattern without `{N}` gets `-{N}` at its end, so lots stay
 /// unique.
 pub fn next_lot(pattern: &str, crop: Option<&str>, year: &str, runs: &[RunRecord]) -> String {
-    let mut n = runs.len() + 1;
+    lot_from(pattern, crop, year, runs, runs.len() + 1)
+}
+
+/// The first lot of the pattern from running number `n` on that no run holds.
+fn lot_from(pattern: &str, crop: Option<&str>, year: &str, runs: &[RunRecord], mut n: usize) -> String {
     loop {
         let lot = fill(pattern, crop, year, n);
         if !runs.iter().any(|r| r.lot == lot) {
@@ -62,8 +66,9 @@ pub fn unique_lot(lot: &str, taken: &[RunRecord]) -> String {
 pub fn fill_missing_lots(runs: &mut Vec<RunRecord>, pattern: &str) {
     for i in 0..runs.len() {
         if runs[i].lot.trim().is_empty() {
-            let year = runs[i].date.get(..4).filter(|y| y.chars().all(|c| c.is_ascii_digit())).unwrap_or("OLD");
-            let lot = next_lot(pattern, runs[i].crop.as_deref(), &year.to_string(), runs);
+            let year =
+                runs[i].date.get(..4).filter(|y| y.chars().all(|c| c.is_ascii_digit())).unwrap_or("OLD");
+            let lot = lot_from(pattern, runs[i].crop.as_deref(), &year.to_string(), runs, i + 1);
             runs[i].lot = lot;
         }
     }
@@ -159,7 +164,13 @@ mod tests {
     use wasm_bindgen_test::wasm_bindgen_test;
 
     fn run(lot: &str, ml: f64) -> RunRecord {
-        RunRecord { lot: lot.into(), plant_mass_kg: 20.0, distilling_time_s: 3600.0, oil_volume_m3: ml * 1e-6, ..RunRecord::default() }
+        RunRecord {
+            lot: lot.into(),
+            plant_mass_kg: 20.0,
+            distilling_time_s: 3600.0,
+            oil_volume_m3: ml * 1e-6,
+            ..RunRecord::default()
+        }
     }
 
     #[wasm_bindgen_test]
@@ -169,6 +180,14 @@ mod tests {
         assert_eq!(next_lot("", Some("lavender"), "2026", &[run("LAV-2026-001", 1.0)]), "LAV-2026-002");
         assert_eq!(next_lot("{CROP}/{N}", None, "2026", &[]), "RUN/001");
         assert_eq!(next_lot("Larkfield", None, "2026", &[]), "Larkfield-001");
+    }
+
+    #[wasm_bindgen_test]
+    fn runs_without_lots_are_numbered_in_their_order() {
+        let mut runs = vec![run("", 1.0), run("", 2.0), run("RUN-OLD-002", 3.0)];
+        fill_missing_lots(&mut runs, "");
+        let lots: Vec<&str> = runs.iter().map(|r| r.lot.as_str()).collect();
+        assert_eq!(lots, ["RUN-OLD-001", "RUN-OLD-003", "RUN-OLD-002"]);
     }
 
     #[wasm_bindgen_test]

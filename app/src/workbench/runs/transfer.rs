@@ -13,7 +13,8 @@ pub fn Transfer() -> impl IntoView {
     let pasted = RwSignal::new(String::new());
     let problem = RwSignal::new(None::<String>);
     let export_json = move |_| {
-        let text = runs.lot_pattern.with_untracked(|p| runs.runs.with_untracked(|r| records::runs_text(r, p)));
+        let text =
+            runs.lot_pattern.with_untracked(|p| runs.runs.with_untracked(|r| records::runs_text(r, p)));
         let name = format!("stillroom-runs-{}.json", storage::file_stamp());
         problem.set(storage::download(&name, &text).err());
     };
@@ -36,7 +37,8 @@ pub fn Transfer() -> impl IntoView {
             }
             Err(why) => {
                 runs.merged.set(None);
-                problem.set(Some(format!("This is not a run log the page can read: {why}. Nothing was added.")));
+                problem
+                    .set(Some(format!("This is not a run log the page can read: {why}. Nothing was added.")));
             }
         }
     };
