@@ -110,7 +110,7 @@ pub fn logged_conditions(
     plan: &crate::Plan,
     plant_mass_kg: f64,
 ) -> Option<LoggedConditions> {
-    if !(plant_mass_kg > 0.0 && plant_mass_kg.is_finite()) {
+    if !plant_mass_kg.is_finite() || plant_mass_kg <= 0.0 {
         return None;
     }
     let q = plan.run.distillate_steam_rate_kg_per_s * 3600.0 / plant_mass_kg;
@@ -216,7 +216,7 @@ pub fn oil_content_percent_from_run(run: &RunRecord) -> Option<f64> {
 /// ```
 pub fn rate_constant_from_two_readings_per_s(t1_s: f64, v1: f64, t2_s: f64, v2: f64) -> Option<f64> {
     let all_finite = [t1_s, v1, t2_s, v2].iter().all(|v| v.is_finite());
-    if !all_finite || !(t1_s > 0.0 && t2_s > t1_s && v1 > 0.0 && v2 > v1) {
+    if !(all_finite && t1_s > 0.0 && t2_s > t1_s && v1 > 0.0 && v2 > v1) {
         return None;
     }
     let (a, r) = (t1_s / t2_s, v1 / v2);
@@ -309,7 +309,7 @@ pub fn fit_first_order(points: &[Point]) -> Option<Fit> {
     }
     let k = numeric::find_root(slope, grid[i_min - 1], grid[i_min + 1], 1e-15 / t_max).ok()?;
     let c = best_c(k);
-    if !(c.is_finite() && c > 0.0 && k.is_finite() && k > 0.0) {
+    if !c.is_finite() || c <= 0.0 || !k.is_finite() || k <= 0.0 {
         return None;
     }
     let (content_se, rate_constant_se_per_s) = standard_errors(points, c, k);
@@ -334,7 +334,7 @@ fn standard_errors(points: &[Point], c: f64, k: f64) -> (Option<f64>, Option<f64
     let det = a * d - b * b;
     let s2 = s / (n - 2) as f64;
     let se = |v: f64| (v.is_finite() && v >= 0.0).then(|| v.sqrt());
-    if !(det > 0.0) {
+    if det.is_nan() || det <= 0.0 {
         return (None, None);
     }
     (se(s2 * d / det), se(s2 * a / det))

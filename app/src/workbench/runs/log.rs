@@ -63,12 +63,12 @@ pub fn unique_lot(lot: &str, taken: &[RunRecord]) -> String {
 }
 
 /// Gives every run without a lot one of the pattern (a log migrated from before lots).
-pub fn fill_missing_lots(runs: &mut Vec<RunRecord>, pattern: &str) {
+pub fn fill_missing_lots(runs: &mut [RunRecord], pattern: &str) {
     for i in 0..runs.len() {
         if runs[i].lot.trim().is_empty() {
             let year =
                 runs[i].date.get(..4).filter(|y| y.chars().all(|c| c.is_ascii_digit())).unwrap_or("OLD");
-            let lot = lot_from(pattern, runs[i].crop.as_deref(), &year.to_string(), runs, i + 1);
+            let lot = lot_from(pattern, runs[i].crop.as_deref(), year, runs, i + 1);
             runs[i].lot = lot;
         }
     }
