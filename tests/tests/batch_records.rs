@@ -183,6 +183,7 @@ async fn three_runs_calibrate_the_plan_and_the_log_travels() -> Result<(), BoxEr
     // to it; the content is near the 1.1 % the runs were made from.
     assert!((c_pct - 1.1).abs() < 0.05, "{content}");
     assert!(k > 0.01 && k < 0.2, "{rate}");
+    c.execute("document.querySelector('[data-out=calibration]').scrollIntoView();", vec![]).await?;
     std::fs::write(std::env::temp_dir().join("stillroom-runs-412x915.png"), c.screenshot().await?)?;
 
     c.find(Locator::Id("run-use")).await?.click().await?;

@@ -38,10 +38,8 @@ pub fn CalibrationPanel() -> impl IntoView {
     };
     let content = move || {
         fitted.get().map(|(c, _)| {
-            let pm = c
-                .oil_content_spread_percent
-                .map(|s| format!(" ± {}", units::fixed(s, 2)))
-                .unwrap_or_default();
+            let pm =
+                c.oil_content_spread_percent.map(|s| format!(" ± {}", units::sig3(s))).unwrap_or_default();
             format!("{} %{pm} from {}", units::fixed(c.oil_content_percent, 2), runs_word(c.oil_content_runs))
         })
     };
@@ -53,7 +51,7 @@ pub fn CalibrationPanel() -> impl IntoView {
                     units::fixed(c.rate_constant_per_min, 3)
                 )
             } else {
-                let pm = c.rate_constant_spread_per_min.map(|s| format!(" ± {}", units::fixed(s, 3))).unwrap_or_default();
+                let pm = c.rate_constant_spread_per_min.map(|s| format!(" ± {}", units::sig3(s))).unwrap_or_default();
                 format!("{} /min{pm} from {}", units::fixed(c.rate_constant_per_min, 3), runs_word(c.rate_constant_runs))
             }
         })
