@@ -82,6 +82,29 @@ pub fn take_inbox() -> Vec<(String, String)> {
     items
 }
 
+/// The queued texts of one kind, oldest first, removed from the queue; items of other kinds stay
+/// queued, in their order, for the part that takes them.
+pub fn take_inbox_of(kind: &str) -> Vec<String> {
+    let Some(list) = window().and_then(|w| inbox(&w)) else { return Vec::new() };
+    let mut taken = Vec::new();
+    let mut i = 0;
+    while i < list.length() {
+        let pair = list.get(i).dyn_into::<js_sys::Array>().ok();
+        let text = pair
+            .as_ref()
+            .filter(|p| p.get(0).as_string().as_deref() == Some(kind))
+            .map(|p| p.get(1).as_string());
+        match text {
+            Some(text) => {
+                list.splice_many(i, 1, &[]);
+                taken.extend(text);
+            }
+            None => i += 1,
+        }
+    }
+    taken
+}
+
 /// Sets `window.<name>` to a function returning a text.
 fn expose(name: &str, f: impl Fn() -> String + 'static) {
     let Some(w) = window() else { return };

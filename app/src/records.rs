@@ -79,12 +79,76 @@ struct ScenarioRecord {
     scenario: Scenario,
 }
 
+/// Version of the run-log record: 2 holds batch records (lot, plant part, fuel, hydrosol, an
+/// earlier oil reading, the steam rates) and the grower's lot pattern; 1 (the short run of
+/// date, mass, minutes and oil) is migrated on read.
+pub const RUNS_RECORD_VERSION: u32 = 2;
+/// Largest run-log text read (stored or imported): some 5000 batch records.
+pub const MAX_RUNS_TEXT_BYTES: usize = 2 * 1024 * 1024;
+
 /// The run-log record, as strict as [`ScenarioRecord`].
+#[derive(Debug, Clone, PartialEq, Default, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct RunsRecord {
+    pub record_version: u32,
+    pub runs: Vec<RunRecord>,
+    /// The grower's pattern for new lot numbers (`{CROP}`, `{YEAR}`, `{N}`); the page's when empty.
+    #[serde(default)]
+    pub lot_pattern: String,
+}
+
+/// A logged run as version 1 of the record held it (kept to read old logs, never written).
+#[derive(Serialize, Deserialize)]
+#[serde(default)]
+struct RunV1 {
+    date: String,
+    crop: Option<String>,
+    plant_mass_kg: f64,
+    distilling_time_s: f64,
+    oil_volume_m3: f64,
+    oil_density_kg_per_m3: f64,
+    rate_constant_per_min: f64,
+    note: String,
+}
+
+impl Default for RunV1 {
+    fn default() -> Self {
+        // Version 1's own defaults.
+        RunV1 {
+            date: String::new(),
+            crop: None,
+            plant_mass_kg: 0.0,
+            distilling_time_s: 0.0,
+            oil_volume_m3: 0.0,
+            oil_density_kg_per_m3: 900.0,
+            rate_constant_per_min: 0.05,
+            note: String::new(),
+        }
+    }
+}
+
 #[derive(Serialize, Deserialize)]
 #[serde(deny_unknown_fields)]
-struct RunsRecord {
+struct RunsRecordV1 {
     record_version: u32,
-    runs: Vec<RunRecord>,
+    runs: Vec<RunV1>,
+}
+
+impl RunV1 {
+    /// The batch record it becomes: no lot yet (the log gives it one), the rest as it was.
+    fn migrated(self) -> RunRecord {
+        RunRecord {
+            date: self.date,
+            crop: self.crop,
+            plant_mass_kg: self.plant_mass_kg,
+            distilling_time_s: self.distilling_time_s,
+            oil_volume_m3: self.oil_volume_m3,
+            oil_density_kg_per_m3: self.oil_density_kg_per_m3,
+            rate_constant_per_min: self.rate_constant_per_min,
+            note: self.note,
+            ..RunRecord::default()
+        }
+    }
 }
 
 /// The record text for a scenario.
@@ -93,9 +157,13 @@ pub fn scenario_text(scenario: &Scenario) -> String {
     serde_json::to_string(&record).unwrap_or_default()
 }
 
-/// The record text for a run log.
-pub fn runs_text(runs: &[RunRecord]) -> String {
-    let record = RunsRecord { record_version: RECORD_VERSION, runs: runs.to_vec() };
+/// The record text for a run log and the grower's lot pattern.
+pub fn runs_text(runs: &[RunRecord], lot_pattern: &str) -> String {
+    let record = RunsRecord {
+        record_version: RUNS_RECORD_VERSION,
+        runs: runs.to_vec(),
+        lot_pattern: lot_pattern.to_string(),
+    };
     serde_json::to_string(&record).unwrap_or_default()
 }
 
@@ -215,12 +283,28 @@ pub fn read_scenario(raw: &str) -> Result<Scenario, String> {
     }
 }
 
-/// Reads a stored run log `{record_version, runs}`; every run must be an object with at least
-/// the plant mass, the time distilled and the oil collected.
-pub fn read_runs(raw: &str) -> Result<Vec<RunRecord>, String> {
+/// Reads a stored or imported run log `{record_version, runs}`; every run must be an object with
+/// at least the plant mass, the time distilled and the oil collected. A version-1 log is
+/// migrated (its runs get no lot; the log numbers them).
+pub fn read_runs(raw: &str) -> Result<RunsRecord, String> {
+    if raw.len() > MAX_RUNS_TEXT_BYTES {
+        return Err(format!(
+            "the run log is {} kB, more than the {} kB this page reads",
+            raw.len() / 1024,
+            MAX_RUNS_TEXT_BYTES / 1024
+        ));
+    }
     let value: Value = serde_json::from_str(raw).map_err(|e| format!("not JSON text ({e})"))?;
     object(&value, "run log")?;
-    version(&value)?;
+    let v = match value.get("record_version").and_then(Value::as_u64) {
+        None => return Err("a saved run log has a whole-number record_version".to_string()),
+        Some(v) if v > u64::from(RUNS_RECORD_VERSION) => {
+            return Err(format!(
+                "it was written by a newer version of the page (record version {v}; this page reads up to {RUNS_RECORD_VERSION})"
+            ));
+        }
+        Some(v) => v,
+    };
     if let Some(list) = value.get("runs").and_then(Value::as_array) {
         for (i, run) in list.iter().enumerate() {
             object(run, "run").map_err(|e| format!("runs[{i}]: {e}"))?;
@@ -229,11 +313,20 @@ pub fn read_runs(raw: &str) -> Result<Vec<RunRecord>, String> {
             }
         }
     }
+    if v <= 1 {
+        let old: RunsRecordV1 = typed(value.clone())?;
+        let back = serde_json::to_value(&old.runs).map_err(|e| e.to_string())?;
+        if let Some(p) = lost_part(&value["runs"], &back, "runs") {
+            return Err(p);
+        }
+        let runs = old.runs.into_iter().map(RunV1::migrated).collect();
+        return Ok(RunsRecord { record_version: RUNS_RECORD_VERSION, runs, lot_pattern: String::new() });
+    }
     let record: RunsRecord = typed(value.clone())?;
-    let back = serde_json::to_value(&record.runs).map_err(|e| e.to_string())?;
-    match lost_part(&value["runs"], &back, "runs") {
+    let back = serde_json::to_value(&record).map_err(|e| e.to_string())?;
+    match lost_part(&value, &back, "") {
         Some(p) => Err(p),
-        None => Ok(record.runs),
+        None => Ok(record),
     }
 }
 
@@ -253,7 +346,22 @@ mod tests {
         let s = Scenario::default();
         let text = scenario_text(&s);
         assert_eq!(read_scenario(&text).unwrap(), s);
-        assert_eq!(read_runs(&runs_text(&[])).unwrap(), Vec::<RunRecord>::new());
+        assert_eq!(read_runs(&runs_text(&[], "")).unwrap().runs, Vec::<RunRecord>::new());
+        let run = RunRecord {
+            lot: "LAV-2026-001".into(),
+            plant_mass_kg: 21.5,
+            distilling_time_s: 4200.0,
+            oil_volume_m3: 2.1e-4,
+            fuel_used: Some(3.2),
+            fuel_unit: "kg".into(),
+            earlier: Some(stillroom_core::calibration::EarlierReading {
+                time_s: 1200.0,
+                oil_volume_m3: 1e-4,
+            }),
+            ..RunRecord::default()
+        };
+        let back = read_runs(&runs_text(std::slice::from_ref(&run), "{CROP}-{N}")).unwrap();
+        assert_eq!((back.runs, back.lot_pattern.as_str()), (vec![run], "{CROP}-{N}"));
     }
 
     #[wasm_bindgen_test]
@@ -275,12 +383,46 @@ mod tests {
             r#"{"record_version":1,"runs":[{"x":1},{}]}"#,
             r#"{"record_version":1,"runs":[{}]}"#,
             r#"{"record_version":1,"runs":{}}"#,
-            r#"{"record_version":2,"runs":[]}"#,
+            r#"{"record_version":3,"runs":[]}"#,
+            r#"{"record_version":2,"runs":[{"plant_mass_kg":1,"distilling_time_s":1,"oil_volume_m3":1,"lott":"A"}]}"#,
+            r#"{"record_version":1,"runs":[{"plant_mass_kg":1,"distilling_time_s":1,"oil_volume_m3":1,"lot":"A"}]}"#,
             r#"{"runs":[]}"#,
             "[]",
         ] {
             assert!(read_runs(raw).is_err(), "{raw} was read");
         }
+    }
+
+    #[wasm_bindgen_test]
+    fn a_version_1_log_is_migrated_with_every_value_kept() {
+        let v1 = r#"{"record_version":1,"runs":[{"date":"2026-07-14","crop":"lavender","plant_mass_kg":20.0,
+            "distilling_time_s":3600.0,"oil_volume_m3":0.0002,"oil_density_kg_per_m3":885.0,
+            "rate_constant_per_min":0.05,"note":"first cut"},
+            {"plant_mass_kg":18.0,"distilling_time_s":3000.0,"oil_volume_m3":0.00015}]}"#;
+        let log = read_runs(v1).unwrap();
+        assert_eq!(log.record_version, RUNS_RECORD_VERSION);
+        let r = &log.runs[0];
+        assert_eq!(
+            (r.date.as_str(), r.crop.as_deref(), r.note.as_str()),
+            ("2026-07-14", Some("lavender"), "first cut")
+        );
+        assert_eq!((r.plant_mass_kg, r.distilling_time_s, r.oil_volume_m3), (20.0, 3600.0, 0.0002));
+        assert_eq!((r.oil_density_kg_per_m3, r.rate_constant_per_min), (885.0, 0.05));
+        // Version 1's own defaults for what a run left out.
+        assert_eq!((log.runs[1].oil_density_kg_per_m3, log.runs[1].rate_constant_per_min), (900.0, 0.05));
+        // Written again, it is a version-2 record that reads the same.
+        let again = read_runs(&runs_text(&log.runs, "")).unwrap();
+        assert_eq!(again.runs, log.runs);
+        assert!(runs_text(&log.runs, "").contains("\"record_version\":2"));
+    }
+
+    #[wasm_bindgen_test]
+    fn an_oversized_log_is_refused_by_its_size() {
+        let big = format!(
+            r#"{{"record_version":2,"runs":[],"lot_pattern":"{}"}}"#,
+            "x".repeat(MAX_RUNS_TEXT_BYTES)
+        );
+        assert!(read_runs(&big).unwrap_err().contains("kB"));
     }
 
     #[wasm_bindgen_test]

@@ -58,6 +58,11 @@ schema! {
         pub season: Season,
         /// Compounds of the user's own, usable in `oil` by their id.
         pub custom_compounds: Vec<CustomCompound>,
+        /// Where the oil content and release constant came from when the grower planned with
+        /// the values of their own logged runs; the plan says so while the charge still holds
+        /// them, and its ranges use the runs' spread.
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        pub calibration: Option<crate::calibration::Calibration>,
     }
 
     /// Where the still stands.
@@ -386,6 +391,7 @@ impl Default for Scenario {
             costs: Costs::default(),
             season: Season::default(),
             custom_compounds: Vec::new(),
+            calibration: None,
         }
     }
 }

@@ -375,6 +375,8 @@ pub fn validate(s: &Scenario) -> Result<Resolved, ScenarioErrors> {
         Some(kc) => (k * kc.low / kc.typical, k * kc.high / kc.typical),
         None => (k * 0.5, k * 1.5),
     };
+    let (oil_content_spread, rate_constant_spread) =
+        calibrated_spreads(s, (oil_content_spread, rate_constant_spread));
     Ok(Resolved {
         crop,
         pressure_pa,
@@ -696,6 +698,31 @@ fn check_law(ck: &mut Checker, f: &str, law: &CustomVapourPressure) {
             format!("this law cannot be used: see {first}"),
         );
     }
+}
+
+/// 1σ to the 10th/90th percentile of a normal distribution (z = 1.2816), as in `ranges.rs`.
+const SIGMA_TO_P90: f64 = 1.2816;
+
+/// The spreads of the oil content (fraction) and the reference constant (per second) from the
+/// grower's own runs while the charge still holds their values: the calibration's 1σ taken to
+/// P10-P90 (z = 1.2816), kept above zero; the crop's or the typed figure's otherwise.
+fn calibrated_spreads(s: &Scenario, crop: ((f64, f64), (f64, f64))) -> ((f64, f64), (f64, f64)) {
+    let Some(c) = s.calibration.as_ref().filter(|c| crate::calibration::holds(s, c)) else { return crop };
+    let around = |central: f64, sd: Option<f64>, fallback: (f64, f64)| match sd {
+        Some(sd) if sd.is_finite() && sd >= 0.0 && central > 0.0 => {
+            let half = (SIGMA_TO_P90 * sd).min(0.9 * central);
+            (central - half, central + half)
+        }
+        _ => fallback,
+    };
+    let content =
+        around(c.oil_content_percent / 100.0, c.oil_content_spread_percent.map(|v| v / 100.0), crop.0);
+    let k = if c.rate_constant_runs > 0 {
+        around(c.rate_constant_per_min / 60.0, c.rate_constant_spread_per_min.map(|v| v / 60.0), crop.1)
+    } else {
+        crop.1
+    };
+    (content, k)
 }
 
 #[cfg(test)]

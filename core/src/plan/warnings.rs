@@ -105,6 +105,9 @@ fn plausibility_warnings(f: &Facts, list: &mut Vec<Warning>) {
 }
 
 fn data_warnings(f: &Facts, list: &mut Vec<Warning>) {
+    if let Some(message) = own_values_note(f.scenario) {
+        warn(list, "own_calibration", message);
+    }
     if f.resolved.still_volume_estimated {
         warn(
             list,
@@ -400,6 +403,37 @@ fn capacity_warnings(f: &Facts, list: &mut Vec<Warning>) {
             ),
         );
     }
+}
+
+/// The note that the plan uses the grower's own values from their logged runs, while the charge
+/// still holds them (`calibration::holds`).
+fn own_values_note(s: &Scenario) -> Option<String> {
+    let c = s.calibration.as_ref().filter(|c| crate::calibration::holds(s, c))?;
+    let runs = |n: usize| {
+        if n == 1 { "1 of your logged runs".to_string() } else { format!("{n} of your logged runs") }
+    };
+    Some(if c.rate_constant_runs == 0 {
+        format!(
+            "Oil content {:.2} % from {}; the recovery rate is the crop's.",
+            c.oil_content_percent,
+            runs(c.oil_content_runs)
+        )
+    } else if c.rate_constant_runs == c.oil_content_runs {
+        format!(
+            "Oil content {:.2} % and recovery rate {:.3} /min from {}.",
+            c.oil_content_percent,
+            c.rate_constant_per_min,
+            runs(c.oil_content_runs)
+        )
+    } else {
+        format!(
+            "Oil content {:.2} % from {} and recovery rate {:.3} /min from {}.",
+            c.oil_content_percent,
+            runs(c.oil_content_runs),
+            c.rate_constant_per_min,
+            runs(c.rate_constant_runs)
+        )
+    })
 }
 
 #[cfg(test)]
