@@ -318,8 +318,12 @@ impl AppState {
         });
         let hidden = window_event_listener_untyped("pagehide", move |_| flush());
         let away = window_event_listener_untyped("visibilitychange", move |_| flush());
-        // The state lives as long as the page: the listeners are never removed.
-        std::mem::forget((hidden, away));
+        // Unmounted (a test's remount): nothing waiting is dropped, and the listeners go.
+        on_cleanup(move || {
+            flush();
+            hidden.remove();
+            away.remove();
+        });
         // The page's shell reads this before applying an update (a reload would drop entries
         // that only live on the page).
         Effect::new(move |_| {

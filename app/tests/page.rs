@@ -178,54 +178,6 @@ async fn a_compound_of_ones_own_from_two_points() {
 }
 
 #[wasm_bindgen_test]
-async fn a_logged_run_calibrates_the_next_plan_and_is_kept() {
-    clear_store();
-    let host = fresh_host();
-    let mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
-    leptos::task::tick().await;
-    type_into(&host, "plant_mass", "20").await;
-    let set = |id: &str, v: &str| {
-        let input: HtmlInputElement =
-            host.query_selector(&format!("#{id}")).unwrap().unwrap().unchecked_into();
-        input.set_value(v);
-        input.dispatch_event(&Event::new("input").unwrap()).unwrap();
-    };
-    set("run-minutes", "60");
-    set("run-oil", "200");
-    leptos::task::tick().await;
-    let log: HtmlElement = host.query_selector("#run-log").unwrap().unwrap().unchecked_into();
-    log.click();
-    leptos::task::tick().await;
-    // Lavender's preset k = 0.05/min at its usual 0.3 kg/h per kg of steam; 20 kg under the
-    // example's 8 kW gets 0.211 kg/h per kg, so k = 0.05 (0.211/0.3)^0.5 = 0.0419/min. Oil
-    // 0.883 g/mL: 200 mL after 60 min from 20 kg is 176.6 g / 0.919 / 20 kg = 0.96 % (inverse of
-    // the first-order law).
-    let suggestion = text_of(&host, "[data-out=calibration]");
-    assert!(suggestion.contains("0.96 %"), "{suggestion}");
-    let use_it: HtmlElement = host.query_selector("#run-use").unwrap().unwrap().unchecked_into();
-    use_it.click();
-    leptos::task::tick().await;
-    let content: HtmlInputElement = host.query_selector("#f-oil_content").unwrap().unwrap().unchecked_into();
-    assert_eq!(content.value(), "0.96");
-    drop(mounted);
-    // The log survives a remount (a reload).
-    let again = fresh_host();
-    let _mounted = leptos::mount::mount_to(again.clone(), stillroom_app::App);
-    leptos::task::tick().await;
-    assert_eq!(again.query_selector_all("[data-run]").unwrap().length(), 1);
-    // A deleted run comes back with one tap, where it was.
-    let delete: HtmlElement = again.query_selector("[data-run] button").unwrap().unwrap().unchecked_into();
-    delete.click();
-    leptos::task::tick().await;
-    assert_eq!(again.query_selector_all("[data-run]").unwrap().length(), 0);
-    let undo: HtmlElement = again.query_selector("#run-undo").unwrap().unwrap().unchecked_into();
-    undo.click();
-    leptos::task::tick().await;
-    assert_eq!(again.query_selector_all("[data-run]").unwrap().length(), 1);
-    assert!(again.query_selector("#run-undo").unwrap().is_none());
-}
-
-#[wasm_bindgen_test]
 async fn the_fuel_picker_changes_the_fuel_and_its_unit() {
     clear_store();
     let host = fresh_host();
@@ -238,60 +190,41 @@ async fn the_fuel_picker_changes_the_fuel_and_its_unit() {
     assert!(text_of(&host, "[data-out=fuel]").ends_with(" m³"));
 }
 
+/// Sends `text` to the plan as the workbench does when the grower opens a saved, pasted or
+/// shared plan in the form (`bridge::OPEN_PLAN_EVENT`).
+async fn open_in_plan(text: &str) {
+    stillroom_app::bridge::send(stillroom_app::bridge::OPEN_PLAN_EVENT, text);
+    leptos::task::tick().await;
+    leptos::task::tick().await;
+}
+
+/// Waits past the save's delay after the last edit (250 ms).
+async fn settle() {
+    let wait = js_sys::Promise::new(&mut |done, _| {
+        web_sys::window().unwrap().set_timeout_with_callback_and_timeout_and_arguments_0(&done, 400).unwrap();
+    });
+    wasm_bindgen_futures::JsFuture::from(wait).await.unwrap();
+}
+
 #[wasm_bindgen_test]
-async fn a_plan_copied_as_text_opens_again_and_bad_text_is_refused() {
+async fn a_plan_sent_to_the_form_opens_and_unreadable_text_changes_nothing() {
     clear_store();
     let host = fresh_host();
     let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
     leptos::task::tick().await;
-    let details: web_sys::HtmlDetailsElement =
-        host.query_selector("details.share").unwrap().unwrap().unchecked_into();
-    details.set_open(true);
-    details.dispatch_event(&Event::new("toggle").unwrap()).unwrap();
-    leptos::task::tick().await;
-    let out: web_sys::HtmlTextAreaElement =
-        host.query_selector("#scenario-out").unwrap().unwrap().unchecked_into();
-    let copied = out.value().replace("\"plant_mass_kg\": 15.0", "\"plant_mass_kg\": 64.0");
-    assert!(copied.contains("64.0"), "the copied text holds the plant mass");
-    let paste: web_sys::HtmlTextAreaElement =
-        host.query_selector("#scenario-in").unwrap().unwrap().unchecked_into();
-    let load: HtmlElement = host.query_selector("#scenario-load").unwrap().unwrap().unchecked_into();
-    paste.set_value("{ this is not a plan");
-    paste.dispatch_event(&Event::new("input").unwrap()).unwrap();
-    leptos::task::tick().await;
-    load.click();
-    leptos::task::tick().await;
-    assert!(text_of(&host, "#scenario-in-error").contains("not a plan the page can read"));
-    paste.set_value(&copied);
-    paste.dispatch_event(&Event::new("input").unwrap()).unwrap();
-    leptos::task::tick().await;
-    load.click();
-    leptos::task::tick().await;
-    leptos::task::tick().await;
-    assert!(text_of(&host, "details.share").contains("Opened"), "{}", text_of(&host, "details.share"));
+    let current = stillroom_app::bridge::current_plan_text().expect("the plan offers its scenario");
+    let copied = current.replace("\"plant_mass_kg\":15.0", "\"plant_mass_kg\":64.0");
+    assert!(copied.contains("64.0"), "the form's scenario holds the plant mass: {current}");
+    for bad in ["{ this is not a plan", r#"{"record_version":1,"scenario":{"charge":{"plant_mas_kg":3}}}"#] {
+        open_in_plan(bad).await;
+        let mass: HtmlInputElement = host.query_selector("#f-plant_mass").unwrap().unwrap().unchecked_into();
+        assert_eq!(mass.value(), "15", "{bad} changed the form");
+    }
+    let huge = format!("{{\"note\":\"{}\"}}", "x".repeat(300 * 1024));
+    open_in_plan(&huge).await;
+    open_in_plan(&copied).await;
     let mass: HtmlInputElement = host.query_selector("#f-plant_mass").unwrap().unwrap().unchecked_into();
     assert_eq!(mass.value(), "64");
-    assert_eq!(text_of(&host, "#scenario-in-error"), "");
-}
-
-/// Opens the plan-as-text section and pastes `text` into it.
-async fn paste(host: &HtmlElement, text: &str) {
-    let details: web_sys::HtmlDetailsElement =
-        host.query_selector("details.share").unwrap().unwrap().unchecked_into();
-    if !details.open() {
-        details.set_open(true);
-        details.dispatch_event(&Event::new("toggle").unwrap()).unwrap();
-        leptos::task::tick().await;
-    }
-    let area: web_sys::HtmlTextAreaElement =
-        host.query_selector("#scenario-in").unwrap().unwrap().unchecked_into();
-    area.set_value(text);
-    area.dispatch_event(&Event::new("input").unwrap()).unwrap();
-    leptos::task::tick().await;
-    let load: HtmlElement = host.query_selector("#scenario-load").unwrap().unwrap().unchecked_into();
-    load.click();
-    leptos::task::tick().await;
-    leptos::task::tick().await;
 }
 
 /// An invented lab sheet: an own compound with an Antoine law (the numbers are made up for
@@ -313,9 +246,8 @@ async fn a_pasted_plan_is_kept_as_written_ids_laws_and_every_digit() {
     let host = fresh_host();
     let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
     leptos::task::tick().await;
-    paste(&host, PASTED).await;
-    assert_eq!(text_of(&host, "#scenario-in-error"), "");
-    leptos::task::tick().await;
+    open_in_plan(PASTED).await;
+    settle().await;
     // What the page saves holds every part of what was pasted, unchanged.
     let saved = LocalStorage::raw().get_item("stillroom.scenario").unwrap().unwrap();
     let saved: serde_json::Value = serde_json::from_str(&saved).unwrap();
@@ -330,30 +262,10 @@ async fn a_pasted_plan_is_kept_as_written_ids_laws_and_every_digit() {
     assert_eq!(first.value(), "linalool");
     // Typing over a field changes that field only.
     type_into(&host, "plant_mass", "20").await;
-    leptos::task::tick().await;
+    settle().await;
     let saved = LocalStorage::raw().get_item("stillroom.scenario").unwrap().unwrap();
     let saved: serde_json::Value = serde_json::from_str(&saved).unwrap();
     assert_eq!(saved["scenario"]["charge"]["plant_mass_kg"], 20.0);
     assert_eq!(saved["scenario"]["run"]["rate_constant_per_min"], 0.0512345678);
     assert_eq!(saved["scenario"]["oil"]["composition"]["parts"][1]["mass_percent"], 66.66666667);
-}
-
-#[wasm_bindgen_test]
-async fn the_paste_box_names_the_field_and_the_type_and_refuses_huge_text() {
-    clear_store();
-    let host = fresh_host();
-    let _mounted = leptos::mount::mount_to(host.clone(), stillroom_app::App);
-    leptos::task::tick().await;
-    paste(&host, r#"{"record_version":1,"scenario":{"charge":{"plant_mass_kg":"lots"}}}"#).await;
-    let e = text_of(&host, "#scenario-in-error");
-    assert!(e.contains("scenario.charge.plant_mass_kg") && e.contains("expected a number"), "{e}");
-    paste(&host, r#"{"record_version":1,"scenario":{"charge":{"plant_mas_kg":3}}}"#).await;
-    let e = text_of(&host, "#scenario-in-error");
-    assert!(e.contains("plant_mas_kg"), "{e}");
-    let huge = format!("{{\"note\":\"{}\"}}", "x".repeat(300 * 1024));
-    paste(&host, &huge).await;
-    let e = text_of(&host, "#scenario-in-error");
-    assert!(e.contains("301 kB") && e.contains("256 kB"), "{e}");
-    let mass: HtmlInputElement = host.query_selector("#f-plant_mass").unwrap().unwrap().unchecked_into();
-    assert_eq!(mass.value(), "15", "a refused paste leaves the form as it was");
 }

@@ -57,7 +57,8 @@ pub fn ModeTabs() -> impl IntoView {
     on_cleanup(move || on_hash.remove());
     let app = expect_context::<AppState>();
     let handle = window_event_listener_untyped(bridge::OPEN_PLAN_EVENT, move |ev| {
-        if let Some(s) = bridge::detail(ev).and_then(|j| crate::records::read_scenario(&j).ok()) {
+        let text = bridge::detail(ev).filter(|j| j.len() <= crate::state::MAX_PASTE_BYTES);
+        if let Some(s) = text.and_then(|j| crate::records::read_scenario(&j).ok()) {
             app.apply(&s);
             mode.set(Mode::Plan);
             if let Some(w) = web_sys::window() {
