@@ -30,14 +30,16 @@ struct Cell {
     text: String,
     range: Option<String>,
     si: Option<f64>,
+    /// An answer of a plan that could not be made: left out when looking for differences.
+    missing: bool,
 }
 
 fn cell(text: String) -> Cell {
-    Cell { text, range: None, si: None }
+    Cell { text, range: None, si: None, missing: false }
 }
 
 fn answer(a: &Answer, show: impl Fn(f64) -> String) -> Cell {
-    Cell { text: show(a.central), range: Some(format!("likely {} to {}", show(a.low), show(a.high))), si: Some(a.central) }
+    Cell { text: show(a.central), range: Some(format!("likely {} to {}", show(a.low), show(a.high))), si: Some(a.central), missing: false }
 }
 
 fn crop_name(s: &Scenario) -> String {
@@ -67,7 +69,7 @@ struct RowDef {
 }
 
 fn planned(c: &Compared, f: impl Fn(&Plan) -> Cell) -> Cell {
-    c.plan.as_ref().map(f).unwrap_or_else(|_| cell("–".into()))
+    c.plan.as_ref().map(f).unwrap_or_else(|_| Cell { missing: true, ..cell("–".into()) })
 }
 
 const ROWS: [RowDef; 12] = [
@@ -135,6 +137,7 @@ const ROWS: [RowDef; 12] = [
                     text: units::oil_volume(r.central),
                     range: Some(format!("likely {} to {}", units::oil_volume(r.low), units::oil_volume(r.high))),
                     si: Some(r.central),
+                    missing: false,
                 }
             })
         },
@@ -150,6 +153,7 @@ const ROWS: [RowDef; 12] = [
                     text: units::fuel(a.central, fuel),
                     range: Some(format!("likely {} to {}", units::fuel(a.low, fuel), units::fuel(a.high, fuel))),
                     si: Some(a.central),
+                    missing: false,
                 }
             })
         },
@@ -252,7 +256,8 @@ pub fn Compare() -> impl IntoView {
 }
 
 /// The table itself: rows the answers and inputs, columns the plans; a row whose shown values
-/// differ is marked with "≠" and a word, not by colour alone.
+/// differ is marked with "≠" and a word, not by colour alone (a plan that could not be made is
+/// left out of that: its dashes are not a difference).
 fn compare_table(list: &[Compared]) -> impl IntoView + use<> {
     let names: Vec<String> = list.iter().map(|c| c.name.clone()).collect();
     let status: Vec<Option<String>> = list.iter().map(|c| c.plan.as_ref().err().map(why)).collect();
@@ -260,7 +265,9 @@ fn compare_table(list: &[Compared]) -> impl IntoView + use<> {
         .iter()
         .map(|r| {
             let cells: Vec<Cell> = list.iter().map(|c| (r.read)(c)).collect();
-            let differs = cells.iter().any(|c| c.text != cells[0].text);
+            let mut shown = cells.iter().filter(|c| !c.missing).map(|c| &c.text);
+            let first = shown.next();
+            let differs = shown.any(|t| Some(t) != first);
             (r.key, r.label, differs, cells)
         })
         .collect();

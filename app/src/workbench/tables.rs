@@ -92,7 +92,10 @@ fn chart_value(key: &str, si: f64, fuel: Fuel) -> (f64, &'static str) {
 
 /// A varied value in the grower's units, to about three figures: "1640 ft".
 fn show_input(f: &NumField, si: f64, system: UnitSystem) -> String {
-    format!("{} {}", units::sig3(f.from_si_in(system, si)), f.unit_in(system))
+    let v = f.from_si_in(system, si);
+    // sig3 writes a zero as "0.0000"; a range's start is often a plain 0.
+    let n = if v == 0.0 { "0".to_string() } else { units::sig3(v) };
+    format!("{n} {}", f.unit_in(system))
 }
 
 /// A step is a difference: in °F it is 5/9 K whatever the offset, so it converts as
