@@ -145,7 +145,8 @@ fn the_command_line_prints_the_librarys_table_byte_for_byte() {
     );
     std::fs::remove_file(&path).ok();
     assert!(ok, "{err}");
-    let table = stillroom_core::sweep::sweep(&s, "charge.plant_mass_kg", -10.0, 50.0, 15.0, &columns).unwrap();
+    let table =
+        stillroom_core::sweep::sweep(&s, "charge.plant_mass_kg", -10.0, 50.0, 15.0, &columns).unwrap();
     assert_eq!(out, table.to_csv());
     assert!(out.lines().nth(1).unwrap().starts_with("-10,\"error: "), "{out}");
 }

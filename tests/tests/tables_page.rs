@@ -216,17 +216,17 @@ async fn a_sweep_on_the_page_is_the_command_lines_csv_in_either_units() -> Resul
     assert!(command.starts_with(&format!("stillroom sweep site.altitude_m 0 3000 500 {cols}")), "{command}");
 
     // Metric: metres, °C, and the CSV's numbers behind each cell.
-    let csv_rows: Vec<Vec<f64>> = cli
-        .lines()
-        .skip(1)
-        .map(|l| l.split(',').map(|x| x.parse().unwrap()).collect())
-        .collect();
+    let csv_rows: Vec<Vec<f64>> =
+        cli.lines().skip(1).map(|l| l.split(',').map(|x| x.parse().unwrap()).collect()).collect();
     let rows = sweep_rows(c).await?;
     assert_eq!(rows.len(), 7);
     for (row, want) in rows.iter().zip(&csv_rows) {
         assert_eq!(row.0, format!("{} m", want[0]));
         assert!(row.2[0].0.ends_with("°C"), "{:?}", row.2[0]);
-        assert!(close(row.2[0].1.parse()?, want[1]) && close(row.2[1].1.parse()?, want[2]), "{row:?} {want:?}");
+        assert!(
+            close(row.2[0].1.parse()?, want[1]) && close(row.2[1].1.parse()?, want[2]),
+            "{row:?} {want:?}"
+        );
     }
     // Boiling falls with height (IAPWS-IF97: 99.97 °C at 101.325 kPa; at 3000 m, 70.1 kPa,
     // about 90 °C).
@@ -308,7 +308,8 @@ async fn saved_plans_side_by_side_show_the_cores_numbers_and_mark_what_differs()
     big.charge.plant_mass_kg = 40.0;
     let mut broken = Scenario::default();
     broken.charge.plant_mass_kg = -5.0;
-    let plans = [("Home field", &home), ("Hill field", &hill), ("Big charge", &big), ("Typing slip", &broken)];
+    let plans =
+        [("Home field", &home), ("Hill field", &hill), ("Big charge", &big), ("Typing slip", &broken)];
     let record = json!({
         "record_version": 1,
         "plans": plans.iter().enumerate().map(|(i, (n, s))| saved(i as u64 + 1, n, s)).collect::<Vec<_>>(),
@@ -318,15 +319,21 @@ async fn saved_plans_side_by_side_show_the_cores_numbers_and_mark_what_differs()
     let page = browser::open().await?;
     page.goto("").await?;
     let c = &page.client;
-    c.execute("localStorage.clear(); localStorage.setItem('stillroom.library', arguments[0]);", vec![json!(record.to_string())])
-        .await?;
+    c.execute(
+        "localStorage.clear(); localStorage.setItem('stillroom.library', arguments[0]);",
+        vec![json!(record.to_string())],
+    )
+    .await?;
     c.refresh().await?;
     open_workbench(&page).await?;
     for id in 1..=4 {
         click(c, &format!("compare-pick-{id}")).await?;
     }
     // Four is the most: the form's own box is now closed.
-    assert_eq!(c.find(Locator::Id("compare-pick-form")).await?.prop("disabled").await?.as_deref(), Some("true"));
+    assert_eq!(
+        c.find(Locator::Id("compare-pick-form")).await?.prop("disabled").await?.as_deref(),
+        Some("true")
+    );
     c.wait().at_most(WAIT).for_element(Locator::Css("#compare-table tr[data-row='steam']")).await?;
 
     let v = c
@@ -337,7 +344,8 @@ async fn saved_plans_side_by_side_show_the_cores_numbers_and_mark_what_differs()
             vec![],
         )
         .await?;
-    let table: std::collections::BTreeMap<String, (String, String, Vec<(String, String)>)> = serde_json::from_value(v)?;
+    let table: std::collections::BTreeMap<String, (String, String, Vec<(String, String)>)> =
+        serde_json::from_value(v)?;
 
     // The core's own plans of the three, read here natively.
     let planned: Vec<_> = [&home, &hill, &big].iter().map(|s| stillroom_core::plan(s).unwrap()).collect();
@@ -363,7 +371,9 @@ async fn saved_plans_side_by_side_show_the_cores_numbers_and_mark_what_differs()
     let why = wait_text(c, "#compare-table [data-out=cannot_plan]", |t| !t.is_empty()).await?;
     assert!(why.starts_with("Cannot be planned:"), "{why}");
     // Inputs: the crop and the condenser are the same in all four; altitude and charge differ.
-    for (key, differs) in [("crop", false), ("condenser", false), ("altitude", true), ("charge", true), ("boiling", true)] {
+    for (key, differs) in
+        [("crop", false), ("condenser", false), ("altitude", true), ("charge", true), ("boiling", true)]
+    {
         let (flag, label, _) = &table[key];
         assert_eq!(flag == "true", differs, "{key}: {flag}");
         assert_eq!(label.contains("≠ differs"), differs, "{key}: {label}");
@@ -392,10 +402,16 @@ async fn saved_plans_side_by_side_show_the_cores_numbers_and_mark_what_differs()
     screenshot(&page, "#compare-table", "stillroom-compare-412x915.png", 412, 915).await?;
     c.execute("document.querySelector('.compare-scroll').scrollLeft = 200;", vec![]).await?;
     tokio::time::sleep(Duration::from_millis(200)).await;
-    std::fs::write(std::env::temp_dir().join("stillroom-compare-scrolled-412x915.png"), c.screenshot().await?)?;
+    std::fs::write(
+        std::env::temp_dir().join("stillroom-compare-scrolled-412x915.png"),
+        c.screenshot().await?,
+    )?;
     screenshot(&page, "#compare-table", "stillroom-compare-1280x800.png", 1280, 800).await?;
     let wide = c
-        .execute("return getComputedStyle(document.querySelector('#compare-table .label-col')).position;", vec![])
+        .execute(
+            "return getComputedStyle(document.querySelector('#compare-table .label-col')).position;",
+            vec![],
+        )
         .await?;
     assert_eq!(wide, json!("static"));
     phone(&page).await?;

@@ -4,6 +4,7 @@
 
 use super::Workbench;
 use super::library::Library;
+use crate::fields::FIELDS;
 use crate::units;
 use leptos::prelude::*;
 use stillroom_core::crops::CROPS;
@@ -39,7 +40,12 @@ fn cell(text: String) -> Cell {
 }
 
 fn answer(a: &Answer, show: impl Fn(f64) -> String) -> Cell {
-    Cell { text: show(a.central), range: Some(format!("likely {} to {}", show(a.low), show(a.high))), si: Some(a.central), missing: false }
+    Cell {
+        text: show(a.central),
+        range: Some(format!("likely {} to {}", show(a.low), show(a.high))),
+        si: Some(a.central),
+        missing: false,
+    }
 }
 
 fn crop_name(s: &Scenario) -> String {
@@ -77,19 +83,29 @@ const ROWS: [RowDef; 12] = [
     RowDef {
         key: "charge",
         label: "Plant in the still",
-        read: |c| Cell { si: Some(c.scenario.charge.plant_mass_kg), ..cell(units::mass(c.scenario.charge.plant_mass_kg)) },
+        read: |c| Cell {
+            si: Some(c.scenario.charge.plant_mass_kg),
+            ..cell(units::mass(c.scenario.charge.plant_mass_kg))
+        },
     },
     RowDef {
         key: "altitude",
         label: "Altitude",
-        read: |c| Cell { si: Some(c.scenario.site.altitude_m), ..cell(units::altitude(c.scenario.site.altitude_m)) },
+        read: |c| Cell {
+            si: Some(c.scenario.site.altitude_m),
+            ..cell(units::altitude(c.scenario.site.altitude_m))
+        },
     },
     RowDef {
         key: "heat_input",
         label: "Heat input",
         read: |c| Cell {
             si: Some(c.scenario.boiler.heat_input_w),
-            ..cell(format!("{}, {}", units::kilowatts(c.scenario.boiler.heat_input_w), fuel_word(c.scenario.boiler.fuel)))
+            ..cell(format!(
+                "{}, {}",
+                units::kilowatts(c.scenario.boiler.heat_input_w),
+                fuel_word(c.scenario.boiler.fuel)
+            ))
         },
     },
     RowDef {
@@ -135,7 +151,11 @@ const ROWS: [RowDef; 12] = [
                 let r = &p.yield_estimate.oil_volume_m3;
                 Cell {
                     text: units::oil_volume(r.central),
-                    range: Some(format!("likely {} to {}", units::oil_volume(r.low), units::oil_volume(r.high))),
+                    range: Some(format!(
+                        "likely {} to {}",
+                        units::oil_volume(r.low),
+                        units::oil_volume(r.high)
+                    )),
                     si: Some(r.central),
                     missing: false,
                 }
@@ -151,7 +171,11 @@ const ROWS: [RowDef; 12] = [
                 let a = &p.ranges.fuel_amount;
                 Cell {
                     text: units::fuel(a.central, fuel),
-                    range: Some(format!("likely {} to {}", units::fuel(a.low, fuel), units::fuel(a.high, fuel))),
+                    range: Some(format!(
+                        "likely {} to {}",
+                        units::fuel(a.low, fuel),
+                        units::fuel(a.high, fuel)
+                    )),
                     si: Some(a.central),
                     missing: false,
                 }
@@ -165,9 +189,17 @@ const ROWS: [RowDef; 12] = [
     },
 ];
 
-/// Why a plan could not be made, in the grower's words.
-fn why(e: &ScenarioErrors) -> String {
-    e.errors.iter().map(|e| e.message.clone()).collect::<Vec<_>>().join("; ")
+/// Why a plan could not be made, in the grower's words: each field by its label on the form
+/// (its path where the form has no such field), then the core's message.
+pub fn why(e: &ScenarioErrors) -> String {
+    e.errors
+        .iter()
+        .map(|e| {
+            let label = FIELDS.iter().find(|f| f.path == e.field).map(|f| f.label.to_string());
+            format!("{}: {}", label.unwrap_or_else(|| e.field.clone()), e.message)
+        })
+        .collect::<Vec<_>>()
+        .join("; ")
 }
 
 /// The picker and the side-by-side table.
@@ -219,7 +251,11 @@ pub fn Compare() -> impl IntoView {
             }
             let list: Vec<Compared> = list
                 .iter()
-                .map(|(name, scenario, plan)| Compared { name: name.clone(), scenario: scenario.clone(), plan: plan.clone() })
+                .map(|(name, scenario, plan)| Compared {
+                    name: name.clone(),
+                    scenario: scenario.clone(),
+                    plan: plan.clone(),
+                })
                 .collect();
             Some(units::with_system(system, || compare_table(&list)))
         })

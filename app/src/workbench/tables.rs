@@ -255,7 +255,8 @@ pub fn Tables() -> impl IntoView {
         }
         let scenario = wb.current.get_untracked();
         if scenario.is_none() {
-            found.general = Some("The plan's form could not be read: open “Plan a run” once, then come back.".into());
+            found.general =
+                Some("The plan's form could not be read: open “Plan a run” once, then come back.".into());
         }
         let (Ok(a), Ok(b), Ok(s), Some(scenario), false) = (a, b, s, scenario, cols.is_empty()) else {
             faults.set(found);
@@ -265,7 +266,8 @@ pub fn Tables() -> impl IntoView {
         let unit = f.unit_in(system);
         match sweep::row_count(a, b, s) {
             Err(SweepError::BadRange) if b < a => {
-                found.to = Some(format!("The end must not be below the start ({}).", show_input(f, a, system)));
+                found.to =
+                    Some(format!("The end must not be below the start ({}).", show_input(f, a, system)));
             }
             Err(SweepError::BadRange) => found.step = Some(format!("The step must be more than 0 {unit}.")),
             Err(SweepError::TooManyRows { rows }) => {
@@ -289,10 +291,12 @@ pub fn Tables() -> impl IntoView {
         match sweep::sweep(&scenario, f.path, a, b, s, &cols) {
             Ok(table) => {
                 faults.set(Faults::default());
-                if !chosen.with_untracked(|k| k.contains(&chart_key.get_untracked())) {
-                    if let Some(first) = COLUMNS.iter().find(|c| chosen.with_untracked(|k| k.contains(&c.key))) {
-                        chart_key.set(first.key);
-                    }
+                // The chart keeps its column while that column is shown; else the first one.
+                let first = COLUMNS.iter().find(|c| chosen.with_untracked(|k| k.contains(&c.key)));
+                if let Some(first) =
+                    first.filter(|_| !chosen.with_untracked(|k| k.contains(&chart_key.get_untracked())))
+                {
+                    chart_key.set(first.key);
                 }
                 made.set(Some(Made { table, input: key, fuel: scenario.boiler.fuel, range: (a, b, s) }));
             }
@@ -461,7 +465,7 @@ fn SweepView(made: RwSignal<Option<Made>>, chart_key: RwSignal<&'static str>) ->
                                 })
                                 .collect::<Vec<_>>(),
                             Err(e) => {
-                                let why = e.errors.iter().map(|e| e.message.clone()).collect::<Vec<_>>().join("; ");
+                                let why = super::compare::why(e);
                                 vec![view! {
                                     <td class="row-error" colspan=keys.len().to_string()>{format!("No plan: {why}")}</td>
                                 }
@@ -503,7 +507,7 @@ fn SweepView(made: RwSignal<Option<Made>>, chart_key: RwSignal<&'static str>) ->
     }
 }
 
-/// Round steps for an axis from `lo` to `hi`: 1, 2 or 5 times a power of ten, about four or
+/// Round steps for an axis from `lo` to `hi`: 1, 2, 2.5 or 5 times a power of ten, about four or
 /// five of them; the ticks lie inside the (widened) range.
 pub fn ticks(lo: f64, hi: f64) -> (f64, f64, Vec<f64>) {
     let (mut lo, mut hi) = if lo <= hi { (lo, hi) } else { (hi, lo) };
@@ -515,7 +519,7 @@ pub fn ticks(lo: f64, hi: f64) -> (f64, f64, Vec<f64>) {
     }
     let raw = (hi - lo) / 4.0;
     let mag = 10f64.powf(raw.log10().floor());
-    let step = [1.0, 2.0, 5.0, 10.0].iter().map(|m| m * mag).find(|s| *s >= raw).unwrap_or(10.0 * mag);
+    let step = [1.0, 2.0, 2.5, 5.0, 10.0].iter().map(|m| m * mag).find(|s| *s >= raw).unwrap_or(10.0 * mag);
     let start = (lo / step).floor() * step;
     let end = (hi / step).ceil() * step;
     let n = ((end - start) / step).round() as usize;
@@ -535,7 +539,8 @@ fn SweepChart(made: RwSignal<Option<Made>>, chart_key: RwSignal<&'static str>) -
     let wb = expect_context::<Workbench>();
     // Plot box inside a 320 x 220 view: left margin for the value labels, bottom for the input's.
     const L: f64 = 52.0;
-    const R: f64 = 310.0;
+    // Room on the right for half of the last input label.
+    const R: f64 = 296.0;
     const T: f64 = 14.0;
     const B: f64 = 180.0;
     let drawn = move || {
@@ -564,17 +569,28 @@ fn SweepChart(made: RwSignal<Option<Made>>, chart_key: RwSignal<&'static str>) -
             }
             let xs = points.iter().map(|p| p.0);
             let ys = points.iter().map(|p| p.1);
-            let (x0, x1, xt) = ticks(xs.clone().fold(f64::INFINITY, f64::min), xs.fold(f64::NEG_INFINITY, f64::max));
-            let (y0, y1, yt) = ticks(ys.clone().fold(f64::INFINITY, f64::min), ys.fold(f64::NEG_INFINITY, f64::max));
+            let (x0, x1, xt) =
+                ticks(xs.clone().fold(f64::INFINITY, f64::min), xs.fold(f64::NEG_INFINITY, f64::max));
+            let (y0, y1, yt) =
+                ticks(ys.clone().fold(f64::INFINITY, f64::min), ys.fold(f64::NEG_INFINITY, f64::max));
             let px = move |x: f64| L + (R - L) * (x - x0) / (x1 - x0);
             let py = move |y: f64| B - (B - T) * (y - y0) / (y1 - y0);
-            let line = points.iter().map(|(x, y)| format!("{:.1},{:.1}", px(*x), py(*y))).collect::<Vec<_>>().join(" ");
+            let line = points
+                .iter()
+                .map(|(x, y)| format!("{:.1},{:.1}", px(*x), py(*y)))
+                .collect::<Vec<_>>()
+                .join(" ");
             let xstep = xt.get(1).map(|v| v - xt[0]).unwrap_or(1.0);
             let ystep = yt.get(1).map(|v| v - yt[0]).unwrap_or(1.0);
             let xlabels = xt.iter().map(|x| (px(*x), tick_label(*x, xstep))).collect::<Vec<_>>();
             let ylabels = yt.iter().map(|y| (py(*y), tick_label(*y, ystep))).collect::<Vec<_>>();
             let dots = points.iter().map(|(x, y)| (px(*x), py(*y))).collect::<Vec<_>>();
-            let title = format!("{} ({unit}) against {} ({})", column(key).label, f.label.to_lowercase(), f.unit_in(system));
+            let title = format!(
+                "{} ({unit}) against {} ({})",
+                column(key).label,
+                f.label.to_lowercase(),
+                f.unit_in(system)
+            );
             Some((line, xlabels, ylabels, dots, title, unit, f.unit_in(system)))
         })
     };
