@@ -20,6 +20,8 @@ pub mod scenario;
 pub mod season;
 pub mod separator;
 pub mod sizing;
+#[cfg(feature = "json")]
+pub mod sweep;
 pub mod water;
 
 pub use plan::{Plan, plan};

@@ -128,3 +128,25 @@ fn a_misspelt_scenario_comes_back_as_field_errors() {
     assert!(ok, "{err}");
     assert!(out.contains("\"codistillation\""));
 }
+
+#[test]
+fn the_command_line_prints_the_librarys_table_byte_for_byte() {
+    // An invented scenario (a 22 kg rosemary charge at Larkfield Farm), read from a file as a
+    // grower would pass it, swept with a column the plan leaves empty and a refused value.
+    let mut s = stillroom_core::Scenario::default();
+    s.charge.crop = Some("rosemary".into());
+    s.charge.plant_mass_kg = 22.0;
+    let path = std::env::temp_dir().join(format!("stillroom-cli-sweep-{}.json", std::process::id()));
+    std::fs::write(&path, serde_json::to_string(&s).unwrap()).unwrap();
+    let columns = ["site.water_boiling_point_c", "run.total_time_s", "season.charges", "energy.fuel_unit"];
+    let (ok, out, err) = run(
+        &["sweep", "charge.plant_mass_kg", "-10", "50", "15", &columns.join(","), path.to_str().unwrap()],
+        "",
+    );
+    std::fs::remove_file(&path).ok();
+    assert!(ok, "{err}");
+    let table =
+        stillroom_core::sweep::sweep(&s, "charge.plant_mass_kg", -10.0, 50.0, 15.0, &columns).unwrap();
+    assert_eq!(out, table.to_csv());
+    assert!(out.lines().nth(1).unwrap().starts_with("-10,\"error: "), "{out}");
+}

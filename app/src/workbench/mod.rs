@@ -6,8 +6,10 @@
 //! Each part keeps its own state, provided through context, and its own saved record through a
 //! [`Store`] (the storage sync of the module, in one place per record).
 
+pub mod compare;
 pub mod library;
 pub mod runs;
+pub mod tables;
 
 use crate::bridge;
 use crate::records;
@@ -72,6 +74,8 @@ pub fn WorkbenchView() -> impl IntoView {
             </Show>
             <p class="error" role="alert">{move || wb.store.unsaved()}</p>
             <runs::RunLog />
+            <compare::Compare />
+            <tables::Tables />
         </div>
     }
 }

@@ -7,7 +7,7 @@
 //!                                          vary FIELD (a dotted path such as site.altitude_m)
 //!                                          and print CSV of the COLUMNS (comma-separated dotted
 //!                                          paths into the plan), a row as soon as it is planned;
-//!                                          at most MAX_SWEEP_ROWS rows
+//!                                          at most stillroom_core::sweep::MAX_SWEEP_ROWS rows
 //! stillroom size [FILE]                    read a sizing request (FILE or stdin), print the design
 //! stillroom schema scenario|plan|sizing_request|design
 //!                                          print the JSON Schema
@@ -17,15 +17,11 @@
 //! A scenario that cannot be read or planned prints its field errors as JSON,
 //! `{"errors":[{"field","value","valid","message","min","max"}]}`, on stderr.
 
-use serde_json::Value;
 use std::io::{Read, Write};
 use std::process::ExitCode;
-use stillroom_core::scenario::{limits, parse_scenario_json, scenario_from_json_value};
+use stillroom_core::scenario::{limits, parse_scenario_json};
+use stillroom_core::sweep::{Sweep, known_columns, row_count};
 use stillroom_core::{Plan, Scenario, ScenarioErrors, plan};
-
-/// Most rows one sweep prints: a leaflet's table has tens; a thousand is a fine curve, and the
-/// cap keeps a mistyped STEP from running for ever.
-const MAX_SWEEP_ROWS: u64 = 1_000;
 
 fn errors_json(e: &ScenarioErrors) -> String {
     serde_json::to_string_pretty(e).unwrap_or_else(|_| e.to_string())
@@ -51,158 +47,29 @@ fn read_scenario(path: Option<&String>) -> Result<Scenario, String> {
     parse_scenario_json(&text).map_err(|e| errors_json(&e))
 }
 
-/// Sets a dotted path inside a JSON value, creating objects on the way.
-fn set_path(value: &mut Value, path: &str, new: Value) -> Result<(), String> {
-    let mut cur = value;
-    let parts: Vec<&str> = path.split('.').collect();
-    for (i, key) in parts.iter().enumerate() {
-        if i == parts.len() - 1 {
-            match cur {
-                Value::Object(map) => {
-                    map.insert((*key).to_string(), new);
-                    return Ok(());
-                }
-                _ => return Err(format!("{path}: {key} is not inside an object")),
-            }
-        }
-        cur = match cur {
-            Value::Object(map) => {
-                map.entry((*key).to_string()).or_insert_with(|| Value::Object(Default::default()))
-            }
-            _ => return Err(format!("{path}: {key} is not an object")),
-        };
-    }
-    Ok(())
-}
-
-fn get_path<'a>(value: &'a Value, path: &str) -> Option<&'a Value> {
-    path.split('.').try_fold(value, |cur, key| match cur {
-        Value::Object(map) => map.get(key),
-        Value::Array(items) => key.parse::<usize>().ok().and_then(|i| items.get(i)),
-        _ => None,
-    })
-}
-
-/// Whether a dotted path names a place in the plan's JSON Schema (through optional sections
-/// and list items), so a column is known before any row is computed, even where a particular
-/// plan holds nothing.
-fn schema_has(root: &Value, node: &Value, path: &[&str]) -> bool {
-    if let Some(Value::String(r)) = node.get("$ref") {
-        let name = r.trim_start_matches("#/definitions/");
-        return root.pointer(&format!("/definitions/{name}")).is_some_and(|n| schema_has(root, n, path));
-    }
-    for combinator in ["anyOf", "oneOf", "allOf"] {
-        if let Some(Value::Array(alts)) = node.get(combinator) {
-            return alts.iter().any(|a| schema_has(root, a, path));
-        }
-    }
-    let Some((head, rest)) = path.split_first() else {
-        return true;
+fn sweep(args: &[String]) -> Result<(), String> {
+    let [field, from, to, step, columns, rest @ ..] = args else {
+        return Err("usage: stillroom sweep FIELD FROM TO STEP COLUMNS [FILE]".into());
     };
-    if let Some(next) = node.get("properties").and_then(|p| p.get(*head)) {
-        return schema_has(root, next, rest);
-    }
-    match (node.get("items"), head.parse::<usize>()) {
-        (Some(Value::Array(tuple)), Ok(i)) => tuple.get(i).is_some_and(|n| schema_has(root, n, rest)),
-        (Some(item @ Value::Object(_)), Ok(_)) => schema_has(root, item, rest),
-        _ => false,
-    }
-}
-
-fn csv_cell(v: Option<&Value>) -> String {
-    match v {
-        None | Some(Value::Null) => String::new(),
-        Some(Value::String(s)) => format!("\"{}\"", s.replace('"', "\"\"")),
-        Some(other) => other.to_string(),
-    }
-}
-
-/// The sweep's values, FROM + i STEP up to TO, after checking they are few enough.
-fn sweep_values(from: &str, to: &str, step: &str) -> Result<(f64, f64, u64), String> {
     let num = |s: &str| match s.parse::<f64>() {
         Ok(v) if v.is_finite() => Ok(v),
         _ => Err(format!("{s} is not a finite number")),
     };
     let (from, to, step) = (num(from)?, num(to)?, num(step)?);
-    if step <= 0.0 || to < from {
-        return Err("need FROM <= TO and STEP > 0".into());
-    }
-    // The small allowance keeps TO itself when (TO - FROM) / STEP is whole but rounds below.
-    let intervals = ((to - from) / step + 1e-9).floor();
-    if !(intervals.is_finite() && intervals < MAX_SWEEP_ROWS as f64) {
-        let rows = if intervals.is_finite() {
-            format!("{} rows", intervals + 1.0)
-        } else {
-            "rows without end".into()
-        };
-        return Err(format!(
-            "the sweep would print {rows}; at most {MAX_SWEEP_ROWS} rows: choose a larger STEP or a narrower range"
-        ));
-    }
-    Ok((from, step, intervals as u64 + 1))
-}
-
-fn sweep(args: &[String]) -> Result<(), String> {
-    let [field, from, to, step, columns, rest @ ..] = args else {
-        return Err("usage: stillroom sweep FIELD FROM TO STEP COLUMNS [FILE]".into());
-    };
-    let (from, step, rows) = sweep_values(from, to, step)?;
+    // The range first: a sweep too long is refused before the scenario is even read.
+    row_count(from, to, step).map_err(|e| e.to_string())?;
     let base = if rest.is_empty() { Scenario::default() } else { read_scenario(rest.first())? };
-    let base = serde_json::to_value(&base).map_err(|e| e.to_string())?;
     let columns: Vec<&str> = columns.split(',').collect();
-    let plan_schema = serde_json::to_value(schemars::schema_for!(Plan)).map_err(|e| e.to_string())?;
-    let unknown: Vec<&str> = columns
-        .iter()
-        .copied()
-        .filter(|c| !schema_has(&plan_schema, &plan_schema, &c.split('.').collect::<Vec<_>>()))
-        .collect();
-    if !unknown.is_empty() {
-        return Err(format!(
-            "not in the plan: {} (see `stillroom schema plan` for the names)",
-            unknown.join(", ")
-        ));
-    }
-    let scenario_at = |x: f64| -> Result<Scenario, ScenarioErrors> {
-        let mut v = base.clone();
-        set_path(&mut v, field, serde_json::json!(x)).map_err(|m| ScenarioErrors {
-            errors: vec![stillroom_core::scenario::FieldError {
-                field: field.clone(),
-                value: String::new(),
-                valid: "a numeric field of the scenario".into(),
-                message: m,
-                min: None,
-                max: None,
-            }],
-        })?;
-        scenario_from_json_value(v)
-    };
-    // A FIELD the scenario does not have fails on the first value: say so once, not per row.
-    scenario_at(from).map_err(|e| format!("{field} cannot be swept:\n{}", errors_json(&e)))?;
+    known_columns(&columns).map_err(|e| e.to_string())?;
+    let sweep = Sweep::new(&base, field, from, to, step, &columns).map_err(|e| e.to_string())?;
     let stdout = std::io::stdout();
     let mut out = stdout.lock();
     let mut line = |text: String| {
         writeln!(out, "{text}").and_then(|_| out.flush()).map_err(|e| format!("cannot write: {e}"))
     };
-    line(format!("{field},{}", columns.join(",")))?;
-    for i in 0..rows {
-        let x = from + step * i as f64;
-        let row = match scenario_at(x).and_then(|s| plan(&s)) {
-            Ok(p) => {
-                let pv = serde_json::to_value(&p).map_err(|e| e.to_string())?;
-                let cells: Vec<String> = columns.iter().map(|c| csv_cell(get_path(&pv, c))).collect();
-                format!("{x},{}", cells.join(","))
-            }
-            Err(e) => {
-                let msg = e
-                    .errors
-                    .iter()
-                    .map(|e| format!("{}: {}", e.field, e.message))
-                    .collect::<Vec<_>>()
-                    .join("; ");
-                format!("{x},\"error: {}\"", msg.replace('"', "'"))
-            }
-        };
-        line(row)?;
+    line(sweep.csv_header())?;
+    for row in sweep.rows() {
+        line(row.csv_line())?;
     }
     Ok(())
 }
