@@ -82,6 +82,31 @@ pub fn take_inbox() -> Vec<(String, String)> {
     items
 }
 
+/// The texts queued for the workbench of one `kind`, oldest first; only those are taken off the
+/// queue (each part of the workbench drains its own kinds).
+pub fn take_inbox_of(kind: &str) -> Vec<String> {
+    let Some(list) = window().and_then(|w| inbox(&w)) else { return Vec::new() };
+    let mut taken = Vec::new();
+    let kept = js_sys::Array::new();
+    for item in list.iter() {
+        let pair = item.clone().dyn_into::<js_sys::Array>().ok();
+        let text = pair.filter(|p| p.get(0).as_string().as_deref() == Some(kind)).and_then(|p| p.get(1).as_string());
+        match text {
+            Some(t) => taken.push(t),
+            None => {
+                kept.push(&item);
+            }
+        }
+    }
+    if !taken.is_empty() {
+        list.set_length(0);
+        for item in kept.iter() {
+            list.push(&item);
+        }
+    }
+    taken
+}
+
 /// Sets `window.<name>` to a function returning a text.
 fn expose(name: &str, f: impl Fn() -> String + 'static) {
     let Some(w) = window() else { return };

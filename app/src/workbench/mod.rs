@@ -6,8 +6,12 @@
 //! Each part keeps its own state, provided through context, and its own saved record through a
 //! [`Store`] (the storage sync of the module, in one place per record).
 
+pub mod backup;
 pub mod library;
+pub mod library_view;
 pub mod runs;
+pub mod share;
+pub mod share_view;
 
 use crate::bridge;
 use crate::records;
@@ -60,6 +64,7 @@ pub fn WorkbenchView() -> impl IntoView {
     // Every part's state first, so any part may use another's.
     provide_context(runs::Runs::new(wb));
     provide_context(library::Library::new(wb));
+    provide_context(library_view::Shelf::new(wb, expect_context::<library::Library>()));
     let shown = window_event_listener_untyped(bridge::SHOWN_EVENT, move |_| wb.refresh());
     on_cleanup(move || shown.remove());
     let units = window_event_listener_untyped(bridge::UNITS_EVENT, move |_| wb.units.set(bridge::units()));
@@ -71,6 +76,7 @@ pub fn WorkbenchView() -> impl IntoView {
                 <p class="notice" role="status">{move || notice.get()}</p>
             </Show>
             <p class="error" role="alert">{move || wb.store.unsaved()}</p>
+            <library_view::SavedParts />
             <runs::RunLog />
         </div>
     }

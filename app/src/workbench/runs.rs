@@ -172,3 +172,21 @@ pub fn RunLog() -> impl IntoView {
         </section>
     }
 }
+
+impl Runs {
+    /// Adds the `incoming` runs not already in the log (equal in every field); (added, skipped).
+    pub fn merge(&self, incoming: Vec<RunRecord>) -> (usize, usize) {
+        let (mut added, mut skipped) = (0, 0);
+        self.runs.update(|log| {
+            for run in incoming {
+                if log.contains(&run) {
+                    skipped += 1;
+                } else {
+                    log.push(run);
+                    added += 1;
+                }
+            }
+        });
+        (added, skipped)
+    }
+}
