@@ -6,9 +6,13 @@
 //! Each part keeps its own state, provided through context, and its own saved record through a
 //! [`Store`] (the storage sync of the module, in one place per record).
 
+pub mod backup;
 pub mod compare;
 pub mod library;
+pub mod library_view;
 pub mod runs;
+pub mod share;
+pub mod share_view;
 pub mod tables;
 
 use crate::bridge;
@@ -62,6 +66,7 @@ pub fn WorkbenchView() -> impl IntoView {
     // Every part's state first, so any part may use another's.
     provide_context(runs::Runs::new(wb));
     provide_context(library::Library::new(wb));
+    provide_context(library_view::Shelf::new(wb, expect_context::<library::Library>()));
     let shown = window_event_listener_untyped(bridge::SHOWN_EVENT, move |_| wb.refresh());
     on_cleanup(move || shown.remove());
     let units = window_event_listener_untyped(bridge::UNITS_EVENT, move |_| wb.units.set(bridge::units()));
@@ -73,6 +78,7 @@ pub fn WorkbenchView() -> impl IntoView {
                 <p class="notice" role="status">{move || notice.get()}</p>
             </Show>
             <p class="error" role="alert">{move || wb.store.unsaved()}</p>
+            <library_view::SavedParts />
             <runs::RunLog />
             <compare::Compare />
             <tables::Tables />

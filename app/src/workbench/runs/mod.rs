@@ -59,6 +59,14 @@ impl Runs {
         Ok(outcome.words())
     }
 
+    /// Adds `incoming` runs without overwriting (see [`log::merge`]); (added, skipped).
+    pub fn merge(&self, mut incoming: Vec<RunRecord>) -> (usize, usize) {
+        log::fill_missing_lots(&mut incoming, &self.lot_pattern.get_untracked());
+        let mut outcome = log::Merged::default();
+        self.runs.update(|list| outcome = log::merge(list, incoming));
+        (outcome.added, outcome.skipped)
+    }
+
     /// The run logs waiting in the inbox (only this part's kind; the others stay queued).
     fn take_handed_over(&self) {
         for text in bridge::take_inbox_of(bridge::INBOX_RUNLOG) {
