@@ -16,9 +16,15 @@ started.catch((err) => {
 // The first-still designer and the workbench are modules of their own, each loaded the first
 // time its tab is opened (the page calls these), so a first visit downloads only what a first
 // plan needs.
-function lazyModule(stem, rootId, what) {
+function lazyModule(stem, rootId, what, styles) {
   let loading = null;
   return () => {
+    if (styles && !document.querySelector('link[href="' + styles + '"]')) {
+      const link = document.createElement("link");
+      link.rel = "stylesheet";
+      link.href = styles;
+      document.head.append(link);
+    }
     loading ??= import("./" + stem + ".js")
       .then((m) => m.default({ module_or_path: new URL("./" + stem + "_bg.wasm", import.meta.url) }))
       .catch((err) => {
@@ -30,7 +36,8 @@ function lazyModule(stem, rootId, what) {
   };
 }
 window.stillroomFirstStill = lazyModule("stillroom_first_still", "first-still-root", "first-still designer");
-window.stillroomWorkbench = lazyModule("stillroom_workbench", "workbench-root", "workbench");
+// The workbench brings its own stylesheet, kept out of the first load.
+window.stillroomWorkbench = lazyModule("stillroom_workbench", "workbench-root", "workbench", "./workbench.css");
 
 // A new version's service worker installs in the background and then waits. The grower is told,
 // and it takes over only when they tap "Use the new version" (never in the middle of an entry);

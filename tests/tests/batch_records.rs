@@ -249,7 +249,9 @@ async fn three_runs_calibrate_the_plan_and_the_log_travels() -> Result<(), BoxEr
     assert_eq!(shown["fields"], 0, "{shown}");
     let sheet = shown["sheet"].as_str().unwrap_or_default();
     assert!(sheet.contains(&first) && sheet.contains("Oil collected") && sheet.contains("244 mL"), "{shown}");
-    // Printing fires `afterprint`, which leaves print mode: each paper is a fresh tap.
+    // Back on screen to tap (print media hides every button); printing to PDF uses print media
+    // by itself. Printing fires `afterprint`, which leaves print mode: each paper is a fresh tap.
+    page.cdp("Emulation.setEmulatedMedia", json!({ "media": "" })).await?;
     for (i, (paper, (w, h))) in [("A4", (8.27, 11.69)), ("US Letter", (8.5, 11.0))].into_iter().enumerate() {
         if i > 0 {
             c.find(Locator::Css(".run-card .run-print")).await?.click().await?;
@@ -270,7 +272,6 @@ async fn three_runs_calibrate_the_plan_and_the_log_travels() -> Result<(), BoxEr
             .await?;
         assert_eq!(after, json!(["", false]), "{paper}: print mode is left after printing");
     }
-    page.cdp("Emulation.setEmulatedMedia", json!({ "media": "" })).await?;
     page.close().await?;
 
     // A fresh browser profile: the log imported, then again (nothing twice).

@@ -51,7 +51,7 @@ async fn the_page_in_use_breaks_no_rule_of_its_policy_and_asks_no_other_origin()
     c.execute("localStorage.clear(); localStorage.setItem('stillroom.scenario', '{broken');", vec![]).await?;
     c.refresh().await?;
     c.wait().at_most(WAIT).for_element(Locator::Css("[data-kept='0']")).await?;
-    // Use it: fields, pickers, the own compound, the plan as text, the chart and panels.
+    // Use it: fields, pickers, the own compound, the chart and panels, the workbench.
     let mass = c.find(Locator::Id("f-plant_mass")).await?;
     mass.clear().await?;
     mass.send_keys("18").await?;
@@ -62,7 +62,10 @@ async fn the_page_in_use_breaks_no_rule_of_its_policy_and_asks_no_other_origin()
         vec![],
     )
     .await?;
-    c.wait().at_most(WAIT).for_element(Locator::Id("scenario-out")).await?;
+    // The workbench module too: its plan as text is drawn once it has loaded and read the form.
+    c.find(Locator::Id("mode-workbench")).await?.click().await?;
+    c.wait().at_most(WAIT).for_element(Locator::Id("plan-text")).await?;
+    c.find(Locator::Id("mode-plan")).await?.click().await?;
     c.find(Locator::Css("[data-kept='0'] .kept-delete")).await?.click().await?;
     // The service worker is part of the page: wait until it controls it.
     let ready = c

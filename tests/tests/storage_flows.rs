@@ -332,10 +332,15 @@ async fn kept_copies_can_be_downloaded_opened_and_deleted_after_a_second_tap() -
     wait_text(c, "[data-kept='1']", &["Saved run log", "EOF"]).await?;
     c.find(Locator::Css("[data-kept='0'] .kept-download")).await?.click().await?;
     assert_eq!(last_download(c).await?.1, plan);
+    // Opening a kept plan adds it to the workbench's saved plans; the form is not touched.
     c.find(Locator::Css("[data-kept='0'] .kept-open")).await?.click().await?;
-    wait_text(c, "[data-kept='0']", &["Opened"]).await?;
+    wait_text(c, "#shelf-said", &["The kept copy is saved as “Kept plan, ", "form is unchanged"]).await?;
+    let library = wait_stored(c, "stillroom.library", |t| t.contains("77.125")).await?;
+    assert!(library.contains("\"name\":\"Kept plan, "), "{library}");
     let mass = c.find(Locator::Id("f-plant_mass")).await?.prop("value").await?;
-    assert_eq!(mass.as_deref(), Some("77.125"));
+    assert_eq!(mass.as_deref(), Some("15"));
+    c.find(Locator::Id("mode-plan")).await?.click().await?;
+    wait_text(c, "[data-kept='0']", &["Opened"]).await?;
     c.find(Locator::Css("[data-kept='1'] .kept-open")).await?.click().await?;
     wait_text(c, "[data-kept='1']", &["still cannot be read"]).await?;
     // Delete asks first; "Keep it" keeps it.

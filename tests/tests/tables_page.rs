@@ -344,13 +344,12 @@ async fn saved_plans_side_by_side_show_the_cores_numbers_and_mark_what_differs()
             vec![],
         )
         .await?;
-    let table: std::collections::BTreeMap<String, (String, String, Vec<(String, String)>)> =
-        serde_json::from_value(v)?;
+    let table: std::collections::BTreeMap<String, CompareRow> = serde_json::from_value(v)?;
 
     // The core's own plans of the three, read here natively.
     let planned: Vec<_> = [&home, &hill, &big].iter().map(|s| stillroom_core::plan(s).unwrap()).collect();
     assert!(stillroom_core::plan(&broken).is_err());
-    let expect: [(&str, fn(&stillroom_core::Plan) -> f64); 7] = [
+    let expect: [(&str, Answer); 7] = [
         ("steam", |p| p.ranges.steam_kg.central),
         ("water", |p| p.ranges.water_total_kg.central),
         ("boiling", |p| p.site.water_boiling_point_c),
@@ -391,6 +390,7 @@ async fn saved_plans_side_by_side_show_the_cores_numbers_and_mark_what_differs()
     assert_eq!((altitude[0].0.as_str(), altitude[1].0.as_str()), (home_m.as_str(), "1500 m"));
 
     // On a phone the plans scroll sideways under a label column that stays put.
+    phone(&page).await?;
     let layout = c
         .execute(
             "const w = document.querySelector('.compare-scroll'); const th = document.querySelector('#compare-table .label-col');
@@ -417,3 +417,8 @@ async fn saved_plans_side_by_side_show_the_cores_numbers_and_mark_what_differs()
     phone(&page).await?;
     page.close().await
 }
+
+/// One row of the comparison as the page draws it: (differs mark, label, [(shown, SI value)]).
+type CompareRow = (String, String, Vec<(String, String)>);
+/// A headline answer read off a plan, SI.
+type Answer = fn(&stillroom_core::Plan) -> f64;
