@@ -3,6 +3,8 @@
 
 #[cfg(not(target_arch = "wasm32"))]
 pub mod browser;
+#[cfg(not(target_arch = "wasm32"))]
+pub mod drive;
 
 /// The error type the end-to-end tests return.
 pub type BoxError = Box<dyn std::error::Error + Send + Sync + 'static>;

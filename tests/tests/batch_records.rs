@@ -9,29 +9,15 @@ use fantoccini::{Client, Locator};
 use serde_json::{Value, json};
 use std::time::{Duration, Instant};
 use stillroom_tests::BoxError;
-use stillroom_tests::browser::{self, Page, WAIT, wait_text};
+use stillroom_tests::browser::{self, Page, WAIT, pdf_pages, wait_text};
+use stillroom_tests::drive::{self, count, fill, wait_count};
 
-/// Records the downloads the page offers instead of saving them (as in `storage_flows.rs`), and
-/// counts `window.print()` calls without opening a print dialogue.
-const CAPTURE: &str = r#"
-    window.__downloads = [];
-    const make = URL.createObjectURL;
-    URL.createObjectURL = function (blob) {
-      const url = make.call(URL, blob);
-      window.__downloads.push({ url, blob, name: null });
-      return url;
-    };
-    HTMLAnchorElement.prototype.click = function () {
-      const last = window.__downloads[window.__downloads.length - 1];
-      if (this.download && last && last.url === this.href) { last.name = this.download; return; }
-      HTMLElement.prototype.click.call(this);
-    };
-    window.__printed = 0;
-    window.print = function () { window.__printed += 1; };
-"#;
+/// Counts `window.print()` calls without opening a print dialogue.
+const COUNT_PRINTS: &str = "window.__printed = 0; window.print = function () { window.__printed += 1; };";
 
 async fn start(page: &Page, runs: Option<&str>) -> Result<(), BoxError> {
-    page.before_load(CAPTURE).await?;
+    page.before_load(drive::CAPTURE_DOWNLOADS).await?;
+    page.before_load(COUNT_PRINTS).await?;
     page.goto("").await?;
     page.client.execute("localStorage.clear();", vec![]).await?;
     if let Some(raw) = runs {
@@ -50,30 +36,8 @@ async fn open_workbench(c: &Client) -> Result<(), BoxError> {
     Ok(())
 }
 
-async fn type_in(c: &Client, id: &str, text: &str) -> Result<(), BoxError> {
-    let input = c.find(Locator::Id(id)).await?;
-    input.clear().await?;
-    input.send_keys(text).await?;
-    Ok(())
-}
-
 async fn value(c: &Client, id: &str) -> Result<String, BoxError> {
     Ok(c.find(Locator::Id(id)).await?.prop("value").await?.unwrap_or_default())
-}
-
-async fn count(c: &Client, css: &str) -> Result<usize, BoxError> {
-    Ok(c.find_all(Locator::Css(css)).await?.len())
-}
-
-async fn wait_count(c: &Client, css: &str, n: usize) -> Result<(), BoxError> {
-    let start = Instant::now();
-    while count(c, css).await? != n {
-        if start.elapsed() > WAIT {
-            return Err(format!("{css}: wanted {n}, page has {}", count(c, css).await?).into());
-        }
-        tokio::time::sleep(Duration::from_millis(50)).await;
-    }
-    Ok(())
 }
 
 /// Logs one run: charge kg, minutes, oil mL, and optionally an earlier (minutes, mL).
@@ -85,12 +49,12 @@ async fn log_run(
     earlier: Option<(&str, &str)>,
 ) -> Result<(), BoxError> {
     let before = count(c, ".run-card").await?;
-    type_in(c, "run-mass", kg).await?;
-    type_in(c, "run-minutes", min).await?;
-    type_in(c, "run-oil", ml).await?;
+    fill(c, "#run-mass", kg).await?;
+    fill(c, "#run-minutes", min).await?;
+    fill(c, "#run-oil", ml).await?;
     if let Some((t, v)) = earlier {
-        type_in(c, "run-early-min", t).await?;
-        type_in(c, "run-early-oil", v).await?;
+        fill(c, "#run-early-min", t).await?;
+        fill(c, "#run-early-oil", v).await?;
     }
     c.find(Locator::Id("run-log")).await?.click().await?;
     wait_count(c, ".run-card", before + 1).await
@@ -101,47 +65,6 @@ fn first_number(text: &str) -> f64 {
     let start = text.find(|c: char| c.is_ascii_digit()).unwrap_or(0);
     let digits: String = text[start..].chars().take_while(|c| c.is_ascii_digit() || *c == '.').collect();
     digits.parse().unwrap_or(f64::NAN)
-}
-
-/// The last file the page offered: (file name, text).
-async fn last_download(c: &Client) -> Result<(String, String), BoxError> {
-    let v = c
-        .execute_async(
-            r#"const done = arguments[arguments.length - 1];
-               const d = window.__downloads[window.__downloads.length - 1];
-               if (!d) { done(null); } else { d.blob.text().then((t) => done([d.name, t])); }"#,
-            vec![],
-        )
-        .await?;
-    let pair: Option<(String, String)> = serde_json::from_value(v)?;
-    pair.ok_or_else(|| "the page offered no download".into())
-}
-
-/// Standard base64 (RFC 4648 §4), for the PDF DevTools returns.
-fn base64(text: &str) -> Vec<u8> {
-    let digit = |c: u8| match c {
-        b'A'..=b'Z' => Some(c - b'A'),
-        b'a'..=b'z' => Some(c - b'a' + 26),
-        b'0'..=b'9' => Some(c - b'0' + 52),
-        b'+' => Some(62),
-        b'/' => Some(63),
-        _ => None,
-    };
-    let bits: Vec<u8> = text.bytes().filter_map(digit).collect();
-    bits.chunks(4)
-        .flat_map(|q| {
-            let n = q.iter().enumerate().fold(0u32, |n, (i, d)| n | u32::from(*d) << (18 - 6 * i));
-            let bytes = [(n >> 16) as u8, (n >> 8) as u8, n as u8];
-            bytes.into_iter().take(q.len().saturating_sub(1))
-        })
-        .collect()
-}
-
-/// Pages of a PDF: its `/Type /Page` objects (not `/Pages`).
-fn pdf_pages(pdf: &[u8]) -> usize {
-    let text = String::from_utf8_lossy(pdf);
-    text.match_indices("/Type /Page").filter(|(i, _)| !text[i + 11..].starts_with('s')).count()
-        + text.match_indices("/Type/Page").filter(|(i, _)| !text[i + 10..].starts_with('s')).count()
 }
 
 #[tokio::test]
@@ -165,10 +88,10 @@ async fn three_runs_calibrate_the_plan_and_the_log_travels() -> Result<(), BoxEr
     log_run(c, "20", "60", "226", Some(("15", "112"))).await?;
     log_run(c, "20", "100", "244", None).await?;
     // A lot already in the log is refused beside its field.
-    type_in(c, "run-lot", &lot).await?;
-    type_in(c, "run-mass", "20").await?;
-    type_in(c, "run-minutes", "40").await?;
-    type_in(c, "run-oil", "190").await?;
+    fill(c, "#run-lot", &lot).await?;
+    fill(c, "#run-mass", "20").await?;
+    fill(c, "#run-minutes", "40").await?;
+    fill(c, "#run-oil", "190").await?;
     c.find(Locator::Id("run-log")).await?.click().await?;
     wait_text(c, "#run-lot-error", |t| t.contains("already in your log")).await?;
     assert_eq!(count(c, ".run-card").await?, 3);
@@ -197,7 +120,7 @@ async fn three_runs_calibrate_the_plan_and_the_log_travels() -> Result<(), BoxEr
     assert!((typed_k - k).abs() < 0.0006, "{typed_k} against {rate}");
     wait_text(c, "[data-out=oil_mass]", |t| !t.is_empty() && t != oil_before).await?;
     // Another oil content: the note goes.
-    type_in(c, "f-oil_content", "1.5").await?;
+    fill(c, "#f-oil_content", "1.5").await?;
     let start_wait = Instant::now();
     while c.find(Locator::Css("[data-warning=own_calibration]")).await.is_ok() {
         assert!(start_wait.elapsed() < WAIT, "the note stays after the content changed");
@@ -214,7 +137,7 @@ async fn three_runs_calibrate_the_plan_and_the_log_travels() -> Result<(), BoxEr
 
     // CSV: a header and a line a run, metric units named.
     c.find(Locator::Id("run-export-csv")).await?.click().await?;
-    let (name, csv) = last_download(c).await?;
+    let (name, csv) = drive::last_download(c).await?;
     assert!(name.ends_with(".csv"), "{name}");
     let lines: Vec<&str> = csv.lines().collect();
     assert!(lines[0].starts_with("lot,date,crop,plant_part,charge_kg,distilled_min"), "{csv}");
@@ -226,7 +149,7 @@ async fn three_runs_calibrate_the_plan_and_the_log_travels() -> Result<(), BoxEr
 
     // The log as JSON: the run-log record, version 2.
     c.find(Locator::Id("run-export")).await?.click().await?;
-    let (name, exported) = last_download(c).await?;
+    let (name, exported) = drive::last_download(c).await?;
     assert!(name.ends_with(".json"), "{name}");
     let record: Value = serde_json::from_str(&exported)?;
     assert_eq!(record["record_version"], 2);
@@ -252,12 +175,12 @@ async fn three_runs_calibrate_the_plan_and_the_log_travels() -> Result<(), BoxEr
     // Back on screen to tap (print media hides every button); printing to PDF uses print media
     // by itself. Printing fires `afterprint`, which leaves print mode: each paper is a fresh tap.
     page.cdp("Emulation.setEmulatedMedia", json!({ "media": "" })).await?;
-    for (i, (paper, (w, h))) in [("A4", (8.27, 11.69)), ("US Letter", (8.5, 11.0))].into_iter().enumerate() {
+    for (i, sheet) in [browser::A4, browser::LETTER].into_iter().enumerate() {
+        let paper = sheet.name;
         if i > 0 {
             c.find(Locator::Css(".run-card .run-print")).await?.click().await?;
         }
-        let pdf = page.cdp("Page.printToPDF", json!({ "paperWidth": w, "paperHeight": h })).await?;
-        let bytes = base64(pdf["data"].as_str().unwrap_or_default());
+        let bytes = page.print_pdf(sheet).await?;
         assert!(bytes.starts_with(b"%PDF"), "{paper}: not a PDF");
         std::fs::write(
             std::env::temp_dir().join(format!("stillroom-batch-{}.pdf", paper.replace(' ', "-"))),

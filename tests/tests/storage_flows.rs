@@ -6,29 +6,11 @@ use fantoccini::{Client, Locator};
 use serde_json::{Value, json};
 use std::time::{Duration, Instant};
 use stillroom_tests::BoxError;
-use stillroom_tests::browser::{self, Page};
-
-const WAIT: Duration = Duration::from_secs(15);
-
-/// Records every download the page offers (the Blob behind the object URL and the file name)
-/// instead of saving it to disk.
-const CAPTURE_DOWNLOADS: &str = r#"
-    window.__downloads = [];
-    const make = URL.createObjectURL;
-    URL.createObjectURL = function (blob) {
-      const url = make.call(URL, blob);
-      window.__downloads.push({ url, blob, name: null });
-      return url;
-    };
-    HTMLAnchorElement.prototype.click = function () {
-      const last = window.__downloads[window.__downloads.length - 1];
-      if (this.download && last && last.url === this.href) { last.name = this.download; return; }
-      HTMLElement.prototype.click.call(this);
-    };
-"#;
+use stillroom_tests::browser::{self, Page, WAIT};
+use stillroom_tests::drive::{self, last_download, stored, wait_stored};
 
 async fn start(page: &Page) -> Result<(), BoxError> {
-    page.before_load(CAPTURE_DOWNLOADS).await?;
+    page.before_load(drive::CAPTURE_DOWNLOADS).await?;
     page.goto("").await?;
     page.client.execute("localStorage.clear();", vec![]).await?;
     reload(page).await
@@ -80,26 +62,6 @@ async fn set_field(c: &Client, key: &str, value: &str) -> Result<(), BoxError> {
     Ok(())
 }
 
-async fn stored(c: &Client, key: &str) -> Result<Option<String>, BoxError> {
-    let v = c.execute("return localStorage.getItem(arguments[0]);", vec![json!(key)]).await?;
-    Ok(v.as_str().map(str::to_string))
-}
-
-/// Polls a stored record until `test` holds.
-async fn wait_stored(c: &Client, key: &str, test: impl Fn(&str) -> bool) -> Result<String, BoxError> {
-    let start = Instant::now();
-    loop {
-        let got = stored(c, key).await?.unwrap_or_default();
-        if test(&got) {
-            return Ok(got);
-        }
-        if start.elapsed() > WAIT {
-            return Err(format!("{key} never matched: {}", &got[..got.len().min(300)]).into());
-        }
-        tokio::time::sleep(Duration::from_millis(50)).await;
-    }
-}
-
 /// The kept-aside copies in storage: their texts, by key order.
 async fn kept(c: &Client) -> Result<Vec<String>, BoxError> {
     let v = c
@@ -110,20 +72,6 @@ async fn kept(c: &Client) -> Result<Vec<String>, BoxError> {
         )
         .await?;
     Ok(serde_json::from_value(v)?)
-}
-
-/// The last file the page offered: (file name, text).
-async fn last_download(c: &Client) -> Result<(String, String), BoxError> {
-    let v = c
-        .execute_async(
-            r#"const done = arguments[arguments.length - 1];
-               const d = window.__downloads[window.__downloads.length - 1];
-               if (!d) { done(null); } else { d.blob.text().then((t) => done([d.name, t])); }"#,
-            vec![],
-        )
-        .await?;
-    let pair: Option<(String, String)> = serde_json::from_value(v)?;
-    pair.ok_or_else(|| "the page offered no download".into())
 }
 
 async fn plans(c: &Client) -> Result<(), BoxError> {
@@ -272,7 +220,7 @@ async fn a_save_into_full_storage_is_told_at_once_and_offered_as_a_download() ->
 #[tokio::test]
 async fn with_no_storage_at_all_the_page_works_and_says_so() -> Result<(), BoxError> {
     let page = browser::open().await?;
-    page.before_load(CAPTURE_DOWNLOADS).await?;
+    page.before_load(drive::CAPTURE_DOWNLOADS).await?;
     page.before_load(
         "Object.defineProperty(window, 'localStorage', { configurable: true,
              get() { throw new DOMException('The operation is insecure.', 'SecurityError'); } });",

@@ -10,50 +10,7 @@ use std::time::{Duration, Instant};
 use stillroom_core::Scenario;
 use stillroom_tests::BoxError;
 use stillroom_tests::browser::{self, Page, WAIT, wait_text};
-
-/// Records every download the page offers (the Blob behind the object URL and the file name)
-/// instead of saving it to disk.
-const CAPTURE_DOWNLOADS: &str = r#"
-    window.__downloads = [];
-    const make = URL.createObjectURL;
-    URL.createObjectURL = function (blob) {
-      const url = make.call(URL, blob);
-      window.__downloads.push({ url, blob, name: null });
-      return url;
-    };
-    HTMLAnchorElement.prototype.click = function () {
-      const last = window.__downloads[window.__downloads.length - 1];
-      if (this.download && last && last.url === this.href) { last.name = this.download; return; }
-      HTMLElement.prototype.click.call(this);
-    };
-"#;
-
-/// The last file the page offered: (file name, text).
-async fn last_download(c: &Client, before: usize) -> Result<(String, String), BoxError> {
-    let start = Instant::now();
-    loop {
-        let v = c
-            .execute_async(
-                r#"const [before, done] = arguments;
-                   const d = window.__downloads[window.__downloads.length - 1];
-                   if (!d || window.__downloads.length <= before) { done(null); }
-                   else { d.blob.text().then((t) => done([d.name, t])); }"#,
-                vec![json!(before)],
-            )
-            .await?;
-        if let Some(pair) = serde_json::from_value::<Option<(String, String)>>(v)? {
-            return Ok(pair);
-        }
-        if start.elapsed() > WAIT {
-            return Err("the page offered no download".into());
-        }
-        tokio::time::sleep(Duration::from_millis(50)).await;
-    }
-}
-
-async fn downloads(c: &Client) -> Result<usize, BoxError> {
-    Ok(c.execute("return window.__downloads.length;", vec![]).await?.as_u64().unwrap_or(0) as usize)
-}
+use stillroom_tests::drive;
 
 async fn type_into(c: &Client, id: &str, text: &str) -> Result<(), BoxError> {
     let input = c.find(Locator::Id(id)).await?;
@@ -179,7 +136,7 @@ fn close(a: f64, b: f64) -> bool {
 #[tokio::test]
 async fn a_sweep_on_the_page_is_the_command_lines_csv_in_either_units() -> Result<(), BoxError> {
     let page = browser::open().await?;
-    page.before_load(CAPTURE_DOWNLOADS).await?;
+    page.before_load(drive::CAPTURE_DOWNLOADS).await?;
     page.goto("").await?;
     page.client.execute("localStorage.clear();", vec![]).await?;
     page.client.refresh().await?;
@@ -198,9 +155,9 @@ async fn a_sweep_on_the_page_is_the_command_lines_csv_in_either_units() -> Resul
     click(c, "sweep-col-steam").await?;
     click(c, "sweep-make").await?;
     c.wait().at_most(WAIT).for_element(Locator::Css("#sweep-table tbody tr[data-row='6']")).await?;
-    let n = downloads(c).await?;
+    let n = drive::download_count(c).await?;
     click(c, "sweep-csv").await?;
-    let (name, csv) = last_download(c, n).await?;
+    let (name, csv) = drive::download_after(c, n).await?;
     assert!(name.ends_with(".csv"), "{name}");
 
     let file = saved_scenario_file(c, "sweep").await?;
@@ -264,9 +221,9 @@ async fn a_sweep_on_the_page_is_the_command_lines_csv_in_either_units() -> Resul
     assert!(head.contains("(ft)"), "{head}");
     click(c, "sweep-make").await?;
     c.wait().at_most(WAIT).for_element(Locator::Css("#sweep-table tbody tr[data-row='6']")).await?;
-    let n = downloads(c).await?;
+    let n = drive::download_count(c).await?;
     click(c, "sweep-csv").await?;
-    let (_, us_csv) = last_download(c, n).await?;
+    let (_, us_csv) = drive::download_after(c, n).await?;
     // The same SI sweep: the same CSV as the metric page made, byte for byte.
     assert_eq!(us_csv, csv, "the CSV made in US units differs from the one made in metric");
     same_csv(&us_csv, &cli)?;
