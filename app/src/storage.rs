@@ -151,12 +151,18 @@ pub fn local_time(ms: f64) -> String {
     )
 }
 
+/// The media type a download is offered as, from its file name: spreadsheets open a `.csv` as
+/// a table only when it is labelled as one.
+pub fn media_type(file_name: &str) -> &'static str {
+    if file_name.ends_with(".csv") { "text/csv;charset=utf-8" } else { "application/json" }
+}
+
 /// Offers `text` as a file download (a Blob behind an object URL, clicked through `<a download>`).
 pub fn download(file_name: &str, text: &str) -> Result<(), String> {
     let fail = |what: &str| format!("The download could not start ({what}). Copy the text instead.");
     let parts = js_sys::Array::of1(&wasm_bindgen::JsValue::from_str(text));
     let bag = web_sys::BlobPropertyBag::new();
-    bag.set_type("application/json");
+    bag.set_type(media_type(file_name));
     let blob = web_sys::Blob::new_with_str_sequence_and_options(&parts, &bag).map_err(|_| fail("blob"))?;
     let url = web_sys::Url::create_object_url_with_blob(&blob).map_err(|_| fail("address"))?;
     let document = web_sys::window().and_then(|w| w.document()).ok_or_else(|| fail("no page"))?;

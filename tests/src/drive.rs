@@ -52,6 +52,17 @@ pub async fn download_after(c: &Client, before: usize) -> Result<(String, String
     }
 }
 
+/// The media type of the `index`-th file the page offered (as the Blob was labelled).
+pub async fn download_type(c: &Client, index: usize) -> Result<String, BoxError> {
+    let v = c
+        .execute(
+            "const d = window.__downloads[arguments[0]]; return d ? d.blob.type : null;",
+            vec![json!(index)],
+        )
+        .await?;
+    Ok(v.as_str().ok_or("no such download")?.to_string())
+}
+
 /// The latest file the page offered: (file name, text). Waits for one.
 pub async fn last_download(c: &Client) -> Result<(String, String), BoxError> {
     let n = download_count(c).await?;

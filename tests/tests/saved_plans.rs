@@ -358,6 +358,7 @@ async fn export_everything(page: &Page) -> Result<String, BoxError> {
     tap(c, "#backup-export").await?;
     let (name, text) = drive::download_after(c, n).await?;
     assert!(name.starts_with("stillroom-everything-") && name.ends_with(".json"), "{name}");
+    assert_eq!(drive::download_type(c, n).await?, "application/json");
     Ok(text)
 }
 

@@ -158,6 +158,8 @@ async fn a_sweep_on_the_page_is_the_command_lines_csv_in_either_units() -> Resul
     let n = drive::download_count(c).await?;
     click(c, "sweep-csv").await?;
     let (name, csv) = drive::download_after(c, n).await?;
+    // Labelled as a table, so a spreadsheet opens it as one.
+    assert_eq!(drive::download_type(c, n).await?, "text/csv;charset=utf-8");
     assert!(name.ends_with(".csv"), "{name}");
 
     let file = saved_scenario_file(c, "sweep").await?;
