@@ -175,7 +175,7 @@ impl AppState {
         let pinned = StoredValue::new(vec![None; FIELDS.len()]);
 
         let field_texts = texts.clone();
-        let scenario = Memo::new(move |_| {
+        let scenario = Memo::new(move |prev: Option<&Derived>| {
             let opened = base_signal.get();
             let mut s = opened.clone();
             let mode = pressure_mode.get();
@@ -209,13 +209,25 @@ impl AppState {
                     (f.set)(&mut s, Some(si));
                     continue;
                 }
-                match parse_number(&text) {
+                let fault = match parse_number(&text) {
                     // Units read untracked: a switch rewrites the texts first (see `set_units`).
-                    Ok(Some(v)) => (f.set)(&mut s, Some(f.to_si_in(units.get_untracked(), v))),
-                    Ok(None) if f.optional => (f.set)(&mut s, None),
-                    Ok(None) => text_errors.push((f.key.to_string(), TextError::Empty)),
-                    Err(e) => text_errors.push((f.key.to_string(), e)),
+                    Ok(Some(v)) => {
+                        (f.set)(&mut s, Some(f.to_si_in(units.get_untracked(), v)));
+                        continue;
+                    }
+                    Ok(None) if f.optional => {
+                        (f.set)(&mut s, None);
+                        continue;
+                    }
+                    Ok(None) => TextError::Empty,
+                    Err(e) => e,
+                };
+                // A field being retyped keeps its last readable value, so that is what is saved
+                // (and planned after a reload), not the value the page was opened with.
+                if let Some(p) = prev {
+                    (f.set)(&mut s, (f.get)(&p.scenario));
                 }
+                text_errors.push((f.key.to_string(), fault));
             }
             // The own compound keeps the id it was opened with; a new one is called `own`.
             if name.is_empty() {

@@ -375,6 +375,11 @@ pub fn percent(fraction: f64) -> String {
 /// times water's 999.0 kg/m³ at 60 °F; about 4.23 lb per US gallon.
 pub const PROPANE_LIQUID_KG_PER_M3: f64 = 0.507 * 999.0;
 
+/// Stacked firewood's bulk density, kg/m³: a cord of seasoned mixed hardwood weighs about
+/// 1,800-2,300 kg (from memory; it varies with species and dryness), about 2,000 kg over the
+/// cord's 3.62 m³ of stack. Only for showing a purchase in cords; the plan works in kg.
+pub const FIREWOOD_STACKED_KG_PER_M3: f64 = 2000.0 / sp811::CORD_M3;
+
 /// An amount of fuel, given in the core's sales unit (kg, m³, kWh): metric as it is; US as
 /// propane in lb and gal, natural gas in therms and ft³, firewood in lb, electricity in kWh.
 pub fn fuel(amount: f64, fuel: stillroom_core::heat::Fuel) -> String {
@@ -394,8 +399,22 @@ pub fn fuel(amount: f64, fuel: stillroom_core::heat::Fuel) -> String {
             sig3(amount * data.heating_value_j_per_unit / sp811::THERM_J),
             sig3(amount / sp811::FT3_M3)
         ),
-        Fuel::Firewood => format!("{} lb", sig3(amount / sp811::LB_KG)),
+        Fuel::Firewood => format!(
+            "{} lb (about {} cord)",
+            sig3(amount / sp811::LB_KG),
+            sig3(amount / FIREWOOD_STACKED_KG_PER_M3 / sp811::CORD_M3)
+        ),
         Fuel::Electricity => format!("{} {}", sig3(amount), data.unit),
+    }
+}
+
+/// A cost per millilitre of oil, per the oil's unit in force: " (0.12 per mL of oil)", or per
+/// US fluid ounce (29.57 mL, SP 811).
+pub fn per_oil(cost_per_ml: f64) -> String {
+    if us() {
+        format!(" ({} per fl oz of oil)", sig3(cost_per_ml * sp811::FL_OZ_M3 * 1e6))
+    } else {
+        format!(" ({} per mL of oil)", sig3(cost_per_ml))
     }
 }
 
@@ -428,6 +447,24 @@ mod tests {
         assert_eq!(limit(6000.0, false), "6000");
         assert_eq!(limit(-500.0, true), "−500");
         assert_eq!(limit(202.97, false), "202.9");
+    }
+
+    #[wasm_bindgen_test]
+    fn a_cost_per_oil_follows_the_oils_unit() {
+        assert_eq!(per_oil(0.5), " (0.500 per mL of oil)");
+        // 1 US fl oz = 29.573 53 mL (SP 811).
+        with_system(UnitSystem::UsCustomary, || assert_eq!(per_oil(0.5), " (14.8 per fl oz of oil)"));
+    }
+
+    #[wasm_bindgen_test]
+    fn firewood_is_shown_in_pounds_and_cords_in_us_units() {
+        use stillroom_core::heat::Fuel;
+        // 2000 kg is 4409 lb (1 lb = 0.453 592 37 kg, SP 811), and about one cord at the
+        // stacked density above; metric keeps the core's kg.
+        with_system(UnitSystem::UsCustomary, || {
+            assert_eq!(fuel(2000.0, Fuel::Firewood), "4409 lb (about 1.00 cord)");
+        });
+        assert_eq!(fuel(2000.0, Fuel::Firewood), "2000 kg");
     }
 
     #[wasm_bindgen_test]

@@ -89,6 +89,15 @@ async fn the_four_answers_show_without_scrolling_before_any_input() -> Result<()
         for b in &bottoms {
             assert!(*b <= first_input, "an answer ({b} px) comes after the first input ({first_input} px)");
         }
+        // Each mode tab's label fits inside its button, words unbroken.
+        let spill = c
+            .execute(
+                "return [...document.querySelectorAll('.modes button')]
+                   .filter(b => b.scrollWidth > b.clientWidth).map(b => b.textContent);",
+                vec![],
+            )
+            .await?;
+        assert_eq!(spill, json!([]), "at {w} px these tab labels spill out of their buttons");
     }
     page.close().await
 }
@@ -119,6 +128,10 @@ async fn a_typo_keeps_the_last_plan_marked_stale_and_survives_a_reload() -> Resu
     let mass = c.wait().at_most(WAIT).for_element(Locator::Id("f-plant_mass")).await?;
     assert_eq!(mass.prop("value").await?.as_deref(), Some("6O"));
     wait_text(c, "[data-out=plan_stale]", |t| t.contains("Plant in the still")).await?;
+    // And the answers shown are still those of the last good entry, 6 kg, not of the value the
+    // page was first opened with.
+    wait_text(c, "[data-out=charge_summary]", |t| t.contains("6 kg")).await?;
+    assert_eq!(out(c, "steam_total").await?, before);
     // Fixed, the marking goes and the plan follows the new value.
     set_field(c, "plant_mass", "60").await?;
     wait_text(c, "[data-out=charge_summary]", |t| t.contains("60 kg")).await?;

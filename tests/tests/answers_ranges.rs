@@ -17,6 +17,34 @@ fn duration(s: f64) -> String {
     if h == 0 { format!("{m} min") } else { format!("{h} h {m:02} min") }
 }
 
+/// The range after "likely" in a card's note, in litres ("likely 150 L to 230 L", "708 mL").
+fn litres_range(note: &str) -> Result<(f64, f64), BoxError> {
+    let part = note.rsplit("likely ").next().ok_or("no range")?;
+    let mut out = Vec::new();
+    for side in part.split(" to ") {
+        let mut words = side.split_whitespace();
+        let n: f64 = words.next().ok_or("no number")?.replace(',', "").parse()?;
+        let unit = words.next().ok_or("no unit")?.trim_end_matches([';', ',', '.']);
+        out.push(match unit {
+            "L" => n,
+            "mL" => n / 1000.0,
+            "m³" => n * 1000.0,
+            u => return Err(format!("unit {u:?} in {note:?}").into()),
+        });
+    }
+    match out[..] {
+        [lo, hi] => Ok((lo, hi)),
+        _ => Err(format!("no low and high in {note:?}").into()),
+    }
+}
+
+/// The page rounds to three significant figures: within 0.5 % of the core's figure.
+fn assert_close(shown: (f64, f64), core: (f64, f64), what: &str, note: &str) {
+    for (s, c) in [(shown.0, core.0), (shown.1, core.1)] {
+        assert!((s - c).abs() <= 0.005 * c.abs(), "{what}: page {s} vs core {c} in {note:?}");
+    }
+}
+
 #[tokio::test]
 async fn the_run_shows_its_likely_range_and_the_biggest_doubt() -> Result<(), BoxError> {
     let page = browser::open().await?;
@@ -27,9 +55,29 @@ async fn the_run_shows_its_likely_range_and_the_biggest_doubt() -> Result<(), Bo
     // The invented example (15 kg of lavender at Larkfield Farm), planned natively.
     let p = plan(&Scenario::default()).map_err(|e| e.to_string())?;
     let r = &p.ranges.run_time_s;
-    let want = format!("likely {} to {}", duration(r.low), duration(r.high));
+    let want = format!(
+        "distilling {} ({} to {})",
+        duration(p.run.time_after_first_drop_s),
+        duration(r.low),
+        duration(r.high)
+    );
     let note = wait_text(c, "[data-out=total_time] + .card-note", |t| t.contains("likely")).await?;
     assert!(note.contains(&want), "{note:?} should contain {want:?}");
+    // The whole run's own range comes first, so it is not read as the distilling time's.
+    let t = &p.ranges.total_time_s;
+    let whole = format!("likely {} to {} in all;", duration(t.low), duration(t.high));
+    assert!(note.starts_with(&whole), "{note:?} should start with {whole:?}");
+    // Water used and the separator carry their ranges too, the core's to display precision.
+    let water = wait_text(c, "[data-out=water_total] + .card-note", |t| t.contains("likely")).await?;
+    let w = &p.ranges.water_total_kg;
+    assert_close(litres_range(&water)?, (w.low, w.high), "water used", &water);
+    let sep = wait_text(c, "[data-out=separator_size] + .card-note", |t| t.contains("likely")).await?;
+    let v = &p.ranges.separator_volume_m3;
+    assert_close(litres_range(&sep)?, (v.low * 1000.0, v.high * 1000.0), "separator", &sep);
+    assert!(w.low < w.high && v.low < v.high, "the ranges are not empty");
+    // The biggest doubt is named on the folded line itself, without opening it.
+    let line = wait_text(c, "[data-out=how_sure_line]", |t| !t.is_empty()).await?;
+    assert!(line.starts_with("Mostly ") && line.contains("narrow it"), "{line}");
     // The oil card gives the separable oil's range.
     let oil = wait_text(c, "[data-out=oil_volume] + .card-note", |t| t.contains("likely")).await?;
     assert!(oil.starts_with("separable oil, likely"), "{oil}");

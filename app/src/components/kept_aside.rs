@@ -92,7 +92,7 @@ fn KeptLine(copy: KeptCopy, index: usize) -> impl IntoView {
         match result {
             Ok(inbox) => {
                 to_workbench(mode, inbox, &text);
-                outcome.set(Some(Ok("Opened in “Saved, compare, runs”.".to_string())));
+                outcome.set(Some(Ok("Opened in “Saved, compare & runs”.".to_string())));
             }
             Err(e) => outcome.set(Some(Err(format!("It still cannot be read: {e}.")))),
         }

@@ -78,7 +78,7 @@ pub fn ModeTabs() -> impl IntoView {
     view! {
         <div class="modes" role="tablist" aria-label="What to work out">
             {button(Mode::Plan, "mode-plan", "plan-view", "Plan a run")}
-            {button(Mode::Workbench, "mode-workbench", "workbench-root", "Saved, compare, runs")}
+            {button(Mode::Workbench, "mode-workbench", "workbench-root", "Saved, compare & runs")}
             {button(Mode::FirstStill, "mode-first", "first-still-root", "Design a first still")}
         </div>
         <div id="workbench-root" role="tabpanel" aria-labelledby="mode-workbench" hidden=move || mode.get() != Mode::Workbench>

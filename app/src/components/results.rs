@@ -177,14 +177,14 @@ pub fn Headline() -> impl IntoView {
                     note=from_plan(plan, |p| format!("{} from the boiler; {}", units::kg_per_hour(p.run.steam_rate_kg_per_s), likely(&p.ranges.steam_kg, units::mass))) />
                 <Card label="Water used" out="water_total"
                     value=from_plan(plan, |p| units::volume(p.ranges.water_total_kg.central / 1000.0))
-                    note=from_plan(plan, |p| format!("boiler {} + cooling {}", units::volume(p.water_use.boiler_feed_kg / 1000.0), units::volume(p.water_use.cooling_water_kg / 1000.0))) />
+                    note=from_plan(plan, |p| format!("boiler {} + cooling {}; {}", units::volume(p.water_use.boiler_feed_kg / 1000.0), units::volume(p.water_use.cooling_water_kg / 1000.0), likely(&p.ranges.water_total_kg, |kg| units::volume(kg / 1000.0)))) />
                 <Card label="Water boils here at" out="water_boiling_point"
                     value=from_plan(plan, |p| units::celsius(p.site.water_boiling_point_c))
                     note=from_plan(plan, |p| format!("{} from sea level, at {}", units::kelvin_shift(p.site.boiling_point_shift_k), units::kpa(p.site.pressure_pa))) />
                 <Card label="Separator" out="separator_size"
                     value=from_plan(plan, |p| units::volume(p.separator.volume_m3))
                     note=from_plan(plan, |p| match (p.separator.diameter_m, p.separator.height_m) {
-                        (Some(d), Some(h)) => format!("{} wide × {} high; oil at the {}", units::length(d), units::length(h), layer_word(p.separator.oil_outlet)),
+                        (Some(d), Some(h)) => format!("{} wide × {} high; oil at the {}; {}", units::length(d), units::length(h), layer_word(p.separator.oil_outlet), likely(&p.ranges.separator_volume_m3, units::volume)),
                         _ => "the oil will not part by gravity".to_string(),
                     }) />
                 <Card label="First drop after" out="first_drop"
@@ -192,7 +192,7 @@ pub fn Headline() -> impl IntoView {
                     note=from_plan(plan, |p| format!("the boiler boils after {}", units::duration(p.run.time_to_boil_s))) />
                 <Card label="Whole run" out="total_time"
                     value=from_plan(plan, |p| units::duration(p.run.total_time_s))
-                    note=from_plan(plan, |p| format!("{} of distilling, {}", units::duration(p.run.time_after_first_drop_s), likely(&p.ranges.run_time_s, units::duration))) />
+                    note=from_plan(plan, |p| format!("{} in all; distilling {} ({} to {})", likely(&p.ranges.total_time_s, units::duration), units::duration(p.run.time_after_first_drop_s), units::duration(p.ranges.run_time_s.low), units::duration(p.ranges.run_time_s.high))) />
                 <Card label="Fuel for the run" out="fuel_total"
                     value=from_plan(plan, move |p| units::fuel(p.energy.fuel_amount, fuel_of()))
                     note=from_plan(plan, move |p| likely(&p.ranges.fuel_amount, |v| units::fuel(v, fuel_of()))) />
@@ -268,6 +268,12 @@ fn HowSure() -> impl IntoView {
                             format!("Fuel: mostly {}.", doubt_words(p.ranges.fuel_amount.mostly_from)),
                         ),
                     ];
+                    if p.ranges.failed_ends > 0 {
+                        out.push((
+                            "doubt_left_out",
+                            "Some likely cases could not be planned at all (for example the burner at its weakest cannot keep the still going), so the ranges leave them out: the real spread is wider.".to_string(),
+                        ));
+                    }
                     out.extend(
                         p.warnings
                             .iter()
@@ -282,7 +288,7 @@ fn HowSure() -> impl IntoView {
     view! {
         <Show when=move || !lines().is_empty()>
             <details class="how-sure" data-out="how_sure">
-                <summary>"How sure is this?"</summary>
+                <summary>"How sure is this? " <span data-out="how_sure_line">{move || plan.with(|r| r.as_ref().ok().map(|p| format!("Mostly {}.", doubt_words(p.ranges.run_time_s.mostly_from))))}</span></summary>
                 <p>"Ranges are likely lows and highs (about 1 in 10 either side) from the uncertainty of the published data and of your entries."</p>
                 <ul>{move || lines().into_iter().map(|(k, t)| view! { <li data-note=k>{t}</li> }).collect_view()}</ul>
             </details>
@@ -417,7 +423,7 @@ pub fn Details() -> impl IntoView {
                 <Row label="Cost of the run" out="cost" value=p(|p| match &p.energy.cost {
                     None => "add prices under “Run, season and costs”".to_string(),
                     Some(c) => format!("{} {}{}", units::sig3(c.total), c.currency,
-                        c.per_millilitre_oil.map(|m| format!(" ({} per mL of oil)", units::sig3(m))).unwrap_or_default()),
+                        c.per_millilitre_oil.map(units::per_oil).unwrap_or_default()),
                 }) />
             </dl>
 
