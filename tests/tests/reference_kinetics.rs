@@ -1,9 +1,14 @@
 //! The release-and-carry model against published yield-versus-time points, and the plan's run
 //! following what the grower controls (burner, charge, packing).
 //!
-//! The published points below were typed from the papers' abstracts (the only part seen); they
-//! are the data sets this model can be held to. Tolerance: 5 % of the yield, the precision the
-//! abstracts print.
+//! What data these checks have, said plainly: no published yield-versus-time figure or table has
+//! been seen, so none has been digitised. The only published points at hand are figures quoted in
+//! abstracts (Wesołowska et al.; Zheljazkov et al. 2013; Gawde et al.; the coriander paper, which
+//! is hydrodistillation, not steam distillation), listed with their sources in the project's
+//! reference notes. Two points from one abstract fix the two first-order parameters exactly, so
+//! checks on them hold the integrator, not the model; they are named so below. The check that
+//! holds the steam coupling (`a_steam_limited_clove_run_lasts_as_long_as_the_eugenol_equilibrium_says`)
+//! takes its number from a general-purpose library, not from a yield curve.
 
 use stillroom_core::crops::CROPS;
 use stillroom_core::plan::RunLimit;
@@ -26,11 +31,13 @@ fn share_at(k_per_min: f64, t_min: f64) -> f64 {
 }
 
 #[test]
-fn lavender_points_of_wesolowska() {
-    // Wesołowska, Jadczak & Grzeszczuk, Herba Polonica: steam-distilled L. angustifolia gave 1 %
-    // oil at 40 min and 2 % at 120 min. First order through both gives k = 0.0120 /min and
-    // Y∞ = 2.62 % (arithmetic on the two points). The model, with steam to spare, must pass
-    // through both points with that k.
+fn the_integrator_passes_through_a_two_point_first_order_fit() {
+    // A consistency check of the integrator, not of the model: k and Y∞ are solved from the very
+    // two points checked. Wesołowska, Jadczak & Grzeszczuk, Herba Polonica (abstract only):
+    // steam-distilled L. angustifolia gave 1 % oil at 40 min and 2 % at 120 min. First order
+    // through both gives k = 0.0120 /min and Y∞ = 2.62 %. With steam to spare the stepped
+    // release-and-carry integrator must reproduce the closed-form law through both points within
+    // 5 % (the abstract prints one significant figure).
     let y_inf = 2.62;
     for (t, y) in [(40.0, 1.0), (120.0, 2.0)] {
         let got = y_inf * share_at(0.0120, t);
@@ -39,9 +46,11 @@ fn lavender_points_of_wesolowska() {
 }
 
 #[test]
-fn coriander_points() {
-    // Pol. J. Food Nutr. Sci. 68(3) (2018) 243-249: crushed coriander fruit, 1.20 % at 15 min and
-    // 1.62 % at 2 h (taken as Y∞): k ≈ 0.090 /min.
+fn the_integrator_reproduces_a_hydrodistillation_point() {
+    // Hydrodistillation (Clevenger/Deryng apparatus), not steam distillation, and a consistency
+    // check of the integrator only: Pol. J. Food Nutr. Sci. 68(3) (2018) 243-249 (abstract):
+    // crushed coriander fruit, 1.20 % at 15 min and 1.62 % at 2 h; taking the 2 h value as Y∞
+    // gives k ≈ 0.090 /min from the same point that is checked, within 5 %.
     let got = 1.62 * share_at(0.090, 15.0);
     assert!((got - 1.20).abs() <= 0.05 * 1.20, "{got}");
 }
@@ -101,6 +110,35 @@ fn more_steam_shortens_the_run_and_a_bigger_charge_lengthens_it() {
 }
 
 #[test]
+fn a_steam_limited_clove_run_lasts_as_long_as_the_eugenol_equilibrium_says() {
+    // Source of the number: the ideal immiscible equilibrium of eugenol with water at one
+    // atmosphere needs at least about 25 kg steam per kg of oil, computed with the general-purpose
+    // libraries thermo 0.6.1 and CoolProp 8.0.0 (the clove-bud preset's source notes). Eugenol
+    // boils lowest of the oil's three main compounds (eugenol 254 °C, β-caryophyllene about
+    // 262 °C, eugenyl acetate about 281 °C), so no part of the oil needs less; the oil's heavier
+    // molecules can lower the figure by a few per cent, hence 5 % taken off. The steam leaving
+    // the charge carries at most the vaporisation efficiency times its saturation load, so over
+    // the run the distillate must hold at least 0.95 × 25 / η kg of water per kg of oil carried.
+    // At 3 kW the first-order release alone (ln 20 / k, 10 h for clove) would end the run with
+    // far less steam than that; the plan must not. Tried: with the run length put back to
+    // ln 20 / k this test fails (1.98 kg/h of distillate for 10 h is about 9 kg per kg of oil).
+    for heat_w in [3_000.0, 8_000.0] {
+        let (minutes, p) = run_minutes("clove-bud", heat_w, 15.0);
+        let steam_per_oil = p.run.distillate_steam_kg / p.yield_estimate.carried_over_kg;
+        let least = 0.95 * 25.0 / p.run.vaporisation_efficiency;
+        assert!(
+            steam_per_oil >= least,
+            "{heat_w} W: {steam_per_oil:.1} kg/kg in {minutes:.0} min, below {least:.1}"
+        );
+        assert_eq!(p.run.limited_by, RunLimit::Steam, "{heat_w} W");
+        // The time follows: at least the least steam over the distillate rate.
+        let floor_min =
+            least * p.yield_estimate.carried_over_kg / p.run.distillate_steam_rate_kg_per_s / 60.0;
+        assert!(minutes >= floor_min, "{heat_w} W: {minutes:.0} min below {floor_min:.0}");
+    }
+}
+
+#[test]
 fn an_overpacked_still_runs_longer_not_only_warns() {
     // Channelling: steam bypasses part of an overpacked charge (common practice, no source); the
     // plan lowers the steam's effective load and the run lengthens.
@@ -129,6 +167,7 @@ fn every_headline_has_a_range_around_it_and_a_typed_content_has_a_spread() {
             ("steam", &r.steam_kg),
             ("run", &r.run_time_s),
             ("total", &r.total_time_s),
+            ("water", &r.water_total_kg),
             ("fuel", &r.fuel_amount),
             ("cooling", &r.cooling_water_kg),
             ("oil", &r.oil_kg),
