@@ -75,7 +75,8 @@ fn the_schemas_printed_are_the_published_ones() {
     for name in ["sizing_request", "design"] {
         let (ok, out, err) = run(&["schema", name], "");
         assert!(ok, "{err}");
-        let path = PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("schema").join(format!("{name}.schema.json"));
+        let path =
+            PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("schema").join(format!("{name}.schema.json"));
         let published = std::fs::read_to_string(&path).unwrap();
         assert_eq!(out, published, "{name}");
     }
