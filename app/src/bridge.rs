@@ -25,6 +25,10 @@ pub const INBOX_LINK: &str = "link";
 pub const INBOX_PLAN: &str = "plan";
 pub const INBOX_RUNLOG: &str = "runlog";
 pub const INBOX_LIBRARY: &str = "library";
+/// A designed still (a scenario's JSON) for the workbench to keep under "Saved stills".
+pub const INBOX_STILL: &str = "still";
+/// The workbench module's loader on the window (`public/start.js`).
+pub const WORKBENCH_LOADER: &str = "stillroomWorkbench";
 
 const INBOX: &str = "stillroomInbox";
 const CURRENT_PLAN: &str = "stillroomCurrentPlan";

@@ -1,6 +1,7 @@
 //! Designing a first still through the built release page in headless Chromium: switch to the
 //! mode, type a request, read the design and compare it with the core's `size` run natively on
-//! the same request; a bad field's message; "use this design" filling the ordinary plan.
+//! the same request; a bad field's message; the page's units (US customary in and out, the
+//! same design underneath); "use this design" filling the ordinary plan and saving the still.
 
 use fantoccini::{Client, Locator};
 use std::time::Duration;
@@ -11,6 +12,43 @@ use stillroom_core::sizing::{
 };
 use stillroom_tests::BoxError;
 use stillroom_tests::browser::{self, wait_text};
+use stillroom_tests::drive;
+
+/// NIST SP 811 Appendix B.8: 1 lb = 0.453 592 37 kg, 1 gal = 3.785 411 784 L.
+const LB_KG: f64 = 0.453_592_37;
+const GAL_M3: f64 = 3.785_411_784e-3;
+
+/// The form's starting entries: the invented Larkfield request of DEVELOPERS.md (40 kg of
+/// lavender a day for 20 days at 300 m, propane, 15 °C water, two charges of at most 3 h, the
+/// tub no warmer than 45 °C).
+fn larkfield(kg_per_day: f64) -> SizingRequest {
+    SizingRequest {
+        crop: Some("lavender".into()),
+        base: None,
+        harvest: Harvest::PerDay { kg_per_day, days: Some(20) },
+        site: SiteRequest { altitude_m: 300.0, ambient_temperature_c: None },
+        heat: HeatSupply::Fuel {
+            fuel: stillroom_core::heat::Fuel::Propane,
+            appliance: None,
+            max_heat_input_w: None,
+        },
+        cooling: CoolingSupply {
+            inlet_c: 15.0,
+            max_flow_kg_per_s: None,
+            condenser: CondenserKind::CoilInTub,
+            tube_standard: TubeStandard::Metric,
+        },
+        limits: Limits {
+            max_charges_per_day: 2,
+            max_run_s: 3.0 * 3600.0,
+            max_water_per_run_kg: None,
+            warmest_cooling_water_c: 45.0,
+            working_day_s: None,
+        },
+        packing_density_kg_per_m3: None,
+        steam_rate_kg_per_h_per_kg: None,
+    }
+}
 
 const WAIT: Duration = Duration::from_secs(20);
 
@@ -199,6 +237,8 @@ async fn use_this_design_fills_the_plan_after_asking() -> Result<(), BoxError> {
     // The form's own starting entries (the invented Larkfield lavender, see its note).
     c.wait().at_most(WAIT).for_element(Locator::Css("[data-out=fs_charge][data-si]")).await?;
     let charge_kg = card_si(c, "fs_charge").await?;
+    let (still_m3, heat_w, tube_m) =
+        (card_si(c, "fs_still").await?, card_si(c, "fs_heat").await?, card_si(c, "fs_condenser").await?);
     click(c, "fs-use").await?;
     // It asks first, in the page; keeping the plan leaves the form as it was.
     c.wait().at_most(WAIT).for_element(Locator::Id("fs-use-confirm")).await?;
@@ -213,5 +253,165 @@ async fn use_this_design_fills_the_plan_after_asking() -> Result<(), BoxError> {
     let shown: f64 = field.prop("value").await?.ok_or("no value")?.parse()?;
     assert!((shown - charge_kg).abs() <= 1e-6 * charge_kg, "plan shows {shown} kg, design {charge_kg} kg");
     assert_eq!(c.find(Locator::Id("mode-plan")).await?.attr("aria-selected").await?.as_deref(), Some("true"));
+    // Before: nothing reached the saved stills. Now the design's equipment is saved there too,
+    // the same equipment the plan's form was given.
+    let record = drive::wait_stored(c, "stillroom.library", |t| t.contains("First still design")).await?;
+    let record: serde_json::Value = serde_json::from_str(&record)?;
+    let stills = record["stills"].as_array().ok_or("no stills")?;
+    assert_eq!(stills.len(), 1, "{record}");
+    let eq = &stills[0]["equipment"];
+    let form = drive::form_plan(c).await?;
+    for part in ["still", "boiler", "condenser", "separator"] {
+        assert_eq!(eq[part], form[part], "{part}");
+    }
+    assert_eq!(eq["still"]["volume_m3"].as_f64(), Some(still_m3));
+    assert_eq!(eq["boiler"]["heat_input_w"].as_f64(), Some(heat_w));
+    assert_eq!(eq["condenser"]["tube_outer_diameter_m"].as_f64(), Some(tube_m));
+    // The workbench lists it.
+    click(c, "mode-workbench").await?;
+    wait_text(c, "#saved-stills", |t| t.contains("First still design")).await?;
+    page.close().await
+}
+
+async fn value_of(c: &Client, key: &str) -> Result<String, BoxError> {
+    Ok(c.find(Locator::Id(&format!("fs-{key}"))).await?.prop("value").await?.unwrap_or_default())
+}
+
+async fn unit_of(c: &Client, key: &str) -> Result<String, BoxError> {
+    Ok(c.find(Locator::Css(&format!("label[for=fs-{key}] .unit"))).await?.text().await?)
+}
+
+async fn out_text(c: &Client, out: &str) -> Result<String, BoxError> {
+    Ok(c.find(Locator::Css(&format!("[data-out={out}]"))).await?.text().await?)
+}
+
+/// The first number in a text ("12.3 lb of water" -> 12.3).
+fn first_number(text: &str) -> Option<f64> {
+    text.split_whitespace().find_map(|w| w.replace('\u{202f}', "").replace('−', "-").parse().ok())
+}
+
+#[tokio::test]
+async fn the_design_follows_the_pages_units() -> Result<(), BoxError> {
+    let want = size(&larkfield(40.0)).map_err(|e| format!("the starting request must be sizeable: {e}"))?;
+    let page = browser::open().await?;
+    fresh(&page).await?;
+    let c = &page.client;
+    click(c, "mode-first").await?;
+    wait_text(c, "[data-out=fs_still]", |t| t == want.still.volume_m3.label).await?;
+    let metric_run = card_si(c, "fs_run").await?;
+    let metric_tube = card_si(c, "fs_condenser").await?;
+    assert_eq!(unit_of(c, "kg_per_day").await?, "kg");
+    // Before: the first-still mode stayed metric whatever the page's units.
+    click(c, "mode-plan").await?;
+    click(c, "units-us").await?;
+    click(c, "mode-first").await?;
+    wait_text(c, "label[for=fs-kg_per_day] .unit", |t| t == "lb").await?;
+    for (key, unit, text) in [
+        ("kg_per_day", "lb", "88.18"),
+        ("altitude", "ft", "984.3"),
+        ("inlet", "°F", "59"),
+        ("warmest", "°F", "113"),
+        ("max_heat", "BTU/h", ""),
+        ("max_flow", "gal/min", ""),
+        ("longest_run", "h", "3"),
+        ("charges", "charges", "2"),
+    ] {
+        assert_eq!(unit_of(c, key).await?, unit, "{key}");
+        assert_eq!(value_of(c, key).await?, text, "{key}");
+    }
+    // The same design underneath: the rewritten texts stand for the exact values typed.
+    assert_eq!(card_si(c, "fs_still").await?, want.still.volume_m3.rounded);
+    assert_eq!(card_si(c, "fs_run").await?, metric_run);
+    // A switch changes no choice: the tube standard picked stays.
+    assert_eq!(card_si(c, "fs_condenser").await?, metric_tube);
+    // Shown in US units: the boiler fill in lb, the still in gal, heights in inches, the
+    // distillate in °F (NIST SP 811: t/°F = 1.8 t/°C + 32).
+    let fill = out_text(c, "fs_fill").await?;
+    assert!(fill.ends_with("gal of water"), "{fill}");
+    let gal = first_number(&fill).ok_or(format!("no number: {fill}"))?;
+    // A kilogram of water taken as a litre, as the page says.
+    let want_gal = want.boiler.fill_kg / 1e3 / GAL_M3;
+    assert!((gal - want_gal).abs() <= 0.005 * want_gal, "{fill} against {want_gal} gal");
+    let still = out_text(c, "fs_still").await?;
+    let want_still_gal = want.still.volume_m3.rounded / GAL_M3;
+    assert!(still.ends_with(" gal"), "{still}");
+    let shown_gal = first_number(&still).ok_or(format!("no number: {still}"))?;
+    assert!((shown_gal - want_still_gal).abs() <= 0.005 * want_still_gal, "{still} against {want_still_gal}");
+    let note = c.find(Locator::Css("[data-out=fs_still] + .card-note")).await?.text().await?;
+    assert!(note.contains(&format!("buy {}", want.still.volume_m3.label)), "{note}");
+    assert!(out_text(c, "fs_grid").await?.ends_with(" in"));
+    assert!(out_text(c, "fs_tube_length").await?.contains(" ft"));
+    let distillate = out_text(c, "fs_distillate").await?;
+    let f = first_number(&distillate).ok_or(format!("no number: {distillate}"))?;
+    assert!(distillate.ends_with("°F"), "{distillate}");
+    assert!((f - (want.condenser.distillate_outlet_c * 1.8 + 32.0)).abs() <= 0.5, "{distillate}");
+    // (Catalogue labels keep the shop's words, "200 L drum"; the figures around them are US.)
+    for out in [
+        "fs_fill",
+        "fs_charge_kg",
+        "fs_boiler_fill",
+        "fs_water",
+        "fs_capacity",
+        "fs_metal",
+        "fs_charge_volume",
+    ] {
+        let t = out_text(c, out).await?;
+        assert!(
+            !t.contains(" kg") && !t.contains(" L ") && !t.ends_with(" L") && !t.contains(" kW"),
+            "{out}: {t}"
+        );
+    }
+    // Typed in pounds: the request the core gets is in kg.
+    set_field(c, "kg_per_day", "100").await?;
+    let want_us = size(&larkfield(100.0 * LB_KG)).map_err(|e| format!("100 lb a day: {e}"))?;
+    let start = std::time::Instant::now();
+    while (card_si(c, "fs_charge").await? - want_us.charge_kg).abs() > 1e-9 * want_us.charge_kg {
+        assert!(start.elapsed() < WAIT, "the charge never became {} kg", want_us.charge_kg);
+        tokio::time::sleep(Duration::from_millis(50)).await;
+    }
+    assert_eq!(card_si(c, "fs_still").await?, want_us.still.volume_m3.rounded);
+    // A bound on a field is restated in its US unit.
+    set_field(c, "warmest", "300").await?;
+    // The core's limit is 85 °C, 185 °F.
+    wait_text(c, "#fs-e-warmest", |t| t == "Must be at most 185 °F.").await?;
+    set_field(c, "warmest", "113").await?;
+    page.cdp(
+        "Emulation.setDeviceMetricsOverride",
+        serde_json::json!({ "width": 412, "height": 915, "deviceScaleFactor": 1, "mobile": true }),
+    )
+    .await?;
+    c.execute("document.getElementById('h-fs-design').scrollIntoView();", vec![]).await?;
+    tokio::time::sleep(Duration::from_millis(300)).await;
+    screenshot(&page, "first-still-us-phone.png").await?;
+    c.execute("window.scrollTo(0, 0);", vec![]).await?;
+    tokio::time::sleep(Duration::from_millis(200)).await;
+    screenshot(&page, "first-still-us-form-phone.png").await?;
+    // And back: metric texts from the pinned values (100 lb is 45.36 kg to four figures).
+    click(c, "mode-plan").await?;
+    click(c, "units-metric").await?;
+    click(c, "mode-first").await?;
+    wait_text(c, "label[for=fs-kg_per_day] .unit", |t| t == "kg").await?;
+    assert_eq!(value_of(c, "kg_per_day").await?, "45.36");
+    assert_eq!(value_of(c, "altitude").await?, "300");
+    assert_eq!(card_si(c, "fs_still").await?, want_us.still.volume_m3.rounded);
+    page.close().await
+}
+
+#[tokio::test]
+async fn a_grower_on_us_units_starts_with_us_units_and_inch_tube() -> Result<(), BoxError> {
+    let page = browser::open().await?;
+    fresh(&page).await?;
+    let c = &page.client;
+    click(c, "units-us").await?;
+    click(c, "mode-first").await?;
+    wait_text(c, "label[for=fs-kg_per_day] .unit", |t| t == "lb").await?;
+    assert_eq!(value_of(c, "kg_per_day").await?, "88.18");
+    // The tube standard starts at what a US shop sells: the Larkfield request on US tube.
+    let mut want = larkfield(40.0);
+    want.cooling.tube_standard = TubeStandard::Us;
+    let want = size(&want).map_err(|e| format!("Larkfield on US tube: {e}"))?;
+    assert!(c.find(Locator::Id("fs-us")).await?.prop("checked").await?.as_deref() == Some("true"));
+    wait_text(c, "[data-out=fs_condenser]", |t| t == want.condenser.tube_inner_diameter_m.label).await?;
+    assert_eq!(card_si(c, "fs_still").await?, want.still.volume_m3.rounded);
     page.close().await
 }

@@ -1,5 +1,6 @@
 //! Properties of the still sizing: it never panics; every design, planned forward, meets its
-//! request (run length, charges a day, steam rate, tub temperature, cooling flow); and the next
+//! request (run length, charges a day, the working day, steam rate, tub temperature, the fed
+//! jacket's cooling flow, the water a charge uses); and the next
 //! smaller catalogue size of each part would not. The "would not" checks rebuild the geometry
 //! and the steam velocity here, from the allowances the design lists and from IAPWS-IF97
 //! (seuif97) directly, rather than through the sizing's own functions.
@@ -46,6 +47,10 @@ prop_compose! {
         run_h in 2.0..8.0f64,
         jacket in prop::bool::ANY,
         us in prop::bool::ANY,
+        // 1.2 to 60 L/min of cooling water, when the request has a limit.
+        max_flow in prop::option::of(0.02..1.0f64),
+        max_water in prop::option::of(100.0..5_000.0f64),
+        day_h in prop::option::of(4.0..24.0f64),
     ) -> SizingRequest {
         SizingRequest {
             crop: Some(crop.to_string()),
@@ -55,16 +60,16 @@ prop_compose! {
             heat,
             cooling: CoolingSupply {
                 inlet_c: inlet,
-                max_flow_kg_per_s: None,
+                max_flow_kg_per_s: max_flow,
                 condenser: if jacket { CondenserKind::TubeInTube } else { CondenserKind::CoilInTub },
                 tube_standard: if us { TubeStandard::Us } else { TubeStandard::Metric },
             },
             limits: Limits {
                 max_charges_per_day: charges,
                 max_run_s: run_h * 3600.0,
-                max_water_per_run_kg: None,
+                max_water_per_run_kg: max_water,
                 warmest_cooling_water_c: inlet + rise,
-                working_day_s: None,
+                working_day_s: day_h.map(|h| h * 3600.0),
             },
             packing_density_kg_per_m3: None,
             steam_rate_kg_per_h_per_kg: None,
@@ -87,6 +92,11 @@ fn meets(r: &SizingRequest, p: &Plan) -> bool {
         // A tub holds at its warmest only when fed: the design's tub must last the run unfed.
         && p.condenser.tub_feed_from_s.is_none()
         && p.condenser.tub_end_c.is_none_or(|t| t <= r.limits.warmest_cooling_water_c + 1e-9)
+        // A fed jacket draws its water from the supply; a tub is filled, so the flow limit only
+        // sets how long a refill takes.
+        && (r.cooling.condenser != CondenserKind::TubeInTube
+            || r.cooling.max_flow_kg_per_s.is_none_or(|f| p.condenser.cooling_water_flow_kg_per_s <= f * (1.0 + 1e-9)))
+        && r.limits.max_water_per_run_kg.is_none_or(|w| p.water_use.total_kg <= w * (1.0 + 1e-9))
 }
 
 /// Whether a charge of `charge_m3` with `boiled_kg` of water to boil off fits a drum-shaped
@@ -260,4 +270,40 @@ fn a_comfortable_request_is_designed() {
     };
     let d = size(&r).unwrap();
     check_design(&r, &d).unwrap();
+}
+
+/// The sampled limits must not all end in errors: a fed jacket on a limited supply, with a
+/// limit on the water a charge uses and an eight-hour working day, gives a design that keeps
+/// every one of them (an invented farm: 30 kg of lavender a day).
+#[test]
+fn a_request_with_flow_water_and_day_limits_is_designed() {
+    let r = SizingRequest {
+        crop: Some("lavender".into()),
+        base: None,
+        harvest: Harvest::PerDay { kg_per_day: 30.0, days: Some(20) },
+        site: SiteRequest { altitude_m: 300.0, ambient_temperature_c: None },
+        heat: HeatSupply::Fuel { fuel: Fuel::Propane, appliance: None, max_heat_input_w: None },
+        cooling: CoolingSupply {
+            inlet_c: 15.0,
+            // 30 L/min.
+            max_flow_kg_per_s: Some(0.5),
+            condenser: CondenserKind::TubeInTube,
+            tube_standard: TubeStandard::Metric,
+        },
+        limits: Limits {
+            max_charges_per_day: 2,
+            max_run_s: 4.0 * 3600.0,
+            max_water_per_run_kg: Some(4_000.0),
+            warmest_cooling_water_c: 45.0,
+            working_day_s: Some(8.0 * 3600.0),
+        },
+        packing_density_kg_per_m3: None,
+        steam_rate_kg_per_h_per_kg: None,
+    };
+    let d = size(&r).unwrap();
+    check_design(&r, &d).unwrap();
+    // The same request with too little water for a charge is refused on that field.
+    let mut thirsty = r.clone();
+    thirsty.limits.max_water_per_run_kg = Some(plan(&d.scenario).unwrap().water_use.total_kg * 0.5);
+    assert!(size(&thirsty).unwrap_err().on("limits.max_water_per_run_kg").is_some());
 }

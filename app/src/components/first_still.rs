@@ -5,14 +5,18 @@
 //! The mode keeps its own signals here (not in the plan's state): the form's texts and choices,
 //! the parsed request (a memo, so an edit that leaves the request unchanged costs nothing) and
 //! the design (a memo on the request). Nothing is computed until the mode is first opened.
+//! The units are the page's choice ([`bridge::units`], followed on [`bridge::UNITS_EVENT`]):
+//! a switch rewrites each text in the new unit and pins its exact SI value behind it, as the
+//! plan's form does, so the request stays exactly as it was.
 
 mod design;
 mod form;
 pub mod request;
 
 use crate::bridge;
+use crate::units::UnitSystem;
 use leptos::prelude::*;
-use request::{Choices, HarvestMode, SIZE_FIELDS, SupplyMode, TextProblem, build_request};
+use request::{Choices, HarvestMode, SIZE_FIELDS, SupplyMode, TextProblem, build_request, si_value};
 use stillroom_core::heat::Fuel;
 use stillroom_core::scenario::CondenserKind;
 use stillroom_core::sizing::{Design, SizingErrors, SizingRequest, TubeStandard};
@@ -25,6 +29,10 @@ pub type Parsed = Result<SizingRequest, Vec<(&'static str, TextProblem)>>;
 pub struct FirstStillState {
     /// One text per entry of [`SIZE_FIELDS`], in the same order.
     texts: Vec<RwSignal<String>>,
+    /// Per field, the text a unit switch wrote and the exact SI value behind it.
+    pinned: StoredValue<Vec<Option<(String, f64)>>>,
+    /// The units the texts are typed in and the design is shown in.
+    pub units: RwSignal<UnitSystem>,
     pub crop: RwSignal<String>,
     pub harvest: RwSignal<HarvestMode>,
     pub fuel: RwSignal<Fuel>,
@@ -59,21 +67,30 @@ impl FirstStillState {
             condenser: condenser.get(),
             tubes: tubes.get(),
         });
+        let pinned = StoredValue::new(vec![None; SIZE_FIELDS.len()]);
+        let units = RwSignal::new(UnitSystem::Metric);
         let field_texts = texts.clone();
         let request = Memo::new(move |_| {
-            let text = |key: &str| {
-                SIZE_FIELDS
-                    .iter()
-                    .position(|f| f.key == key)
-                    .map(|i| field_texts[i].get())
-                    .unwrap_or_default()
+            let system = units.get();
+            let read = |key: &'static str| {
+                let Some(i) = SIZE_FIELDS.iter().position(|f| f.key == key) else {
+                    return Ok(None);
+                };
+                let text = field_texts[i].get();
+                let exact = pinned.with_value(|p| p[i].as_ref().filter(|(t, _)| *t == text).map(|(_, v)| *v));
+                match exact {
+                    Some(si) => Ok(Some(si)),
+                    None => si_value(&SIZE_FIELDS[i], &text, system),
+                }
             };
-            choices.with(|c| build_request(&text, c))
+            choices.with(|c| build_request(&read, c))
         });
         // Recomputed only when the parsed request changes.
         let design = Memo::new(move |_| request.with(|r| r.as_ref().ok().map(stillroom_core::size)));
-        FirstStillState {
+        let fs = FirstStillState {
             texts,
+            pinned,
+            units,
             crop,
             harvest,
             fuel,
@@ -84,7 +101,38 @@ impl FirstStillState {
             choices,
             request,
             design,
+        };
+        // The starting entries are metric: shown in the page's units from the start, and a
+        // grower on US units starts with the tube sizes sold in inches.
+        let page_units = bridge::units();
+        if page_units == UnitSystem::UsCustomary {
+            fs.tubes.set(TubeStandard::Us);
         }
+        fs.set_units(page_units);
+        fs
+    }
+
+    /// Switches the units: each text that converts is rewritten in the new unit, its exact SI
+    /// value pinned behind it (a text that is not a number stays as typed).
+    pub fn set_units(&self, to: UnitSystem) {
+        let from = self.units.get_untracked();
+        if from == to {
+            return;
+        }
+        for (i, (f, text)) in SIZE_FIELDS.iter().zip(&self.texts).enumerate() {
+            if !f.converts() {
+                continue;
+            }
+            let before = text.get_untracked();
+            let exact = self
+                .pinned
+                .with_value(|p| p[i].as_ref().filter(|(t, _)| *t == before).map(|(_, v)| *v))
+                .or_else(|| si_value(f, &before, from).ok().flatten());
+            let converted = exact.map(|si| request::text_in(f, si, to)).unwrap_or(before);
+            self.pinned.update_value(|p| p[i] = exact.map(|v| (converted.clone(), v)));
+            text.set(converted);
+        }
+        self.units.set(to);
     }
 
     /// The text signal of a field.
@@ -97,7 +145,10 @@ impl FirstStillState {
 /// The first-still view: the form, the design, and the way back to the plan.
 #[component]
 pub fn FirstStillView() -> impl IntoView {
-    provide_context(FirstStillState::new());
+    let fs = FirstStillState::new();
+    provide_context(fs.clone());
+    let switch = window_event_listener_untyped(bridge::UNITS_EVENT, move |_| fs.set_units(bridge::units()));
+    on_cleanup(move || switch.remove());
     view! {
         <div id="first-still" class="columns">
             <div class="col-in"><form::FirstStillForm /></div>
@@ -126,7 +177,9 @@ pub fn mount() {
 }
 
 /// "Use this design": sends the design to the plan (an event the plan's view listens for),
-/// asking first inside the page, since it replaces what the plan's form holds.
+/// asking first inside the page, since it replaces what the plan's form holds; and hands it to
+/// the workbench, which keeps its equipment under "Saved stills" (loaded now if it is not yet,
+/// so the still is saved even if its tab is never opened).
 #[component]
 fn UseDesign() -> impl IntoView {
     let fs = expect_context::<FirstStillState>();
@@ -138,6 +191,8 @@ fn UseDesign() -> impl IntoView {
             if let Some(Ok(d)) = d
                 && let Ok(json) = serde_json::to_string(&d.scenario)
             {
+                bridge::post(bridge::INBOX_STILL, &json);
+                bridge::load_module(bridge::WORKBENCH_LOADER);
                 bridge::send(bridge::OPEN_PLAN_EVENT, &json);
             }
         });
@@ -146,10 +201,10 @@ fn UseDesign() -> impl IntoView {
     view! {
         <section class="use-design" aria-labelledby="h-use-design" hidden=move || !ready()>
                 <h2 id="h-use-design">"Plan runs with this design"</h2>
-                <p class="hint">"Opens the bought design in “Plan a run”, where every number of a charge can be followed and changed."</p>
+                <p class="hint">"Opens the bought design in “Plan a run”, where every number of a charge can be followed and changed, and keeps its equipment under “Saved stills”, to use with any crop."</p>
                 // Both states are drawn once and shown in turn: cheaper than swapping views.
                 <div class="confirm" role="group" aria-labelledby="fs-confirm-text" hidden=move || !asking.get()>
-                    <p id="fs-confirm-text">"This replaces what the plan's form holds now. Replace it with this design? (To keep it, save it first under “Saved plans”.)"</p>
+                    <p id="fs-confirm-text">"This replaces what the plan's form holds now (to keep that, save it first under “Saved plans”). The design's still, boiler, condenser and separator are also saved under “Saved stills”. Replace the plan with this design?"</p>
                     <button type="button" id="fs-use-confirm" on:click=move |_| open()>"Replace the plan"</button>
                     <button type="button" id="fs-use-cancel" class="quiet" on:click=move |_| asking.set(false)>"Keep my plan"</button>
                 </div>

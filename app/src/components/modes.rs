@@ -22,7 +22,7 @@ pub struct ShownMode(pub RwSignal<Mode>);
 
 /// The loader each lazily loaded module has in `public/start.js`.
 const FIRST_STILL_LOADER: &str = "stillroomFirstStill";
-const WORKBENCH_LOADER: &str = "stillroomWorkbench";
+use bridge::WORKBENCH_LOADER;
 
 /// Hands a text to the workbench (a share link, a kept-aside copy) and shows it.
 pub fn to_workbench(mode: RwSignal<Mode>, kind: &str, text: &str) {

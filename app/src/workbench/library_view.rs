@@ -101,6 +101,16 @@ impl Shelf {
         (id, name)
     }
 
+    /// Adds `equipment` as a new saved still named `base` (made unique); its name.
+    pub fn add_still(&self, base: &str, equipment: Equipment) -> String {
+        let taken = self.still_names();
+        let name = unique_name(base, &taken.iter().map(String::as_str).collect::<Vec<_>>());
+        let id = self.lib.fresh_id();
+        let still = SavedStill { id, name: name.clone(), saved_ms: storage::now_ms(), equipment };
+        self.lib.stills.update(|s| s.push(still));
+        name
+    }
+
     /// Opens `scenario` in the form, after saving the form's plan as a new one if it is not saved
     /// already; `what` names what is opened. False if the form could not be read.
     fn open(&self, scenario: Scenario, what: &str) -> bool {
@@ -149,7 +159,7 @@ impl Shelf {
 }
 
 /// Takes in what the page handed over: share links and plan texts become new saved plans, a
-/// library record is merged. Called when the workbench starts and on each inbox event.
+/// designed still (from the first-still mode) a new saved still, a library record is merged. Called when the workbench starts and on each inbox event.
 pub fn take_inbox(shelf: Shelf) {
     for link in bridge::take_inbox_of(bridge::INBOX_LINK) {
         match share::read_link(&link) {
@@ -176,6 +186,19 @@ pub fn take_inbox(shelf: Shelf) {
                 shelf.offer.set(Some(id));
             }
             Err(e) => shelf.said.set(Some(format!("The plan could not be read: {e}."))),
+        }
+    }
+    for text in bridge::take_inbox_of(bridge::INBOX_STILL) {
+        match records::read_scenario(&text) {
+            Ok(s) => {
+                let stamp = storage::local_time(storage::now_ms());
+                let name = shelf.add_still(&format!("First still design, {stamp}"), Equipment::of(&s));
+                shelf.undo.set(None);
+                shelf.said.set(Some(format!(
+                    "The designed still, boiler, condenser and separator are saved as “{name}”."
+                )));
+            }
+            Err(e) => shelf.said.set(Some(format!("The designed still could not be read: {e}."))),
         }
     }
     for text in bridge::take_inbox_of(bridge::INBOX_LIBRARY) {

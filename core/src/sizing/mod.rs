@@ -340,6 +340,9 @@ fn cautions(needs: &Needs, parts: &Parts, charges: u32) -> Vec<String> {
         "A still must stay open to the air through its condenser: never seal it, and keep the vapour path free so it cannot build pressure. Follow local codes and licensed practice for anything under pressure.".to_string(),
         "Essential oils and their vapours burn: keep flames and sparks away from the receiver and the condenser's outlet.".to_string(),
         "Never let the boiler run dry: refill before the water falls to the heater.".to_string(),
+        "A boiler that can be shut (a lid clamped down, a valve or tap on it) needs a pressure-relief valve rated for it; a still built open needs none, but nothing may close its vapour path.".to_string(),
+        "Build with food-safe materials that suit the oil: no lead solder, no galvanised (zinc-coated) parts where distillate or steam touches, and no aluminium for oils that attack it; choose stainless steel, copper or glass.".to_string(),
+        "Local building, gas, electrical and pressure-equipment codes and licensed practice come first, before anything in this design.".to_string(),
     ];
     match needs.fuel {
         crate::heat::Fuel::Electricity => c.push(
@@ -381,6 +384,26 @@ mod tests {
             "limits":{"max_charges_per_day":2,"max_run_s":14400,"warmest_cooling_water_c":45}}"#,
         )
         .unwrap()
+    }
+
+    #[test]
+    fn the_design_carries_the_builders_cautions() {
+        // Before: the design's cautions (what the command line and JSON show) had no pressure
+        // relief, no materials and no general "codes first" line; the page had them alone.
+        let d = size(&request()).unwrap();
+        let all = d.cautions.join("\n");
+        for words in [
+            "pressure-relief valve",
+            "lead solder",
+            "galvanised",
+            "aluminium",
+            "food-safe",
+            "codes and licensed practice come first",
+            "never seal it",
+            "ventilation",
+        ] {
+            assert!(all.contains(words), "cautions lack {words:?}: {all}");
+        }
     }
 
     #[test]

@@ -1,10 +1,12 @@
 //! The design, shown: headline cards, each part in full with what the physics asks for and what
 //! to buy, the design's allowances and their sources, and the builder's cautions. Every number
-//! comes from the core's `Design` through [`crate::units`].
+//! comes from the core's `Design` through [`crate::units`], in the page's units (the cards and
+//! parts are drawn inside [`units::with_system`]). Catalogue labels are the shops' own words
+//! (a "200 L drum", "15 mm" tube); in US customary the size follows in US units.
 
 use super::FirstStillState;
 use super::request::unplaced;
-use crate::units;
+use crate::units::{self, UnitSystem, sp811};
 use leptos::prelude::*;
 use stillroom_core::scenario::CondenserKind;
 use stillroom_core::sizing::{Design, Purchase};
@@ -14,16 +16,52 @@ fn buy(p: &Purchase, show: impl Fn(f64) -> String) -> String {
     format!("needs {} → buy {}", show(p.exact), p.label)
 }
 
-fn mm(m: f64) -> String {
-    format!("{} mm", units::fixed(m * 1000.0, 0))
+fn us() -> bool {
+    units::system() == UnitSystem::UsCustomary
 }
 
+/// A height in the still or separator: mm, or inches.
+fn mm(m: f64) -> String {
+    units::millimetres(m)
+}
+
+/// A tube's bore: mm to a tenth, or inches to a thousandth (as tube tables give it).
 fn bore(m: f64) -> String {
+    if us() {
+        return format!("{} in", units::fixed(m / sp811::IN_M, 3));
+    }
     format!("{} mm", units::fixed(m * 1000.0, 1))
 }
 
 fn fuel_amount(d: &Design, amount: f64) -> String {
-    format!("{} {}", units::sig3(amount), d.planned.fuel_unit)
+    units::fuel(amount, d.scenario.boiler.fuel)
+}
+
+/// A card's figure for a bought part: the catalogue label, or in US customary the size in US
+/// units (the note under it names the label to ask for).
+fn label(p: &Purchase, show: fn(f64) -> String) -> String {
+    if us() { show(p.rounded) } else { p.label.clone() }
+}
+
+/// Water to fill: kg, or US gallons (a kilogram taken as a litre, as the plan's form does).
+fn water_amount(kg: f64) -> String {
+    if us() { units::volume(kg / 1e3) } else { units::mass(kg) }
+}
+
+/// Packing density: kg/m³, or lb/ft³ (NIST SP 811).
+fn density(kg_per_m3: f64) -> String {
+    if us() {
+        return format!("{} lb/ft³", units::sig3(kg_per_m3 * sp811::FT3_M3 / sp811::LB_KG));
+    }
+    format!("{} kg/m³", units::sig3(kg_per_m3))
+}
+
+/// Tube to buy: the core's whole metres, or whole feet at least as long.
+fn tube_to_buy(m: f64) -> String {
+    if us() {
+        return format!("buy {} ft", units::fixed((m / sp811::FT_M).ceil(), 0));
+    }
+    format!("buy {} m", units::plain(m))
 }
 
 /// One headline card: label, figure, note, the figure's SI value for tests and tools, and its
@@ -59,7 +97,7 @@ pub fn cards(d: &Design) -> Vec<CardText> {
         card(
             "Still",
             "fs_still",
-            still.volume_m3.label.clone(),
+            label(&still.volume_m3, units::volume),
             format!(
                 "{}; {} across × {} high, grid {} up",
                 buy(&still.volume_m3, units::volume),
@@ -72,7 +110,7 @@ pub fn cards(d: &Design) -> Vec<CardText> {
         card(
             "Heat",
             "fs_heat",
-            heat.heat_input_w.label.clone(),
+            label(&heat.heat_input_w, units::kilowatts),
             format!("{}{amps}", buy(&heat.heat_input_w, units::kilowatts)),
             Some(heat.heat_input_w.rounded),
         ),
@@ -86,11 +124,11 @@ pub fn cards(d: &Design) -> Vec<CardText> {
         card(
             "Fill the boiler with",
             "fs_fill",
-            format!("{} of water", units::mass(d.boiler.fill_kg)),
+            format!("{} of water", water_amount(d.boiler.fill_kg)),
             format!(
                 "{} boils off in the first charge, {} stays over the heater",
-                units::mass(d.boiler.boiled_off_kg),
-                units::mass(d.boiler.heater_cover_kg)
+                water_amount(d.boiler.boiled_off_kg),
+                water_amount(d.boiler.heater_cover_kg)
             ),
             Some(d.boiler.fill_kg),
         ),
@@ -133,7 +171,7 @@ pub fn cards(d: &Design) -> Vec<CardText> {
         card(
             "Separator",
             "fs_separator",
-            sep.volume_m3.label.clone(),
+            label(&sep.volume_m3, units::volume),
             format!("{}{sep_size}", buy(&sep.volume_m3, units::volume)),
             Some(sep.volume_m3.rounded),
         ),
@@ -172,9 +210,9 @@ pub fn parts(d: &Design) -> Vec<Part> {
                     "Its volume, as packed",
                     "fs_charge_volume",
                     format!(
-                        "{} at {} kg/m³",
+                        "{} at {}",
                         units::volume(still.charge_volume_m3),
-                        units::sig3(still.packing_density_kg_per_m3)
+                        density(still.packing_density_kg_per_m3)
                     ),
                 ),
                 ("Vessel", "fs_vessel", bought(&still.volume_m3, units::volume)),
@@ -204,12 +242,14 @@ pub fn parts(d: &Design) -> Vec<Part> {
                     "Steam raised",
                     "fs_steam",
                     format!(
-                        "{} kg/h, {} kg/h per kg of charge",
-                        units::sig3(heat.steam_rate_kg_per_s * 3600.0),
-                        units::sig3(heat.specific_steam_rate_kg_per_h_per_kg)
+                        "{}, {} {} of charge",
+                        units::kg_per_hour(heat.steam_rate_kg_per_s),
+                        // The same number in lb/h per lb: a ratio per hour.
+                        units::sig3(heat.specific_steam_rate_kg_per_h_per_kg),
+                        if us() { "lb/h per lb" } else { "kg/h per kg" },
                     ),
                 ),
-                ("Boiler fill", "fs_boiler_fill", units::mass(d.boiler.fill_kg)),
+                ("Boiler fill", "fs_boiler_fill", water_amount(d.boiler.fill_kg)),
                 (
                     "Fuel per charge / per day",
                     "fs_fuel_rows",
@@ -255,11 +295,7 @@ pub fn parts(d: &Design) -> Vec<Part> {
                 (
                     "Tube length",
                     "fs_tube_length",
-                    format!(
-                        "{}; buy {} m",
-                        units::length(cond.tube_length_m),
-                        units::plain(cond.tube_to_buy_m)
-                    ),
+                    format!("{}; {}", units::length(cond.tube_length_m), tube_to_buy(cond.tube_to_buy_m)),
                 ),
                 (
                     "Tub",
@@ -272,11 +308,9 @@ pub fn parts(d: &Design) -> Vec<Part> {
                 (
                     "Tub water",
                     "fs_tub_water",
-                    or_dash(
-                        cond.tub_water_kg.as_ref().map(|t| {
-                            format!("needs {}; fill {}", units::mass(t.exact), units::mass(t.rounded))
-                        }),
-                    ),
+                    or_dash(cond.tub_water_kg.as_ref().map(|t| {
+                        format!("needs {}; fill {}", water_amount(t.exact), water_amount(t.rounded))
+                    })),
                 ),
                 (
                     "Tub at the end of the first charge",
@@ -362,8 +396,13 @@ fn blocked(fs: &FirstStillState) -> Option<(String, Vec<String>)> {
 pub fn DesignHeadline() -> impl IntoView {
     let fs = expect_context::<FirstStillState>();
     let d = fs.design;
+    let system = fs.units;
     let why = Memo::new(move |_| blocked(&fs));
-    let shown = move || d.with(|r| r.as_ref().and_then(|r| r.as_ref().ok()).map(cards)).unwrap_or_default();
+    let shown = move || {
+        let system = system.get();
+        d.with(|r| r.as_ref().and_then(|r| r.as_ref().ok()).map(|d| units::with_system(system, || cards(d))))
+            .unwrap_or_default()
+    };
     view! {
         <section class="headline" aria-labelledby="h-fs-design" aria-live="polite">
             <h2 id="h-fs-design">"Your first still"</h2>
@@ -389,7 +428,9 @@ pub fn DesignHeadline() -> impl IntoView {
 pub fn DesignDetails() -> impl IntoView {
     let fs = expect_context::<FirstStillState>();
     let d = fs.design;
+    let units_in = fs.units;
     let body = move || {
+        let system = units_in.get();
         d.with(|r| {
             let d = r.as_ref()?.as_ref().ok()?;
             let allowances = d
@@ -415,7 +456,7 @@ pub fn DesignDetails() -> impl IntoView {
             Some(view! {
                 <section class="details" aria-labelledby="h-fs-details">
                     <h2 id="h-fs-details">"The design in full"</h2>
-                    {parts(d).into_iter().map(|(heading, rows)| view! {
+                    {units::with_system(system, || parts(d)).into_iter().map(|(heading, rows)| view! {
                         <h3>{heading}</h3>
                         <dl>{rows.into_iter().map(|(label, out, value)| view! {
                             <div class="row"><dt>{label}</dt><dd data-out=out>{value}</dd></div>

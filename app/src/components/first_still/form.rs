@@ -23,8 +23,9 @@ fn message(fs: &FirstStillState, key: &str) -> Option<String> {
             let errors = d.as_ref()?.as_ref().err()?;
             let e = errors.errors.iter().find(|e| shown_on(&e.field, c) == Some(key))?;
             let f = Some(size_field(key)).filter(|f| f.key == key && f.path == e.field);
-            let si = f.and_then(|f| si_value(f, &fs.text(key).get_untracked()).ok().flatten());
-            Some(error_words(f, e, si))
+            let system = fs.units.get();
+            let si = f.and_then(|f| si_value(f, &fs.text(key).get_untracked(), system).ok().flatten());
+            Some(error_words(f, e, si, system))
         })
     })
 }
@@ -35,6 +36,7 @@ fn SizeInput(key: &'static str) -> impl IntoView {
     let fs = expect_context::<FirstStillState>();
     let f = size_field(key);
     let text = fs.text(key);
+    let units = fs.units;
     let msg_fs = fs.clone();
     let message = Memo::new(move |_| message(&msg_fs, key));
     let id = format!("fs-{key}");
@@ -48,7 +50,7 @@ fn SizeInput(key: &'static str) -> impl IntoView {
         <div class="field" class:invalid=move || message.get().is_some()>
             <label for=id.clone()>
                 <span class="label">{f.label}</span>
-                <span class="unit">{f.unit}</span>
+                <span class="unit">{move || f.unit_in(units.get())}</span>
             </label>
             <input id=id.clone() name=id type="text" inputmode="decimal" autocomplete="off"
                 placeholder=placeholder

@@ -1,9 +1,11 @@
 //! The first-still form's edge: each field's label, unit and conversion to the core's
 //! `SizingRequest`, which fields a set of choices uses, and the words beside a field for the
-//! core's verdict. Units change here and nowhere else in the first-still mode.
+//! core's verdict. Units change here and nowhere else in the first-still mode: each field has
+//! its metric unit and, where US customary differs, the plan form's US unit for the same
+//! quantity ([`crate::fields::us_alt`], NIST SP 811 factors).
 
-use crate::fields::{TextError, parse_number};
-use crate::units;
+use crate::fields::{Alt, TextError, parse_number};
+use crate::units::{self, UnitSystem, sp811};
 use stillroom_core::heat::Fuel;
 use stillroom_core::scenario::{CondenserKind, FieldError};
 use stillroom_core::sizing::{
@@ -212,6 +214,73 @@ pub const SIZE_FIELDS: &[SizeField] = &[
     ),
 ];
 
+/// US gallons a minute of cool water -> kg/s, a litre taken as a kilogram as the metric field
+/// does (NIST SP 811: 1 gal = 3.785 411 784 L).
+fn gal_per_min(v: f64) -> f64 {
+    v * sp811::GAL_M3 * 1e3 / 60.0
+}
+fn per_gal_per_min(kg_per_s: f64) -> f64 {
+    kg_per_s * 60.0 / (sp811::GAL_M3 * 1e3)
+}
+
+/// A field's US customary unit where it differs from the metric one: the plan form's unit for
+/// the same quantity (ft, lb, °F, BTU/h), and gal/min for the cooling water's flow. Electric
+/// power stays in kW, as US supplies are rated.
+pub fn us_alt(key: &str) -> Option<Alt> {
+    let same_as = match key {
+        "altitude" => "altitude",
+        "kg_per_day" | "kg_per_season" => "harvest",
+        "inlet" | "warmest" => "cooling_in",
+        "max_heat" => "heat_input",
+        "max_flow" => return Some(Alt { unit: "gal/min", to_si: gal_per_min, from_si: per_gal_per_min }),
+        _ => return None,
+    };
+    crate::fields::us_alt(same_as)
+}
+
+impl SizeField {
+    /// The unit the field is typed in under a system.
+    pub fn unit_in(&self, system: UnitSystem) -> &'static str {
+        match (system, us_alt(self.key)) {
+            (UnitSystem::UsCustomary, Some(a)) => a.unit,
+            _ => self.unit,
+        }
+    }
+
+    /// Typed value -> SI, under a system.
+    pub fn to_si_in(&self, system: UnitSystem, v: f64) -> f64 {
+        match (system, us_alt(self.key)) {
+            (UnitSystem::UsCustomary, Some(a)) => (a.to_si)(v),
+            _ => (self.to_si)(v),
+        }
+    }
+
+    /// SI -> the value shown, under a system.
+    pub fn from_si_in(&self, system: UnitSystem, si: f64) -> f64 {
+        match (system, us_alt(self.key)) {
+            (UnitSystem::UsCustomary, Some(a)) => (a.from_si)(si),
+            _ => (self.from_si)(si),
+        }
+    }
+
+    /// Whether the field's unit differs between the systems.
+    pub fn converts(&self) -> bool {
+        us_alt(self.key).is_some()
+    }
+}
+
+/// The text a unit switch writes for an SI value: four significant figures, for reading (the
+/// exact SI value stays pinned behind it while the text is unchanged).
+pub fn text_in(f: &SizeField, si: f64, system: UnitSystem) -> String {
+    let w = f.from_si_in(system, si);
+    if w == 0.0 || !w.is_finite() {
+        return units::plain(w);
+    }
+    let digits = 3 - w.abs().log10().floor() as i32;
+    let scale = 10f64.powi(digits);
+    units::plain((w * scale).round() / scale)
+}
+
 /// Looks a field up by key.
 pub fn size_field(key: &str) -> &'static SizeField {
     SIZE_FIELDS.iter().find(|f| f.key == key).unwrap_or(&SIZE_FIELDS[0])
@@ -289,31 +358,39 @@ impl TextProblem {
     }
 }
 
-/// A field's text in the core's SI unit: `Ok(None)` when empty.
-pub fn si_value(f: &SizeField, text: &str) -> Result<Option<f64>, TextProblem> {
+/// A field's text, typed in `system`'s unit, in the core's SI unit: `Ok(None)` when empty.
+pub fn si_value(f: &SizeField, text: &str, system: UnitSystem) -> Result<Option<f64>, TextProblem> {
     match parse_number(text) {
         Ok(None) => Ok(None),
         Err(TextError::NotANumber | TextError::Empty) => Err(TextProblem::NotANumber),
         Ok(Some(v)) if f.whole && (v.fract() != 0.0 || !(0.0..=1.0e6).contains(&v)) => {
             Err(TextProblem::NotWhole)
         }
-        Ok(Some(v)) => Ok(Some((f.to_si)(v))),
+        Ok(Some(v)) => Ok(Some(f.to_si_in(system, v))),
     }
 }
 
-/// Builds the request from the texts (looked up by key) and the choices, or lists every text
-/// that cannot be read.
-pub fn build_request(
+/// What a field's text means in SI: the reading [`build_request`] takes, by key.
+pub type Reading<'a> = &'a dyn Fn(&'static str) -> Result<Option<f64>, TextProblem>;
+
+/// Reads texts (looked up by key) as typed in `system`'s units.
+pub fn typed_in(
     text: &dyn Fn(&str) -> String,
-    c: &Choices,
-) -> Result<SizingRequest, Vec<(&'static str, TextProblem)>> {
+    system: UnitSystem,
+) -> impl Fn(&'static str) -> Result<Option<f64>, TextProblem> {
+    move |key| si_value(size_field(key), &text(key), system)
+}
+
+/// Builds the request from the fields' readings (see [`typed_in`]) and the choices, or lists
+/// every text that cannot be read.
+pub fn build_request(read: Reading, c: &Choices) -> Result<SizingRequest, Vec<(&'static str, TextProblem)>> {
     let mut problems = Vec::new();
     let mut get = |key: &'static str| -> Option<f64> {
         if !active(key, c) {
             return None;
         }
         let f = size_field(key);
-        match si_value(f, &text(key)) {
+        match read(key) {
             Ok(Some(v)) => Some(v),
             Ok(None) if f.optional => None,
             Ok(None) => {
@@ -422,10 +499,11 @@ fn bound(v: f64) -> String {
 
 /// The words beside a field for the core's error on it. A range is restated in the field's
 /// own unit (the core's bounds are SI); any other verdict is the core's own sentence.
-pub fn error_words(f: Option<&SizeField>, e: &FieldError, si: Option<f64>) -> String {
+pub fn error_words(f: Option<&SizeField>, e: &FieldError, si: Option<f64>, system: UnitSystem) -> String {
     if let (Some(f), Some(min), Some(max), Some(v)) = (f, e.min, e.max, si) {
-        let unit = if f.unit.is_empty() { String::new() } else { format!(" {}", f.unit) };
-        let (lo, hi) = ((f.from_si)(min), (f.from_si)(max));
+        let unit = f.unit_in(system);
+        let unit = if unit.is_empty() { String::new() } else { format!(" {unit}") };
+        let (lo, hi) = (f.from_si_in(system, min), f.from_si_in(system, max));
         if v <= min {
             let how = if e.message.contains("more than") { "more than" } else { "at least" };
             return format!("Must be {how} {}{unit}.", bound(lo));
@@ -446,7 +524,7 @@ pub fn unplaced(errors: &SizingErrors, c: &Choices) -> Vec<String> {
         .errors
         .iter()
         .filter(|e| shown_on(&e.field, c).is_none())
-        .map(|e| format!("{}: {}", e.field, error_words(None, e, None)))
+        .map(|e| format!("{}: {}", e.field, error_words(None, e, None, UnitSystem::Metric)))
         .collect()
 }
 
@@ -474,7 +552,8 @@ mod tests {
             }"#,
         )
         .unwrap();
-        assert_eq!(build_request(&starting_text, &Choices::default()), Ok(documented));
+        let metric = typed_in(&starting_text, UnitSystem::Metric);
+        assert_eq!(build_request(&metric, &Choices::default()), Ok(documented));
     }
 
     #[wasm_bindgen_test]
@@ -495,11 +574,44 @@ mod tests {
             "current" | "kg_per_day" | "max_heat" => "nonsense".to_string(),
             k => starting_text(k),
         };
-        let r = build_request(&text, &c).unwrap();
+        let r = build_request(&typed_in(&text, UnitSystem::Metric), &c).unwrap();
         assert_eq!(r.heat, HeatSupply::Electric { supply: ElectricSupply::Power { max_power_w: 6500.0 } });
         assert_eq!(r.cooling.max_flow_kg_per_s, Some(0.5));
         assert_eq!(r.limits.max_run_s, 9000.0);
         assert_eq!(r.harvest, Harvest::PerSeason { kg_per_season: 900.0, days: 15 });
+    }
+
+    #[wasm_bindgen_test]
+    fn us_customary_texts_are_read_in_the_plan_forms_us_units() {
+        // NIST SP 811 Appendix B.8: 1 lb = 0.453 592 37 kg, 1 ft = 0.3048 m,
+        // t/°C = (t/°F − 32)/1.8, 1 BTU/h = 0.293 071 1 W, 1 gal = 3.785 411 784 L.
+        let text = |key: &str| match key {
+            "kg_per_day" => "100".to_string(),
+            "altitude" => "1000".to_string(),
+            "inlet" => "59".to_string(),
+            "warmest" => "113".to_string(),
+            "max_heat" => "40000".to_string(),
+            "max_flow" => "5".to_string(),
+            k => starting_text(k),
+        };
+        let r = build_request(&typed_in(&text, UnitSystem::UsCustomary), &Choices::default()).unwrap();
+        let close = |a: f64, b: f64| (a - b).abs() <= 1e-12 * b.abs().max(1.0);
+        let Harvest::PerDay { kg_per_day, .. } = r.harvest else { panic!("per day") };
+        assert!(close(kg_per_day, 45.359237), "{kg_per_day}");
+        assert!(close(r.site.altitude_m, 304.8));
+        assert!(close(r.cooling.inlet_c, 15.0));
+        assert!(close(r.limits.warmest_cooling_water_c, 45.0));
+        let HeatSupply::Fuel { max_heat_input_w: Some(w), .. } = r.heat else { panic!("fuel") };
+        assert!(close(w, 11_722.844), "{w}");
+        assert!(close(r.cooling.max_flow_kg_per_s.unwrap(), 5.0 * 3.785411784 / 60.0));
+        // Hours, charges and days are the same in both systems.
+        assert_eq!(r.limits.max_run_s, 10_800.0);
+        assert_eq!(size_field("altitude").unit_in(UnitSystem::UsCustomary), "ft");
+        assert_eq!(size_field("longest_run").unit_in(UnitSystem::UsCustomary), "h");
+        // A switch writes a readable text; the value it stands for is pinned by the caller.
+        assert_eq!(text_in(size_field("kg_per_day"), 40.0, UnitSystem::UsCustomary), "88.18");
+        assert_eq!(text_in(size_field("inlet"), 15.0, UnitSystem::UsCustomary), "59");
+        assert_eq!(text_in(size_field("altitude"), 300.0, UnitSystem::UsCustomary), "984.3");
     }
 
     #[wasm_bindgen_test]
@@ -510,7 +622,7 @@ mod tests {
             "altitude" => String::new(),
             k => starting_text(k),
         };
-        let problems = build_request(&text, &Choices::default()).unwrap_err();
+        let problems = build_request(&typed_in(&text, UnitSystem::Metric), &Choices::default()).unwrap_err();
         assert!(problems.contains(&("charges", TextProblem::NotWhole)));
         assert!(problems.contains(&("inlet", TextProblem::NotANumber)));
         assert!(problems.contains(&("altitude", TextProblem::Empty)));
@@ -520,14 +632,27 @@ mod tests {
     #[wasm_bindgen_test]
     fn the_cores_bounds_are_restated_in_the_fields_unit() {
         let c = Choices::default();
-        let mut r = build_request(&starting_text, &c).unwrap();
+        let mut r = build_request(&typed_in(&starting_text, UnitSystem::Metric), &c).unwrap();
         r.limits.max_run_s = 100.0 * 3600.0;
         let e = stillroom_core::size(&r).unwrap_err();
         let err = e.on("limits.max_run_s").unwrap();
         assert_eq!(shown_on(&err.field, &c), Some("longest_run"));
         assert_eq!(
-            error_words(Some(size_field("longest_run")), err, Some(r.limits.max_run_s)),
+            error_words(Some(size_field("longest_run")), err, Some(r.limits.max_run_s), UnitSystem::Metric),
             "Must be at most 48 h."
+        );
+        // The same bound in US customary, where the field is in hours too; a temperature's in °F.
+        let err = stillroom_core::scenario::FieldError {
+            field: "limits.warmest_cooling_water_c".into(),
+            value: "150".into(),
+            valid: String::new(),
+            message: "must be at most 100".into(),
+            min: Some(0.0),
+            max: Some(100.0),
+        };
+        assert_eq!(
+            error_words(Some(size_field("warmest")), &err, Some(150.0), UnitSystem::UsCustomary),
+            "Must be at most 212 °F."
         );
         assert_eq!(
             shown_on("heat.supply", &Choices { supply: SupplyMode::Power, ..c.clone() }),
