@@ -6,6 +6,8 @@
 //! independent point by more than it admits fails here.
 
 use stillroom_core::compounds::{COMPOUNDS, Confidence, find};
+use stillroom_core::scenario::OilComposition;
+use stillroom_core::{Scenario, plan};
 
 const PA_PER_MMHG: f64 = 101_325.0 / 760.0;
 const R_J_PER_MOL_K: f64 = 8.314_462_618;
@@ -195,4 +197,21 @@ fn the_enthalpy_anchored_method_is_as_good_as_terpinen_4_ol_claims() {
         worst * 100.0,
         claimed * 100.0
     );
+}
+
+#[test]
+fn the_estimate_warning_states_the_rows_own_uncertainty() {
+    // The warning for an estimated law quotes the uncertainty the row states (γ-terpinene 0.1,
+    // menthone 0.3, terpinen-4-ol 0.5), not one figure for all.
+    let mut seen = 0;
+    for c in COMPOUNDS.iter().filter(|c| c.vapour_pressure.confidence == Confidence::Estimated) {
+        let mut s = Scenario::default();
+        s.oil.composition = OilComposition::Compound { id: c.id.to_string() };
+        let p = plan(&s).unwrap_or_else(|e| panic!("{}: {e:?}", c.id));
+        let w = p.warnings.iter().find(|w| w.code == "estimated_vapour_pressure").expect(c.id);
+        let want = format!("±{:.0} %", c.vapour_pressure.relative_uncertainty * 100.0);
+        assert!(w.message.contains(&want), "{}: {:?} lacks {want}", c.id, w.message);
+        seen += 1;
+    }
+    assert!(seen >= 3, "only {seen} estimated laws");
 }

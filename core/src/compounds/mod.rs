@@ -85,7 +85,8 @@ pub struct Compound {
     pub boiling_point_source: &'static str,
     pub vapour_pressure: VapourPressure,
     pub vapour_pressure_source: &'static str,
-    /// Solubility in water near 25 °C.
+    /// Solubility in water near 25 °C, used at any hydrosol temperature (no temperature
+    /// dependence is known to the table; see the table's header).
     pub water_solubility_kg_per_m3: f64,
     /// Relative uncertainty of the solubility (fraction).
     pub water_solubility_relative_uncertainty: f64,

@@ -25,7 +25,12 @@
 //!   acetate (490 K against 502-514 K), pulegone (491 K against 497 K) and citral 5392-40-5
 //!   (a 284-312 K fit that boils at 479 K against 502 K); evaluated with chemicals 1.5.2.
 //! - Water solubilities marked "from memory" were not checked against a source; they carry a
-//!   relative uncertainty of 0.5.
+//!   relative uncertainty of 0.5. Every solubility is a value near 25 °C and is used as is at the
+//!   hydrosol's temperature: no temperature dependence was obtained for any compound here.
+//!   Martins et al. (Fluid Phase Equilib. 2017) measured geraniol, linalool, citronellol,
+//!   thymol, eugenol, carvacrol and p-cymene at 298-323 K and report dissolution as endothermic
+//!   (solubility rising with temperature), but their values were not seen, so none is applied;
+//!   the dissolved oil of a warm receiver is therefore, if anything, understated.
 
 use super::*;
 
@@ -52,7 +57,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 292.59-428.91 K (as stored in chemicals 1.5.2, converted to log10 bar)",
         water_solubility_kg_per_m3: 0.0025,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 2.5 mg/L near 25 °C, from memory; within the 5-30 mg/L measured for terpene hydrocarbons by Fichan, Larroche & Gros, J. Chem. Eng. Data 44 (1999) 56-62",
+        water_solubility_source: "About 2.5 mg/L near 25 °C, from memory; within the 5-30 mg/L measured for terpene hydrocarbons by Fichan, Larroche & Gros, J. Chem. Eng. Data 44 (1999) 56-62; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8539 g/cm³ at 25 °C",
     },
     Compound {
@@ -75,7 +80,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 291.86-439.06 K (as stored in chemicals 1.5.2, converted to log10 bar)",
         water_solubility_kg_per_m3: 0.0049,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 4.9 mg/L near 25 °C, from memory; within the 5-30 mg/L measured for terpene hydrocarbons by Fichan, Larroche & Gros, J. Chem. Eng. Data 44 (1999) 56-62",
+        water_solubility_source: "About 4.9 mg/L near 25 °C, from memory; within the 5-30 mg/L measured for terpene hydrocarbons by Fichan, Larroche & Gros, J. Chem. Eng. Data 44 (1999) 56-62; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.860 g/cm³ at 25 °C",
     },
     Compound {
@@ -98,7 +103,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 290-450 K (as stored in chemicals 1.5.2); agrees with the 200 Pa at 298 K measured by Espinosa Díaz et al., Fluid Phase Equilib. (1999)",
         water_solubility_kg_per_m3: 0.0138,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 13.8 mg/L at 25 °C (measured by Massaldi & King, 1973; the number itself from memory)",
+        water_solubility_source: "About 13.8 mg/L at 25 °C (measured by Massaldi & King, 1973; the number itself from memory); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8411 g/cm³ at 20 °C",
     },
     Compound {
@@ -121,7 +126,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 287.7-444.7 K (as stored in chemicals 1.5.2, converted to log10 bar)",
         water_solubility_kg_per_m3: 0.005,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 4-6 mg/L near 25 °C, from memory (5 mg/L taken)",
+        water_solubility_source: "About 4-6 mg/L near 25 °C, from memory (5 mg/L taken); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8013 g/cm³ at 15 °C",
     },
     Compound {
@@ -144,7 +149,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Poling, Prausnitz & O'Connell, The Properties of Gases and Liquids, 5th ed., Antoine, 338.28-479.6 K (as stored in chemicals 1.5.2); the same curve as the Landolt-Börnstein IV/20 set",
         water_solubility_kg_per_m3: 0.023,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 23 mg/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        water_solubility_source: "About 23 mg/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8573 g/cm³ at 20 °C",
     },
     Compound {
@@ -177,7 +182,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Estimate: two-point Antoine (C = -43 K) through Tb 456.15 K (CRC Handbook) and the Lee-Kesler estimate 7470 Pa at 373.15 K (computed with chemicals 1.5.2, Tc/Pc from its tables); no measured correlation found",
         water_solubility_kg_per_m3: 0.009,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 9 mg/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 9 mg/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.849 g/cm³ at 20 °C",
     },
     Compound {
@@ -200,7 +205,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 323-434 K (as stored in chemicals 1.5.2); the NIST WebBook set (thermo 0.6.1) agrees within 0.2 % at 100 °C",
         water_solubility_kg_per_m3: 0.0046,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 4.6 mg/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 4.6 mg/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.842 g/cm³ for the liquid at 54 °C, from memory",
     },
     Compound {
@@ -218,15 +223,15 @@ pub static COMPOUNDS: &[Compound] = &[
             t_min_k: 313.0,
             t_max_k: 458.0,
             // The NIST WebBook set (313.7-452.1 K, as stored in thermo 0.6.1) gives 6758 Pa at
-            // 100 °C against this set's 5352, 26 % more, though it boils at 463.4 K, 3-5 K over
-            // the handbooks; this set reproduces the boiling point. 0.25 carries the spread.
-            relative_uncertainty: 0.25,
+            // 100 °C against this set's 5352, 26.3 % more, though it boils at 463.4 K, 3-5 K over
+            // the handbooks; this set reproduces the boiling point. 0.27 carries the spread.
+            relative_uncertainty: 0.27,
             confidence: Confidence::Measured,
         },
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 313-458 K (as stored in chemicals 1.5.2); the NIST WebBook set is 26 % higher at 100 °C",
         water_solubility_kg_per_m3: 0.0095,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 9.5 mg/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 9.5 mg/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8632 g/cm³ at 15 °C",
     },
     Compound {
@@ -249,7 +254,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 362-445 K (as stored in chemicals 1.5.2)",
         water_solubility_kg_per_m3: 0.005,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 5 mg/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 5 mg/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.867 g/cm³ at 20 °C, from memory",
     },
     Compound {
@@ -272,7 +277,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 315-448 K (as stored in chemicals 1.5.2)",
         water_solubility_kg_per_m3: 0.005,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 5 mg/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 5 mg/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8410 g/cm³ at 20 °C",
     },
     // ---------------------------------------------------------------- oxygenated monoterpenes
@@ -296,7 +301,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 288-449 K (as stored in chemicals 1.5.2)",
         water_solubility_kg_per_m3: 3.5,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 3.5 g/L at 21 °C, from memory",
+        water_solubility_source: "About 3.5 g/L at 21 °C, from memory; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.9267 g/cm³ at 20 °C",
     },
     Compound {
@@ -332,7 +337,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Two-point Antoine (assumed C = -43 K) through 27 Pa at 298.15 K (Espinosa Díaz et al., Fluid Phase Equilib. 1999) and Tb 471.77 K (NIST WebBook)",
         water_solubility_kg_per_m3: 1.59,
         water_solubility_relative_uncertainty: 0.1,
-        water_solubility_source: "1.6 g/L at 25 °C (International Chemical Safety Card, as quoted by French Wikipedia); 1.589 g/L (English Wikipedia infobox); 1.45 g/L (ChemicalBook)",
+        water_solubility_source: "1.6 g/L at 25 °C (International Chemical Safety Card, as quoted by French Wikipedia); 1.589 g/L (English Wikipedia infobox); 1.45 g/L (ChemicalBook); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: 0.870 g/cm³ at 15 °C (Frontiers in Bioengineering and Biotechnology, 2020, Table 1); 0.87 at 25 °C (ChemicalBook)",
     },
     Compound {
@@ -355,7 +360,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 328.6-493 K (as stored in chemicals 1.5.2, converted to log10 bar); the Landolt-Börnstein IV/20 set agrees within 0.3 % at 100 °C",
         water_solubility_kg_per_m3: 0.02,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.01-0.03 g/L, from memory (low confidence; 0.02 taken)",
+        water_solubility_source: "About 0.01-0.03 g/L, from memory (low confidence; 0.02 taken); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8950 g/cm³ at 20 °C",
     },
     Compound {
@@ -381,7 +386,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine for the liquid, 451.2-505.5 K (as stored in chemicals 1.5.2, converted to log10 bar); extrapolated below its range near 100 °C, where camphor is solid",
         water_solubility_kg_per_m3: 1.6,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 1.6 g/L near 25 °C, from memory",
+        water_solubility_source: "About 1.6 g/L near 25 °C, from memory; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.99 g/cm³ for the solid at 25 °C, from memory (no liquid value)",
     },
     Compound {
@@ -406,7 +411,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine for DL-menthol (89-78-1), 329-485 K (as stored in chemicals 1.5.2, converted to log10 bar); the Landolt-Börnstein IV/20 l-menthol set (372-487 K) is 6 % higher at 100 °C",
         water_solubility_kg_per_m3: 0.45,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.43-0.46 g/L near 25 °C, from memory",
+        water_solubility_source: "About 0.43-0.46 g/L near 25 °C, from memory; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, l-menthol (supercooled liquid) 0.9030 g/cm³ at 15 °C, taken for the DL liquid",
     },
     Compound {
@@ -438,7 +443,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Estimate: two-point Antoine (C = -43 K) through Tb 480.15 K (CRC Handbook) and the Lee-Kesler estimate 4179 Pa at 373.15 K (computed with chemicals 1.5.2, Tc/Pc from its tables); no measured correlation found",
         water_solubility_kg_per_m3: 0.69,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.69 g/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 0.69 g/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8954 g/cm³ at 20 °C",
     },
     Compound {
@@ -470,7 +475,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Two-point Antoine (assumed C = -43 K) through bp 79-80 °C at 7 mmHg (benchchem.com, citing the literature; low weight) and Tb 478.15 K (CRC Handbook); no published correlation found",
         water_solubility_kg_per_m3: 0.1,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.04-0.2 g/L near 25 °C, from memory (low confidence; 0.1 taken)",
+        water_solubility_source: "About 0.04-0.2 g/L near 25 °C, from memory (low confidence; 0.1 taken); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.853 g/cm³ at 20 °C",
     },
     Compound {
@@ -506,7 +511,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Estimate: Antoine (C = -43 K) through Tb 482.15 K (CRC Handbook) with the slope of ΔHvap 55.5 kJ/mol at 298 K (Gharagheizi et al. compilation, as tabulated in chemicals 1.5.2); no measured vapour pressure found",
         water_solubility_kg_per_m3: 0.7,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.4-1 g/L near 25 °C, from memory (low confidence; 0.7 taken)",
+        water_solubility_source: "About 0.4-1 g/L near 25 °C, from memory (low confidence; 0.7 taken); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.926 g/cm³ at 20 °C",
     },
     Compound {
@@ -529,7 +534,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine for carvone (99-49-0, stereoisomer unspecified), 330.6-500.7 K (as stored in chemicals 1.5.2, converted to log10 bar); the Landolt-Börnstein IV/20 set agrees within 0.3 % at 100 °C. Enantiomers share the curve",
         water_solubility_kg_per_m3: 1.3,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 1.3 g/L near 25 °C, from memory",
+        water_solubility_source: "About 1.3 g/L near 25 °C, from memory; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, (R)-carvone 0.9593 g/cm³ at 20 °C",
     },
     Compound {
@@ -552,7 +557,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for 3,7-dimethyl-2,6-octadienal, 334-501 K (as stored in chemicals 1.5.2)",
         water_solubility_kg_per_m3: 0.6,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.6 g/L near 20 °C for citral, from memory",
+        water_solubility_source: "About 0.6 g/L near 20 °C for citral, from memory; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8888 g/cm³ at 20 °C",
     },
     Compound {
@@ -575,7 +580,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 337.5-505 K (as stored in chemicals 1.5.2, converted to log10 bar)",
         water_solubility_kg_per_m3: 0.9,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.90 g/L at 20 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        water_solubility_source: "About 0.90 g/L at 20 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, supercooled liquid 0.970 g/cm³ at 25 °C",
     },
     Compound {
@@ -598,7 +603,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 343-510 K (as stored in chemicals 1.5.2, converted to log10 bar)",
         water_solubility_kg_per_m3: 1.25,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 1.25 g/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        water_solubility_source: "About 1.25 g/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.9772 g/cm³ at 20 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
     },
     Compound {
@@ -621,7 +626,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for bornyl acetate 76-49-3, 320-496 K (as stored in chemicals 1.5.2); enantiomers share the curve",
         water_solubility_kg_per_m3: 0.03,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.02-0.04 g/L near 25 °C, from memory (low confidence; 0.03 taken)",
+        water_solubility_source: "About 0.02-0.04 g/L near 25 °C, from memory (low confidence; 0.03 taken); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, l-bornyl acetate 0.982 g/cm³ at 25 °C (temperature read from the table's encoding, ±0.001 g/cm³). Melts near 27-29 °C (CRC): a liquid in the still",
     },
     Compound {
@@ -644,7 +649,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for β-thujone, 311-474 K (as stored in chemicals 1.5.2). Sage oil's α-thujone, its diastereomer (Tb 476.15 K against 475.65 K), is entered as this row: 0.1 for that (judgement)",
         water_solubility_kg_per_m3: 0.4,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.4 g/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 0.4 g/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.917 g/cm³ at 20 °C, from memory",
     },
     Compound {
@@ -667,7 +672,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 357-490.1 K (as stored in thermo 0.6.1, ln(p/Pa) form); the only published set found",
         water_solubility_kg_per_m3: 2.42,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "2.42 g/L (Wikipedia 'Terpineol' infobox, citing GESTIS, isomer mixture); 7.1 g/L at 25 °C is also quoted (smolecule.com, HSDB-type text): 0.5 for that spread",
+        water_solubility_source: "2.42 g/L (Wikipedia 'Terpineol' infobox, citing GESTIS, isomer mixture); 7.1 g/L at 25 °C is also quoted (smolecule.com, HSDB-type text): 0.5 for that spread; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: 0.93 g/cm³ (Wikipedia 'Terpineol' infobox, citing GESTIS, isomer mixture); 0.935 at 20 °C for the α-isomer, from memory",
     },
     Compound {
@@ -693,7 +698,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 346.7-516.5 K (as stored in thermo 0.6.1, ln(p/Pa) form); 574 Pa at 100 °C",
         water_solubility_kg_per_m3: 0.02,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 20 mg/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 20 mg/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.907-0.918 g/cm³, from memory; 0.910 at 20 °C taken",
     },
     // ---------------------------------------------------------------- phenylpropanoids
@@ -719,7 +724,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 351.6-526.7 K (as stored in chemicals 1.5.2, converted to log10 bar)",
         water_solubility_kg_per_m3: 2.46,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 2.46 g/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        water_solubility_source: "About 2.46 g/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0652 g/cm³ at 20 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
     },
     Compound {
@@ -735,19 +740,19 @@ pub static COMPOUNDS: &[Compound] = &[
         // The Landolt-Börnstein set filed under (E)-anethole 4180-23-8 (293-363 K) is a
         // low-temperature fit that puts Tb near 457 K; the set for anethole 104-46-1 is used.
         // Near 100 °C the two Landolt-Börnstein sets disagree: 1004 Pa (104-46-1, used) against
-        // 1159 Pa (4180-23-8, 293-363 K, 10 K extrapolated), 15 % apart (evaluated with
-        // chemicals 1.5.2); 0.1 carries that spread (judgement).
+        // 1159 Pa (4180-23-8, 293-363 K, 10 K extrapolated), 15.5 % apart (evaluated with
+        // chemicals 1.5.2); 0.16 carries that spread (the other set within 1σ).
         vapour_pressure: VapourPressure {
             form: CorrelationForm::AntoineLnPa { a: 22.94533, b: 5371.491228, c: -38.144 },
             t_min_k: 335.0,
             t_max_k: 508.0,
-            relative_uncertainty: 0.1,
+            relative_uncertainty: 0.16,
             confidence: Confidence::Measured,
         },
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for anethole 104-46-1 (4-propenylanisole, mixed stereoisomers), 335-508 K (as stored in chemicals 1.5.2); the set filed under 4180-23-8 is 15 % higher at 100 °C",
         water_solubility_kg_per_m3: 0.11,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.11 g/L near 25 °C, from memory",
+        water_solubility_source: "About 0.11 g/L near 25 °C, from memory; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.9882 g/cm³ at 20 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
     },
     Compound {
@@ -770,7 +775,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 325.8-488 K (as stored in chemicals 1.5.2, converted to log10 bar)",
         water_solubility_kg_per_m3: 0.18,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.18 g/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 0.18 g/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.965 g/cm³ at 25 °C",
     },
     Compound {
@@ -793,7 +798,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 374-555 K (as stored in chemicals 1.5.2)",
         water_solubility_kg_per_m3: 0.4,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.4 g/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 0.4 g/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0806 g/cm³ at 20 °C",
     },
     Compound {
@@ -816,7 +821,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for cinnamaldehyde 104-55-2, 349-519 K (as stored in chemicals 1.5.2)",
         water_solubility_kg_per_m3: 1.1,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 1.1 g/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 1.1 g/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0497 g/cm³ at 20 °C",
     },
     // ---------------------------------------------------------------- sesquiterpenes
@@ -850,7 +855,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Fitted here (Antoine, C = -43 K, least squares) to bp 118-119 °C at 9.7 mmHg and 129-130 °C at 14 mmHg (Merck Index) and 529.1 K at 100.7 kPa (J. Chem. Eng. Data 65 (2020) 3770); no published correlation found",
         water_solubility_kg_per_m3: 0.00003,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.01-0.05 mg/L, from memory (low confidence; 0.03 mg/L taken)",
+        water_solubility_source: "About 0.01-0.05 mg/L, from memory (low confidence; 0.03 mg/L taken); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.9075 g/cm³ at 20 °C",
     },
     // ---------------------------------------------------------------- rose alcohols
@@ -874,7 +879,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for 3,7-dimethyl-trans-2,6-octadien-1-ol, 342-503 K (as stored in chemicals 1.5.2)",
         water_solubility_kg_per_m3: 0.69,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.69 g/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        water_solubility_source: "About 0.69 g/L near 25 °C, from memory (measured at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8894 g/cm³ at 20 °C",
     },
     Compound {
@@ -900,7 +905,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 339.6-494.7 K (as stored in chemicals 1.5.2, converted to log10 bar); the Landolt-Börnstein IV/20 set (366-499 K) is 13 % lower at 100 °C",
         water_solubility_kg_per_m3: 0.2,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.2 g/L near 25 °C, from memory (measured for DL-citronellol at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen)",
+        water_solubility_source: "About 0.2 g/L near 25 °C, from memory (measured for DL-citronellol at 298-323 K by Martins et al., Fluid Phase Equilib. 2017; their values not seen); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: about 0.855 g/cm³ at 20 °C, from memory",
     },
     Compound {
@@ -925,7 +930,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "NIST Chemistry WebBook Antoine, 406.2-492.1 K (as stored in chemicals 1.5.2, converted to log10 bar); extrapolated about 35 K below its range at 95-100 °C",
         water_solubility_kg_per_m3: 21.0,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 20-22 g/L near 25 °C, from memory (21 taken)",
+        water_solubility_source: "About 20-22 g/L near 25 °C, from memory (21 taken); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0202 g/cm³ at 20 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
     },
     Compound {
@@ -948,7 +953,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine for nerol ((Z)-3,7-dimethyl-2,6-octadien-1-ol), 335-499 K (as stored in chemicals 1.5.2)",
         water_solubility_kg_per_m3: 1.3,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 1.3 g/L near 25 °C, from memory (low confidence)",
+        water_solubility_source: "About 1.3 g/L near 25 °C, from memory (low confidence); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.8756 g/cm³ at 20 °C",
     },
     // ---------------------------------------------------------------- other
@@ -975,14 +980,14 @@ pub static COMPOUNDS: &[Compound] = &[
             t_max_k: 715.0,
             // Other published sets at 100 °C (thermo 0.6.1): VDI PPDS 2049, Landolt-Börnstein
             // 2054, DIPPR (Perry 8th ed.) 2065, NIST WebBook 2215, Wagner (McGarry) 2307 Pa, against
-            // this set's 2086: a 12.6 % spread, carried as 0.1.
-            relative_uncertainty: 0.1,
+            // this set's 2086: -1.8 % to +10.6 % from it, carried as 0.11.
+            relative_uncertainty: 0.11,
             confidence: Confidence::Measured,
         },
         vapour_pressure_source: "Poling, Prausnitz & O'Connell, The Properties of Gases and Liquids, 5th ed., Wagner 2.5,5, 257.85-715 K (as stored in chemicals 1.5.2)",
         water_solubility_kg_per_m3: 42.0,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 40-43 g/L near 25 °C, from memory (42 taken)",
+        water_solubility_source: "About 40-43 g/L near 25 °C, from memory (42 taken); no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.0419 g/cm³ at 24 °C",
     },
     Compound {
@@ -1005,7 +1010,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 327-496 K (as stored in chemicals 1.5.2)",
         water_solubility_kg_per_m3: 0.7,
         water_solubility_relative_uncertainty: 0.5,
-        water_solubility_source: "About 0.7 g/L near 25 °C, from memory",
+        water_solubility_source: "About 0.7 g/L near 25 °C, from memory; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 1.1812 g/cm³ at 25 °C (temperature read from the table's encoding, ±0.001 g/cm³)",
     },
     Compound {
@@ -1031,7 +1036,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 462-639 K (as stored in chemicals 1.5.2); extrapolated about 90 K below its range near 100 °C",
         water_solubility_kg_per_m3: 1e-06,
         water_solubility_relative_uncertainty: 1.0,
-        water_solubility_source: "Practically insoluble (long-chain alkane, well under 1 mg/L), from memory",
+        water_solubility_source: "Practically insoluble (long-chain alkane, well under 1 mg/L), from memory; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.7855 g/cm³ at 20 °C (temperature read from the table's encoding)",
     },
     Compound {
@@ -1057,7 +1062,7 @@ pub static COMPOUNDS: &[Compound] = &[
         vapour_pressure_source: "Landolt-Börnstein IV/20 (Dykyj, Svoboda, Wilhoit, Frenkel, Hall) Antoine, 393-630 K (as stored in chemicals 1.5.2)",
         water_solubility_kg_per_m3: 1e-06,
         water_solubility_relative_uncertainty: 1.0,
-        water_solubility_source: "Practically insoluble (long-chain alkane, well under 1 mg/L), from memory",
+        water_solubility_source: "Practically insoluble (long-chain alkane, well under 1 mg/L), from memory; no temperature dependence known: used as is at the hydrosol's temperature",
         property_source: "Molar mass: IUPAC atomic weights (computed with chemicals 1.5.2); density: CRC Handbook, Physical Constants of Organic Compounds, 0.7919 g/cm³ at 20 °C (temperature read from the table's encoding)",
     },
 ];

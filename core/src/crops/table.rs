@@ -1317,8 +1317,10 @@ mod tests {
                 c.id,
                 run
             );
+            // 20 %: the run a table row quotes and the 3/k of its own constant are one figure
+            // read two ways (the earlier 25 % let lavender's 45 min stand against 3/k = 60).
             assert!(
-                (run.typical - t95).abs() <= 0.25 * t95,
+                (run.typical - t95).abs() <= 0.2 * t95,
                 "{}: typical run {} min against 3/k = {t95:.0} min",
                 c.id,
                 run.typical
@@ -1349,10 +1351,25 @@ mod tests {
         }
     }
 
+    /// Rows whose whole oil is one library compound standing in for compounds the library lacks:
+    /// they cover 100 % by construction, so the coverage test cannot judge them; they are named
+    /// here and must say so in their composition source.
+    const WHOLE_OIL_STAND_INS: &[&str] = &["german-chamomile", "cedarwood"];
+
     #[test]
     fn listed_compounds_cover_most_of_the_oil() {
         // Renormalising over the listed compounds is only fair when they are most of the oil.
         for c in CROPS {
+            let single = c.composition.len() == 1 && c.composition[0].1 >= 0.999;
+            if WHOLE_OIL_STAND_INS.contains(&c.id) {
+                assert!(
+                    single && c.composition_source.contains("stands in"),
+                    "{}: not a marked stand-in",
+                    c.id
+                );
+                continue;
+            }
+            assert!(!single, "{}: one compound as the whole oil is a stand-in; name it as one", c.id);
             let total: f64 = c.composition.iter().map(|&(_, x)| x).sum();
             assert!(total >= 0.7, "{}: listed compounds cover only {:.0} %", c.id, total * 100.0);
         }

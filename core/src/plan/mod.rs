@@ -294,7 +294,8 @@ output! {
         pub oil_volume_m3: Range,
         /// Separable oil as % of the charge mass.
         pub recovery_percent_of_plant: Range,
-        /// Oil dissolved in the kept hydrosol, at the separator's temperature (central case).
+        /// Oil dissolved in the kept hydrosol (central case), from each compound's solubility
+        /// near 25 °C: no temperature dependence is applied, none being known to the table.
         pub dissolved_in_hydrosol_kg: f64,
         /// Dissolved oil over oil carried over (central case).
         pub dissolved_share: f64,

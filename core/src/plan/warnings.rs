@@ -140,11 +140,19 @@ fn data_warnings(f: &Facts, list: &mut Vec<Warning>) {
             "Late in the run the boiling temperature leaves a correlation's fitted range; the last cuts are less certain.".to_string(),
         );
     }
-    for c in components.iter().filter(|c| c.confidence == Confidence::Estimated) {
+    // Each estimate with the uncertainty its own row states (1σ near 95-100 °C).
+    for (c, k) in components.iter().zip(&f.resolved.oil.components) {
+        if c.confidence != Confidence::Estimated {
+            continue;
+        }
         warn(
             list,
             "estimated_vapour_pressure",
-            format!("{} has no measured vapour-pressure correlation; an estimate (±30 %) is used.", c.name),
+            format!(
+                "{} has no measured vapour-pressure correlation; an estimate (±{:.0} %) is used.",
+                c.name,
+                k.vapour_pressure.relative_uncertainty * 100.0
+            ),
         );
     }
 }
