@@ -82,10 +82,16 @@ thread_local! {
 
 /// Runs `f` with `system` as the system the formatters answer in.
 pub fn with_system<R>(system: UnitSystem, f: impl FnOnce() -> R) -> R {
-    let before = SYSTEM.with(|s| s.replace(system));
-    let out = f();
-    SYSTEM.with(|s| s.set(before));
-    out
+    /// Puts the system back even if `f` panics, so one failing check cannot leak its
+    /// units into the next.
+    struct Restore(UnitSystem);
+    impl Drop for Restore {
+        fn drop(&mut self) {
+            SYSTEM.with(|s| s.set(self.0));
+        }
+    }
+    let _restore = Restore(SYSTEM.with(|s| s.replace(system)));
+    f()
 }
 
 /// The system in force (see [`with_system`]).
@@ -161,21 +167,26 @@ pub fn limit(v: f64, up: bool) -> String {
     plain(r / scale).replace('-', "−")
 }
 
-/// A number to about three significant figures.
+/// A number to about three significant figures. The decimals follow the value as it will
+/// be shown, so 0.99999 reads "1.00" rather than "1.000".
 pub fn sig3(v: f64) -> String {
-    let a = v.abs();
-    let decimals = if a >= 100.0 {
-        0
-    } else if a >= 10.0 {
-        1
-    } else if a >= 1.0 {
-        2
-    } else if a >= 0.1 {
-        3
-    } else {
-        4
+    let decimals_for = |a: f64| -> i32 {
+        if a >= 100.0 {
+            0
+        } else if a >= 10.0 {
+            1
+        } else if a >= 1.0 {
+            2
+        } else if a >= 0.1 {
+            3
+        } else {
+            4
+        }
     };
-    fixed(v, decimals)
+    let first = decimals_for(v.abs());
+    let scale = 10f64.powi(first);
+    let shown = (v.abs() * scale).round() / scale;
+    fixed(v, decimals_for(shown).min(first) as usize)
 }
 
 /// Air pressure: kPa, or inHg (a barometer's unit) in US customary.
@@ -447,6 +458,16 @@ mod tests {
         assert_eq!(limit(6000.0, false), "6000");
         assert_eq!(limit(-500.0, true), "−500");
         assert_eq!(limit(202.97, false), "202.9");
+    }
+
+    #[wasm_bindgen_test]
+    fn three_figures_follow_the_value_as_shown() {
+        assert_eq!(sig3(0.999_999_9), "1.00");
+        assert_eq!(sig3(99.97), "100");
+        assert_eq!(sig3(9.996), "10.0");
+        assert_eq!(sig3(0.123_45), "0.123");
+        assert_eq!(sig3(1234.4), "1234");
+        assert_eq!(sig3(-0.999_99), "−1.00");
     }
 
     #[wasm_bindgen_test]
