@@ -201,6 +201,56 @@ async fn a_typed_request_gives_the_design_the_core_gives() -> Result<(), BoxErro
     page.close().await
 }
 
+/// Larkfield's request held to a short working day: the optional limit reaches the core, and
+/// the design it gives is not the unlimited one. Too little water per charge is refused beside
+/// its field with the core's reason (a tub's coil needs its cooling water).
+#[tokio::test]
+async fn a_working_day_and_a_water_limit_reach_the_design() -> Result<(), BoxError> {
+    let free = size(&larkfield(40.0)).map_err(|e| format!("Larkfield must be sizeable: {e}"))?;
+    let mut held = larkfield(40.0);
+    held.limits.working_day_s = Some(3.5 * 3600.0);
+    let want = size(&held).map_err(|e| format!("the held request must be sizeable: {e}"))?;
+    assert!(
+        want.still.volume_m3.rounded != free.still.volume_m3.rounded
+            || want.heat.heat_input_w.rounded != free.heat.heat_input_w.rounded,
+        "the invented limit must bind, or this test shows nothing: free day {} s",
+        free.planned.day_time_s
+    );
+    assert!(want.planned.day_time_s <= 3.5 * 3600.0);
+    let too_little = 0.5 * want.planned.water_per_run_kg;
+    let page = browser::open().await?;
+    fresh(&page).await?;
+    let c = &page.client;
+    click(c, "mode-first").await?;
+    wait_text(c, "[data-out=fs_still]", |t| t == free.still.volume_m3.label).await?;
+    set_field(c, "working_day", "3.5").await?;
+    wait_text(c, "[data-out=fs_heat]", |t| t == want.heat.heat_input_w.label).await?;
+    assert_eq!(card_si(c, "fs_still").await?, want.still.volume_m3.rounded);
+    set_field(c, "max_water", &format!("{too_little:.0}")).await?;
+    wait_text(c, "#fs-e-max_water", |t| t.contains("allow more water")).await?;
+    // Emptied (clearing alone sends no input event, so the text is set as a keystroke would).
+    c.execute(
+        r#"const el = document.getElementById("fs-max_water");
+           el.value = ""; el.dispatchEvent(new Event("input", { bubbles: true }));"#,
+        vec![],
+    )
+    .await?;
+    wait_text(c, "#fs-e-max_water", |t| t.is_empty()).await?;
+    // In US units the water limit reads in gallons (1 gal = 3.785 411 784 L, SP 811) and the
+    // design underneath stays the same.
+    set_field(c, "max_water", "1500").await?;
+    click(c, "mode-plan").await?;
+    click(c, "units-us").await?;
+    click(c, "mode-first").await?;
+    wait_text(c, "label[for=fs-max_water] .unit", |t| t == "gal").await?;
+    let gal: f64 = value_of(c, "max_water").await?.parse()?;
+    assert!((gal * GAL_M3 * 1e3 - 1500.0).abs() < 0.5, "{gal} gal");
+    assert_eq!(value_of(c, "working_day").await?, "3.5");
+    assert_eq!(card_si(c, "fs_heat").await?, want.heat.heat_input_w.rounded);
+    assert_eq!(card_si(c, "fs_still").await?, want.still.volume_m3.rounded);
+    page.close().await
+}
+
 #[tokio::test]
 async fn a_bad_field_is_explained_beside_it() -> Result<(), BoxError> {
     let page = browser::open().await?;

@@ -416,8 +416,22 @@ const SEA_LEVEL_BOILING_C: f64 = 99.974_3;
 /// assert!(p.run.distillate_steam_kg > p.codistillation.min_steam_to_target_kg);
 /// ```
 pub fn plan(scenario: &Scenario) -> Result<Plan, ScenarioErrors> {
+    plan_with(scenario, Doubt::Swept)
+}
+
+/// Whether a plan sweeps its inputs' doubt for the ranges.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub(crate) enum Doubt {
+    /// Every range from the swings of its inputs (what [`plan`] gives).
+    Swept,
+    /// Every range collapsed on its central value: for the sizing search, whose trials are
+    /// judged on central values only and planned again in full once chosen.
+    CentralOnly,
+}
+
+pub(crate) fn plan_with(scenario: &Scenario, doubt: Doubt) -> Result<Plan, ScenarioErrors> {
     let resolved = validate(scenario)?;
-    let plan = compute(scenario, &resolved).map_err(|e| ScenarioErrors { errors: vec![*e] })?;
+    let plan = compute(scenario, &resolved, doubt).map_err(|e| ScenarioErrors { errors: vec![*e] })?;
     sanity::checked(plan)
 }
 
@@ -457,7 +471,7 @@ fn compute_error(field: &str, value: f64, valid: &str, message: &str) -> Box<Fie
 }
 
 /// The stages in the order of the run, each reading the earlier stages' results.
-fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
+fn compute(s: &Scenario, r: &Resolved, doubt: Doubt) -> Result<Plan, Box<FieldError>> {
     let site = site::site(r)?;
     let eq = equilibrium::equilibrium(s, r, &site)?;
     let knobs = knobs::Knobs::CENTRAL;
@@ -489,7 +503,7 @@ fn compute(s: &Scenario, r: &Resolved) -> Result<Plan, Box<FieldError>> {
         oil_kg: balance.separable_kg,
         separator_volume_m3: separator.volume_m3,
     };
-    let (spreads, failed_ends) = ranges::ranges(s, r, &site, &eq, &central);
+    let (spreads, failed_ends) = ranges::ranges(s, r, &site, &eq, &central, doubt == Doubt::Swept);
     let ranges = plan_ranges(&spreads, failed_ends);
     let yield_estimate = yield_plan(s, r, &balance, &ranges.oil_kg);
     let still_capacity_kg = season::still_capacity_kg(s, r);
@@ -598,4 +612,54 @@ pub(crate) fn component_for(id: &str, custom: &[CustomCompound]) -> Option<(Comp
         },
         Confidence::UserSupplied,
     ))
+}
+
+#[cfg(test)]
+mod doubt_tests {
+    use super::*;
+    use crate::crops::CROPS;
+
+    /// The sizing search judges trials on plans that skip the doubt sweep. That is only sound
+    /// if skipping it leaves every central figure the full plan gives exactly as it is.
+    #[test]
+    fn a_central_only_plan_has_the_full_plans_central_figures() {
+        for crop in CROPS {
+            let mut s = Scenario::default();
+            s.charge.crop = Some(crop.id.to_string());
+            let (Ok(full), Ok(central)) = (plan(&s), plan_with(&s, Doubt::CentralOnly)) else {
+                continue;
+            };
+            let json = |p: &Plan| {
+                serde_json::to_value((
+                    &p.site,
+                    &p.oil,
+                    &p.codistillation,
+                    &p.run,
+                    &p.energy,
+                    &p.condenser,
+                    &p.separator,
+                    &p.water_use,
+                    &p.season,
+                ))
+                .unwrap()
+            };
+            assert_eq!(json(&full), json(&central), "{}", crop.id);
+            let (f, c) = (&full.ranges, &central.ranges);
+            for (name, f, c) in [
+                ("steam", &f.steam_kg, &c.steam_kg),
+                ("run time", &f.run_time_s, &c.run_time_s),
+                ("total time", &f.total_time_s, &c.total_time_s),
+                ("water", &f.water_total_kg, &c.water_total_kg),
+                ("oil", &f.oil_kg, &c.oil_kg),
+                ("separator", &f.separator_volume_m3, &c.separator_volume_m3),
+            ] {
+                assert_eq!(f.central, c.central, "{} {name}", crop.id);
+                assert!(c.low == c.central && c.high == c.central, "{} {name}: {c:?}", crop.id);
+                // And the full plan does sweep: its steam range is not a point.
+                if name == "steam" {
+                    assert!(f.high > f.central, "{} {name}: {f:?}", crop.id);
+                }
+            }
+        }
+    }
 }

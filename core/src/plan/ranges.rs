@@ -194,19 +194,22 @@ fn swings(s: &Scenario, r: &Resolved) -> Vec<(Uncertainty, [(Resolved, Knobs); 2
 
 /// Each headline's range and its biggest contributor. An input end whose plan fails (e.g. a
 /// boiler too small at its lowest efficiency) is left out of the swing and counted in `failed`.
+/// Without `swept`, no input is swung and every range is its central value.
 pub(super) fn ranges(
     s: &Scenario,
     r: &Resolved,
     site: &Site,
     eq: &Equilibrium,
     central: &Headline,
+    swept: bool,
 ) -> (Vec<Spread>, u32) {
     let c = central.values();
     let mut down = [0.0f64; 8];
     let mut up = [0.0f64; 8];
     let mut biggest = [(0.0f64, Uncertainty::OilContent); 8];
     let mut failed = 0;
-    for (which, ends) in swings(s, r) {
+    let swung = if swept { swings(s, r) } else { Vec::new() };
+    for (which, ends) in swung {
         for (r2, k) in &ends {
             let Ok(h) = downstream(s, r2, site, eq, k) else {
                 failed += 1;

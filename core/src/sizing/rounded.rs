@@ -8,7 +8,7 @@ use super::exact::{Exact, search_equipment, shortfall_error};
 use super::request::{Needs, SizingErrors, SizingRequest, num};
 use super::search::{bracket_up, smallest_passing};
 use super::trial::{self, Equipment, Shortfall, Trial, VesselChoice};
-use crate::plan::{Plan, plan};
+use crate::plan::{Doubt, Plan, plan_with};
 use crate::scenario::{CondenserKind, Scenario};
 use crate::water;
 
@@ -133,7 +133,7 @@ pub(super) struct TubChoice {
 fn tub_holds(s: &Scenario, water_kg: f64, warmest_c: f64) -> bool {
     let mut s = s.clone();
     s.condenser.tub_water_kg = water_kg;
-    plan(&s)
+    plan_with(&s, Doubt::CentralOnly)
         .map(|p| {
             p.condenser.tub_feed_from_s.is_none()
                 && p.condenser.tub_end_c.is_some_and(|t| t <= warmest_c + 1e-9)

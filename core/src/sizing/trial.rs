@@ -5,7 +5,7 @@ use super::catalogue::{self, VESSEL_HEIGHT_TO_DIAMETER};
 use super::request::{Needs, SizingErrors, SizingRequest};
 use super::vessel::{self, Stack};
 use crate::heat;
-use crate::plan::{Plan, plan};
+use crate::plan::{Doubt, Plan, plan_with};
 use crate::scenario::{CondenserKind, Scenario, ScenarioErrors};
 
 /// Margin on the water boiled off over a charge: the first charge's evaporation is a plan, not a
@@ -140,7 +140,7 @@ pub(super) fn run(needs: &Needs, req: &SizingRequest, eq: &Equipment) -> Result<
         };
         let stack = vessel::stack(v, VESSEL_HEIGHT_TO_DIAMETER, boiled);
         let scenario = scenario(needs, req, eq, v, stack.water_fill_kg);
-        let p = plan(&scenario)?;
+        let p = plan_with(&scenario, Doubt::CentralOnly)?;
         let need = (p.run.boiler_water_evaporated_kg - p.run.returned_to_boiler_kg).max(0.0);
         let settled =
             p.run.refills == 0 && boiled >= need && boiled <= need * (1.0 + 2.0 * BOILER_WATER_MARGIN);

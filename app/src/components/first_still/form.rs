@@ -234,6 +234,8 @@ pub fn FirstStillForm() -> impl IntoView {
             <h2 id="h-fs-limits">"What to hold to"</h2>
             <SizeInput key="charges" />
             <SizeInput key="longest_run" />
+            <SizeInput key="max_water" />
+            <SizeInput key="working_day" />
             <SizeInput key="warmest" />
         </section>
     }

@@ -204,6 +204,33 @@ pub const SIZE_FIELDS: &[SizeField] = &[
             "3",
         )
     },
+    SizeField {
+        optional: true,
+        // A litre of water taken as a kilogram, as the cooling flow's field does.
+        to_si: same,
+        from_si: same,
+        ..field(
+            "max_water",
+            "limits.max_water_per_run_kg",
+            "Most water a charge may use",
+            "L",
+            "Boiler feed and cooling water together. Leave empty if there is plenty.",
+            "",
+        )
+    },
+    SizeField {
+        optional: true,
+        to_si: hours,
+        from_si: per_hours,
+        ..field(
+            "working_day",
+            "limits.working_day_s",
+            "Hours you can work in a day",
+            "h",
+            "Every charge, its run and the turnarounds fit inside it. Leave empty for no limit.",
+            "",
+        )
+    },
     field(
         "warmest",
         "limits.warmest_cooling_water_c",
@@ -223,6 +250,14 @@ fn per_gal_per_min(kg_per_s: f64) -> f64 {
     kg_per_s * 60.0 / (sp811::GAL_M3 * 1e3)
 }
 
+/// US gallons of water -> kg, a litre taken as a kilogram (NIST SP 811: 1 gal = 3.785 411 784 L).
+fn gal_to_kg(v: f64) -> f64 {
+    v * sp811::GAL_M3 * 1e3
+}
+fn kg_to_gal(kg: f64) -> f64 {
+    kg / (sp811::GAL_M3 * 1e3)
+}
+
 /// A field's US customary unit where it differs from the metric one: the plan form's unit for
 /// the same quantity (ft, lb, °F, BTU/h), and gal/min for the cooling water's flow. Electric
 /// power stays in kW, as US supplies are rated.
@@ -233,6 +268,7 @@ pub fn us_alt(key: &str) -> Option<Alt> {
         "inlet" | "warmest" => "cooling_in",
         "max_heat" => "heat_input",
         "max_flow" => return Some(Alt { unit: "gal/min", to_si: gal_per_min, from_si: per_gal_per_min }),
+        "max_water" => return Some(Alt { unit: "gal", to_si: gal_to_kg, from_si: kg_to_gal }),
         _ => return None,
     };
     crate::fields::us_alt(same_as)
@@ -436,6 +472,8 @@ pub fn build_request(read: Reading, c: &Choices) -> Result<SizingRequest, Vec<(&
     let charges = get("charges");
     let longest = get("longest_run");
     let warmest = get("warmest");
+    let max_water = get("max_water");
+    let working_day = get("working_day");
     let (
         Some(harvest),
         Some(altitude_m),
@@ -466,9 +504,9 @@ pub fn build_request(read: Reading, c: &Choices) -> Result<SizingRequest, Vec<(&
         limits: Limits {
             max_charges_per_day: charges as u32,
             max_run_s,
-            max_water_per_run_kg: None,
+            max_water_per_run_kg: max_water,
             warmest_cooling_water_c: warmest,
-            working_day_s: None,
+            working_day_s: working_day,
         },
         packing_density_kg_per_m3: None,
         steam_rate_kg_per_h_per_kg: None,
@@ -568,6 +606,8 @@ mod tests {
             "max_power" => "6,5".to_string(),
             "max_flow" => "30".to_string(),
             "longest_run" => "2.5".to_string(),
+            "max_water" => "800".to_string(),
+            "working_day" => "9.5".to_string(),
             "kg_per_season" => "900".to_string(),
             "season_days" => "15".to_string(),
             // Hidden for these choices: never read.
@@ -578,6 +618,8 @@ mod tests {
         assert_eq!(r.heat, HeatSupply::Electric { supply: ElectricSupply::Power { max_power_w: 6500.0 } });
         assert_eq!(r.cooling.max_flow_kg_per_s, Some(0.5));
         assert_eq!(r.limits.max_run_s, 9000.0);
+        assert_eq!(r.limits.max_water_per_run_kg, Some(800.0));
+        assert_eq!(r.limits.working_day_s, Some(34_200.0));
         assert_eq!(r.harvest, Harvest::PerSeason { kg_per_season: 900.0, days: 15 });
     }
 
@@ -592,6 +634,7 @@ mod tests {
             "warmest" => "113".to_string(),
             "max_heat" => "40000".to_string(),
             "max_flow" => "5".to_string(),
+            "max_water" => "200".to_string(),
             k => starting_text(k),
         };
         let r = build_request(&typed_in(&text, UnitSystem::UsCustomary), &Choices::default()).unwrap();
@@ -604,6 +647,9 @@ mod tests {
         let HeatSupply::Fuel { max_heat_input_w: Some(w), .. } = r.heat else { panic!("fuel") };
         assert!(close(w, 11_722.844), "{w}");
         assert!(close(r.cooling.max_flow_kg_per_s.unwrap(), 5.0 * 3.785411784 / 60.0));
+        assert!(close(r.limits.max_water_per_run_kg.unwrap(), 757.0823568));
+        // Left empty, as they start: no limit.
+        assert_eq!(r.limits.working_day_s, None);
         // Hours, charges and days are the same in both systems.
         assert_eq!(r.limits.max_run_s, 10_800.0);
         assert_eq!(size_field("altitude").unit_in(UnitSystem::UsCustomary), "ft");
