@@ -730,8 +730,8 @@ pub static COMPOUNDS: &[Compound] = &[
             form: CorrelationForm::AntoineLnPa { a: 22.796767, b: 5164.106599, c: -42.074 },
             t_min_k: 331.0,
             t_max_k: 500.0,
-            // One measured set; the handbooks' boiling points span 496-503 K, about 10 % in
-            // pressure near the boiling point: 0.1.
+            // One measured set; it boils at 500.26 K, within 4.1 K of every handbook value
+            // (496.15-502.65 K), about 10 % in pressure there (d ln p/dT = 0.025 /K): 0.1.
             relative_uncertainty: 0.1,
             confidence: Confidence::Measured,
         },
