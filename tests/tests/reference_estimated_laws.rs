@@ -144,6 +144,11 @@ fn every_law_not_published_as_such_is_checked_here() {
         .chain(ENTHALPIES.iter().map(|e| e.0))
         .collect();
     for c in COMPOUNDS.iter().filter(|c| c.vapour_pressure.confidence != Confidence::Measured) {
+        // Isomer-shifted estimates are held by their method's test below, against its worst miss.
+        if ISOMER_SHIFTED.iter().any(|(id, _)| *id == c.id) {
+            assert!(c.vapour_pressure.relative_uncertainty >= 0.4, "{}: must say it is uncertain", c.id);
+            continue;
+        }
         if c.id == "terpinen-4-ol" {
             assert!(c.vapour_pressure.relative_uncertainty >= 0.4, "unchecked law must say it is uncertain");
             continue;
@@ -214,4 +219,71 @@ fn the_estimate_warning_states_the_rows_own_uncertainty() {
         seen += 1;
     }
     assert!(seen >= 3, "only {seen} estimated laws");
+}
+
+/// Estimates made by the isomer-shifted method, with the measured isomer each was built from:
+/// that isomer's law times a constant, so that it boils at the compound's handbook boiling point.
+const ISOMER_SHIFTED: &[(&str, &str)] =
+    &[("sabinene", "beta-pinene"), ("alpha-terpinene", "alpha-phellandrene")];
+
+/// The measured C10H16 sets of the table (NIST WebBook and Landolt-Börnstein IV/20 sets, as
+/// stored in chemicals 1.5.2), the pool the method draws its isomer from.
+const C10H16_MEASURED: &[&str] = &[
+    "alpha-pinene",
+    "beta-pinene",
+    "camphene",
+    "d-limonene",
+    "myrcene",
+    "terpinolene",
+    "delta-3-carene",
+    "alpha-phellandrene",
+];
+
+/// ln p of `iso`'s law moved to boil at `tb_k`.
+fn shifted_ln_p(iso: &str, tb_k: f64, t_k: f64) -> f64 {
+    let vp = find(iso).unwrap().vapour_pressure;
+    vp.form.ln_pressure_pa(t_k) + 101_325.0f64.ln() - vp.form.ln_pressure_pa(tb_k)
+}
+
+#[test]
+fn the_isomer_shifted_method_is_as_good_as_its_rows_claim() {
+    // The method: take the measured C10H16 set nearest in boiling point and move it to the
+    // compound's own boiling point. Tried on each measured C10H16 set of the table against its
+    // own measured pressure at 100 °C, it misses by at most what the estimated rows claim.
+    let tb = |id: &str| find(id).unwrap().vapour_pressure.temperature_at_k(101_325.0).unwrap();
+    let nearest = |id: &str, own_tb: f64| {
+        C10H16_MEASURED
+            .iter()
+            .copied()
+            .filter(|other| *other != id)
+            .min_by(|a, b| (tb(a) - own_tb).abs().total_cmp(&(tb(b) - own_tb).abs()))
+            .unwrap()
+    };
+    let mut worst: f64 = 0.0;
+    for &id in C10H16_MEASURED {
+        assert_eq!(find(id).unwrap().vapour_pressure.confidence, Confidence::Measured, "{id}");
+        let own_tb = tb(id);
+        let iso = nearest(id, own_tb);
+        let est = shifted_ln_p(iso, own_tb, 373.15).exp();
+        let measured = find(id).unwrap().vapour_pressure.pressure_pa(373.15);
+        println!("{id} from {iso}: method {est:.0} Pa, measured set {measured:.0} Pa");
+        worst = worst.max((est / measured - 1.0).abs());
+    }
+    for &(id, iso) in ISOMER_SHIFTED {
+        let c = find(id).unwrap();
+        assert_eq!(c.vapour_pressure.confidence, Confidence::Estimated, "{id}");
+        assert_eq!(nearest(id, c.normal_boiling_point_k), iso, "{id}: not the nearest isomer");
+        // The row is the method's law (guards the typed coefficients), 300-460 K.
+        for t in [300.0, 373.15, 430.0, 460.0] {
+            let want = shifted_ln_p(iso, c.normal_boiling_point_k, t);
+            let got = c.vapour_pressure.form.ln_pressure_pa(t);
+            assert!((got - want).abs() < 1e-5, "{id} at {t} K: ln p {got} against the method's {want}");
+        }
+        assert!(
+            worst <= c.vapour_pressure.relative_uncertainty,
+            "the method misses by up to {:.0} %; {id} claims {:.0} %",
+            worst * 100.0,
+            c.vapour_pressure.relative_uncertainty * 100.0
+        );
+    }
 }

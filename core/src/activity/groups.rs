@@ -224,6 +224,8 @@ pub static COMPOUND_GROUPS: &[CompoundGroups] = &[
         &[(Sub::Ch3, 3), (Sub::Ch2, 1), (Sub::Ch, 2), (Sub::ChEqCh, 1), (Sub::ChEqC, 1)],
         DDBST,
     ),
+    row("sabinene", &[(Sub::Ch3, 2), (Sub::Ch2, 3), (Sub::Ch, 2), (Sub::C, 1), (Sub::Ch2EqC, 1)], DDBST),
+    row("alpha-terpinene", &[(Sub::Ch3, 3), (Sub::Ch2, 2), (Sub::Ch, 1), (Sub::ChEqC, 2)], DDBST),
     // Oxygenated monoterpenes.
     CompoundGroups {
         id: "1-8-cineole",
@@ -266,6 +268,20 @@ pub static COMPOUND_GROUPS: &[CompoundGroups] = &[
         "structure; DDBST lists none under CAS 471-15-8, same as its original-UNIFAC assignment of \
          3-thujanone (stereochemistry unstated), CAS 1125-12-8, and of alpha-thujone, CAS 546-80-5 \
          (thermo 0.6.1), and as thermo's SMARTS fragmentation",
+    ),
+    CompoundGroups {
+        id: "fenchone",
+        groups: &[(Sub::Ch3, 3), (Sub::Ch2, 2), (Sub::Ch, 1), (Sub::C, 2), (Sub::Ch2co, 1)],
+        exact: false,
+        note: "approximate: DDBST lists no original-UNIFAC assignment, and both carbons beside the \
+               carbonyl carry no hydrogen, which no original-UNIFAC ketone group describes. The \
+               carbonyl and one of them are taken as CH2CO, its two hydrogens borrowed from a ring \
+               CH2 counted as C (as for 1,8-cineole), so that atoms and molar mass balance",
+    },
+    row(
+        "menthyl-acetate",
+        &[(Sub::Ch3, 3), (Sub::Ch2, 3), (Sub::Ch, 4), (Sub::Ch3coo, 1)],
+        "structure; same as the DDBST original-UNIFAC assignment of menthyl acetate, CAS 89-48-5 (thermo 0.6.1)",
     ),
     row(
         "alpha-terpineol",
