@@ -15,6 +15,7 @@ use crate::units::UnitSystem;
 use leptos::prelude::*;
 use serde::{Deserialize, Serialize};
 use stillroom_core::heat::{Appliance, Fuel, Metal};
+use stillroom_core::scenario::limits::MAX_MIXTURE_PARTS;
 use stillroom_core::scenario::{
     BarometerReference, CondenserKind, CustomVapourPressure, OilComposition, OilPart, Scenario,
 };
@@ -511,8 +512,11 @@ impl AppState {
         self.units.set(to);
     }
 
-    /// Adds a line to the oil analysis.
+    /// Adds a line to the oil analysis, up to the most the core plans.
     pub fn add_mix_row(&self, compound: &str) {
+        if self.mixture.with_untracked(Vec::len) >= MAX_MIXTURE_PARTS {
+            return;
+        }
         let key = self.next_row_key.get_untracked();
         self.next_row_key.set(key + 1);
         let row = MixRow {

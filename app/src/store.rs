@@ -40,7 +40,8 @@ impl Store {
         }
     }
 
-    fn say(&self, text: String) {
+    /// Adds `text` to the notice at the top of the page.
+    pub fn say(&self, text: String) {
         self.notice.update(|n| match n {
             Some(old) if old.contains(&text) => {}
             Some(old) => *old = format!("{old} {text}"),
