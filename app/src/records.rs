@@ -1,7 +1,8 @@
 //! The saved records and the rules for reading them.
 //!
-//! Two records are kept: the scenario `{record_version, scenario}` under [`SCENARIO_KEY`] and
-//! the run log `{record_version, runs}` under [`RUNS_KEY`]. A record is read only if it is
+//! Three records are kept: the scenario `{record_version, scenario}` under [`SCENARIO_KEY`], the
+//! run log `{record_version, runs, lot_pattern}` under [`RUNS_KEY`] and the workbench's saved
+//! plans and stills under [`LIBRARY_KEY`]. A record is read only if it is
 //! exactly readable: valid JSON, the right shape, a known record version, and no field the page
 //! does not know (every part of the text must come back when the page writes what it read).
 //! Anything else is copied aside under [`BACKUP_PREFIX`] (see [`crate::store`]).
@@ -48,7 +49,8 @@ impl Kind {
         match self {
             Kind::Plan => "plan",
             Kind::RunLog => "run log",
-            Kind::Library => "saved plans and stills",
+            // Said after "saved" ("Your saved plans and stills could not be read").
+            Kind::Library => "plans and stills",
         }
     }
 

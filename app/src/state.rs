@@ -152,9 +152,11 @@ impl AppState {
     pub fn new() -> AppState {
         let store = Store::new();
         let base = store.load(Kind::Plan, records::read_scenario).unwrap_or_default();
-        // The run log belongs to the workbench; checked here too, so an unreadable log is kept
-        // aside and reported on the first screen, not only when the workbench opens.
-        let _ = store.load(Kind::RunLog, records::read_runs);
+        // The run log and the saved plans and stills belong to the workbench; checked here too,
+        // so an unreadable one is kept aside (or held, and listed) and reported on the first
+        // screen, not only when the workbench opens.
+        store.check(Kind::RunLog);
+        store.check(Kind::Library);
         store.report_found();
         store.refresh_kept();
         let texts: Vec<RwSignal<String>> = FIELDS.iter().map(|_| RwSignal::new(String::new())).collect();
