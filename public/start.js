@@ -49,9 +49,11 @@ function offer(worker) {
   if (!bar) return;
   bar.hidden = false;
   document.getElementById("update-apply").onclick = () => {
-    // The page marks <html data-unsaved> while entries could not be saved: a reload would drop them.
+    // The page marks <html data-unsaved> (the plan) or <html data-unsaved-workbench> while
+    // entries could not be saved: a reload would drop them.
+    const root = document.documentElement;
     if (
-      document.documentElement.hasAttribute("data-unsaved") &&
+      (root.hasAttribute("data-unsaved") || root.hasAttribute("data-unsaved-workbench")) &&
       !window.confirm("Your latest entries are not saved in this browser. Download everything first, or they are lost when the page reloads. Reload anyway?")
     ) {
       return;

@@ -7,7 +7,9 @@
 //!   to try again), queued on `window.stillroomInbox` so nothing is lost while the module is
 //!   still loading, and announced with [`INBOX_EVENT`].
 //! - `window.stillroomCurrentPlan()` and `window.stillroomUnits()`, set by the plan: the form's
-//!   scenario as a record text, and the units in force ([`UNITS_EVENT`] announces a change).
+//!   scenario as a record text, and the units in force ([`UNITS_EVENT`] announces a change);
+//!   `window.stillroomWorkbenchRecords()`, set by the workbench: its run log and saved plans
+//!   and stills as they are in memory.
 
 use wasm_bindgen::JsCast;
 use wasm_bindgen::prelude::*;
@@ -33,6 +35,7 @@ pub const WORKBENCH_LOADER: &str = "stillroomWorkbench";
 const INBOX: &str = "stillroomInbox";
 const CURRENT_PLAN: &str = "stillroomCurrentPlan";
 const UNITS: &str = "stillroomUnits";
+const WORKBENCH_RECORDS: &str = "stillroomWorkbenchRecords";
 
 fn window() -> Option<web_sys::Window> {
     web_sys::window()
@@ -131,6 +134,18 @@ pub fn expose_current_plan(f: impl Fn() -> String + 'static) {
 /// The plan's form scenario now, as a record text; `None` when the plan is not running.
 pub fn current_plan_text() -> Option<String> {
     call(CURRENT_PLAN)
+}
+
+/// The workbench offers its records as they are in memory: a JSON object with
+/// `run_log_record` and `library_record`.
+pub fn expose_workbench_records(f: impl Fn() -> String + 'static) {
+    expose(WORKBENCH_RECORDS, f);
+}
+
+/// The workbench's records in memory (see [`expose_workbench_records`]); `None` until the
+/// workbench has loaded.
+pub fn workbench_records() -> Option<String> {
+    call(WORKBENCH_RECORDS)
 }
 
 /// The plan offers the units in force.

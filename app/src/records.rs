@@ -1,7 +1,8 @@
 //! The saved records and the rules for reading them.
 //!
-//! Two records are kept: the scenario `{record_version, scenario}` under [`SCENARIO_KEY`] and
-//! the run log `{record_version, runs}` under [`RUNS_KEY`]. A record is read only if it is
+//! Three records are kept: the scenario `{record_version, scenario}` under [`SCENARIO_KEY`], the
+//! run log `{record_version, runs, lot_pattern}` under [`RUNS_KEY`] and the workbench's saved
+//! plans and stills under [`LIBRARY_KEY`]. A record is read only if it is
 //! exactly readable: valid JSON, the right shape, a known record version, and no field the page
 //! does not know (every part of the text must come back when the page writes what it read).
 //! Anything else is copied aside under [`BACKUP_PREFIX`] (see [`crate::store`]).
@@ -48,7 +49,8 @@ impl Kind {
         match self {
             Kind::Plan => "plan",
             Kind::RunLog => "run log",
-            Kind::Library => "saved plans and stills",
+            // Said after "saved" ("Your saved plans and stills could not be read").
+            Kind::Library => "plans and stills",
         }
     }
 
@@ -259,6 +261,31 @@ pub fn read_strict<T: serde::de::DeserializeOwned + Serialize>(
     }
 }
 
+/// Refuses, in the core's own words, what the core would refuse before the form is built from
+/// it: a scenario `version` this build does not read (the core's reader), and more mixture parts
+/// or own compounds than the core's [`limits`](stillroom_core::scenario::limits) (the core's
+/// check; a pasted list of thousands would otherwise make thousands of form lines first). `at`
+/// is the path to the scenario (`scenario.` or empty).
+pub fn fits(s: &Scenario, at: &str) -> Result<(), String> {
+    let said = |e: &stillroom_core::scenario::FieldError| {
+        format!("{at}{}: {} (got {}; valid: {})", e.field, e.message, e.value, e.valid)
+    };
+    let value = serde_json::to_value(s).map_err(|e| e.to_string())?;
+    if let Err(errors) = stillroom_core::scenario::scenario_from_json_value(value)
+        && let Some(e) = errors.errors.first()
+    {
+        return Err(said(e));
+    }
+    const COUNTED: [&str; 2] = ["oil.composition.parts", "custom_compounds"];
+    match stillroom_core::plan::validate(s) {
+        Err(errors) => match errors.errors.iter().find(|e| COUNTED.contains(&e.field.as_str())) {
+            Some(e) => Err(said(e)),
+            None => Ok(()),
+        },
+        Ok(_) => Ok(()),
+    }
+}
+
 /// Reads a stored or pasted scenario: a record `{record_version, scenario}` of this or an
 /// earlier version, or a bare scenario (the shape before records had an envelope). The error
 /// names the field and what was expected.
@@ -268,6 +295,7 @@ pub fn read_scenario(raw: &str) -> Result<Scenario, String> {
     if value.get("record_version").is_some() {
         version(&value)?;
         let record: ScenarioRecord = typed(value.clone())?;
+        fits(&record.scenario, "scenario.")?;
         let back = serde_json::to_value(&record.scenario).map_err(|e| e.to_string())?;
         match lost_part(&value["scenario"], &back, "scenario") {
             Some(p) => Err(p),
@@ -275,6 +303,7 @@ pub fn read_scenario(raw: &str) -> Result<Scenario, String> {
         }
     } else {
         let scenario: Scenario = typed(value.clone())?;
+        fits(&scenario, "")?;
         let back = serde_json::to_value(&scenario).map_err(|e| e.to_string())?;
         match lost_part(&value, &back, "") {
             Some(p) => Err(p),
@@ -376,6 +405,8 @@ mod tests {
             r#"{"record_version":1,"scenario":{},"extra":1}"#,
             r#"{"record_version":1,"scenario":{"charge":{"plant_mas_kg":3}}}"#,
             r#"{"charge":{"plant_mass_kg":"lots"}}"#,
+            r#"{"record_version":1,"scenario":{"version":2}}"#,
+            r#"{"version":0}"#,
         ] {
             assert!(read_scenario(raw).is_err(), "{raw} was read");
         }
@@ -436,6 +467,38 @@ mod tests {
         assert!(e.contains("newer version"), "{e}");
         let e = read_runs(r#"{"record_version":1,"runs":[{"x":1},{}]}"#).unwrap_err();
         assert!(e.contains("runs[0]"), "{e}");
+    }
+
+    /// A scenario whose oil is a mixture of `n` parts.
+    fn mixture_of(n: usize) -> String {
+        let part = r#"{"compound":"linalool","mass_percent":1.5}"#;
+        let parts = vec![part; n].join(",");
+        format!(
+            r#"{{"record_version":1,"scenario":{{"oil":{{"composition":{{"kind":"mixture","parts":[{parts}]}}}}}}}}"#
+        )
+    }
+
+    #[wasm_bindgen_test]
+    fn a_scenario_beyond_the_cores_limits_or_versions_is_refused_by_its_field() {
+        use stillroom_core::scenario::limits::{MAX_CUSTOM_COMPOUNDS, MAX_MIXTURE_PARTS};
+        // The most the core plans with reads; one more, or the 2,000 of a pasted monster, does not.
+        assert!(read_scenario(&mixture_of(MAX_MIXTURE_PARTS)).is_ok());
+        for n in [MAX_MIXTURE_PARTS + 1, 2000] {
+            let e = read_scenario(&mixture_of(n)).unwrap_err();
+            // The core's own words (plan/validate.rs): its field, the count and the most it plans.
+            assert!(e.starts_with("scenario.oil.composition.parts: too many compounds: at most 64"), "{e}");
+            assert!(e.contains(&format!("got {n} compounds")), "{e}");
+        }
+        let own = r#"{"id":"x","name":"X","molar_mass_kg_per_mol":0.15,"liquid_density_kg_per_m3":900,"vapour_pressure":{"kind":"two_points","t1_c":100,"p1_pa":1000,"t2_c":150,"p2_pa":10000}}"#;
+        let many = format!(r#"{{"custom_compounds":[{}]}}"#, vec![own; MAX_CUSTOM_COMPOUNDS + 1].join(","));
+        let e = read_scenario(&many).unwrap_err();
+        assert!(e.starts_with("custom_compounds: too many compounds of your own: at most 32"), "{e}");
+        assert!(read_scenario(&many.replace(&format!(",{own}]"), "]")).is_ok());
+        // A scenario format this page does not read is named, not opened.
+        let e = read_scenario(r#"{"record_version":1,"scenario":{"version":2}}"#).unwrap_err();
+        assert!(e.contains("scenario.version") && e.contains("newer version"), "{e}");
+        let e = read_scenario(r#"{"version":0}"#).unwrap_err();
+        assert!(e.starts_with("version:"), "{e}");
     }
 
     #[wasm_bindgen_test]

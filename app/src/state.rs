@@ -15,6 +15,7 @@ use crate::units::UnitSystem;
 use leptos::prelude::*;
 use serde::{Deserialize, Serialize};
 use stillroom_core::heat::{Appliance, Fuel, Metal};
+use stillroom_core::scenario::limits::MAX_MIXTURE_PARTS;
 use stillroom_core::scenario::{
     BarometerReference, CondenserKind, CustomVapourPressure, OilComposition, OilPart, Scenario,
 };
@@ -151,9 +152,11 @@ impl AppState {
     pub fn new() -> AppState {
         let store = Store::new();
         let base = store.load(Kind::Plan, records::read_scenario).unwrap_or_default();
-        // The run log belongs to the workbench; checked here too, so an unreadable log is kept
-        // aside and reported on the first screen, not only when the workbench opens.
-        let _ = store.load(Kind::RunLog, records::read_runs);
+        // The run log and the saved plans and stills belong to the workbench; checked here too,
+        // so an unreadable one is kept aside (or held, and listed) and reported on the first
+        // screen, not only when the workbench opens.
+        store.check(Kind::RunLog);
+        store.check(Kind::Library);
         store.report_found();
         store.refresh_kept();
         let texts: Vec<RwSignal<String>> = FIELDS.iter().map(|_| RwSignal::new(String::new())).collect();
@@ -511,8 +514,11 @@ impl AppState {
         self.units.set(to);
     }
 
-    /// Adds a line to the oil analysis.
+    /// Adds a line to the oil analysis, up to the most the core plans.
     pub fn add_mix_row(&self, compound: &str) {
+        if self.mixture.with_untracked(Vec::len) >= MAX_MIXTURE_PARTS {
+            return;
+        }
         let key = self.next_row_key.get_untracked();
         self.next_row_key.set(key + 1);
         let row = MixRow {

@@ -186,10 +186,17 @@ pub fn file_stamp() -> String {
     local_time(now_ms()).replace(' ', "-").replace(':', "")
 }
 
-/// Everything the page holds, as one JSON text: today's plan (from memory, so the latest entries
-/// are in it even when they could not be saved), every other saved record of the page as stored
-/// (the workbench's saved plans and stills, the run log), and every kept-aside text.
+/// Everything the page holds, as one JSON text: today's plan and, once the workbench has
+/// loaded, its run log and saved plans and stills, all from memory (so the latest entries are in
+/// it even when they could not be saved; before that, those two records as stored), and every
+/// kept-aside text.
 pub fn everything(scenario: &Scenario, kept: &[KeptCopy]) -> String {
+    let workbench: Value =
+        crate::bridge::workbench_records().and_then(|t| serde_json::from_str(&t).ok()).unwrap_or(Value::Null);
+    let record = |name: &str, kind: Kind| match workbench.get(name) {
+        Some(v) => v.clone(),
+        None => stored_json(kind.key()),
+    };
     let kept: Vec<Value> = kept
         .iter()
         .map(|k| {
@@ -203,8 +210,8 @@ pub fn everything(scenario: &Scenario, kept: &[KeptCopy]) -> String {
     let all = serde_json::json!({
         "stillroom_export": 1,
         "plan_record": serde_json::from_str::<Value>(&records::scenario_text(scenario)).unwrap_or(Value::Null),
-        "run_log_record": stored_json(Kind::RunLog.key()),
-        "library_record": stored_json(Kind::Library.key()),
+        "run_log_record": record("run_log_record", Kind::RunLog),
+        "library_record": record("library_record", Kind::Library),
         "kept_aside": kept,
     });
     serde_json::to_string_pretty(&all).unwrap_or_default()

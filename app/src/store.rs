@@ -40,7 +40,8 @@ impl Store {
         }
     }
 
-    fn say(&self, text: String) {
+    /// Adds `text` to the notice at the top of the page.
+    pub fn say(&self, text: String) {
         self.notice.update(|n| match n {
             Some(old) if old.contains(&text) => {}
             Some(old) => *old = format!("{old} {text}"),
@@ -58,39 +59,53 @@ impl Store {
     /// Reads one record. Anything not exactly readable is copied aside and reported; if the
     /// copy cannot be made the record is held in place. `None` means: start from the default.
     pub fn load<T>(&self, kind: Kind, read: fn(&str) -> Result<T, String>) -> Option<T> {
+        let mut out = None;
+        self.take(kind, &mut |raw| match read(raw) {
+            Ok(v) => {
+                out = Some(v);
+                true
+            }
+            Err(_) => false,
+        });
+        out
+    }
+
+    /// Checks a record another module reads ([`Kind::problem`]), so an unreadable one is kept
+    /// aside (or held) and reported on the first screen.
+    pub fn check(&self, kind: Kind) {
+        self.take(kind, &mut |raw| kind.problem(raw).is_none());
+    }
+
+    /// [`Store::load`]'s work, once for every type: `read` says whether the text reads.
+    fn take(&self, kind: Kind, read: &mut dyn FnMut(&str) -> bool) {
         let raw = match storage::get(kind.key()) {
             Ok(Some(raw)) => raw,
-            Ok(None) => return None,
+            Ok(None) => return,
             Err(e) => {
                 self.say(format!(
                     "Saved entries cannot be read here: {}. What you enter now lasts only while this page is open: use “Download everything” to keep it.",
                     e.words()
                 ));
-                return None;
+                return;
             }
         };
-        match read(&raw) {
-            Ok(v) => {
-                self.remember(kind, raw);
-                Some(v)
-            }
-            Err(_) => {
-                // Once the copy is made the original goes: the record's key is free for the
-                // module that owns it, and the next start finds nothing new to report.
-                let held = match storage::keep_aside(kind, &raw) {
-                    Ok(_) => {
-                        storage::remove(kind.key());
-                        false
-                    }
-                    Err(_) => true,
-                };
-                if held {
-                    self.held.update(|h| h.push(kind));
-                }
-                self.found.update_value(|f| f.push((kind, held)));
-                None
-            }
+        if read(&raw) {
+            self.remember(kind, raw);
+            return;
         }
+        // Once the copy is made the original goes: the record's key is free for the module
+        // that owns it, and the next start finds nothing new to report.
+        let held = match storage::keep_aside(kind, &raw) {
+            Ok(_) => {
+                storage::remove(kind.key());
+                false
+            }
+            Err(_) => true,
+        };
+        if held {
+            self.held.update(|h| h.push(kind));
+        }
+        self.found.update_value(|f| f.push((kind, held)));
     }
 
     /// Tells, in one notice, which records could not be read and where they are now.

@@ -103,8 +103,17 @@ async fn every_unreadable_record_is_kept_aside_reported_and_left_alone() -> Resu
             r#"{"record_version":2,"scenario":{"charge":{"plant_mass_kg":20}}}"#.into(),
             "newer",
         ),
+        // A scenario format newer than this page reads, inside a record of a version it reads.
+        (
+            "stillroom.scenario",
+            r#"{"record_version":1,"scenario":{"version":2,"charge":{"plant_mass_kg":20}}}"#.into(),
+            "newer version",
+        ),
         ("stillroom.runs", r#"{"record_version":1,"runs":[{"x":1},{}]}"#.into(), "runs[0]"),
         ("stillroom.runs", r#"{"record_version":3,"runs":[]}"#.into(), "newer"),
+        // The workbench's saved plans and stills, told on the first screen too.
+        ("stillroom.library", r#"{"record_version":1,"plans":[{"x":1}],"stills":[]}"#.into(), "plans[0]"),
+        ("stillroom.library", r#"{"record_version":2,"plans":[],"stills":[]}"#.into(), "newer"),
     ];
     for (key, raw, why) in cases {
         c.execute(
@@ -113,7 +122,11 @@ async fn every_unreadable_record_is_kept_aside_reported_and_left_alone() -> Resu
         )
         .await?;
         reload(&page).await?;
-        let which = if key == "stillroom.runs" { "saved run log" } else { "saved plan" };
+        let which = match key {
+            "stillroom.runs" => "saved run log",
+            "stillroom.library" => "saved plans and stills",
+            _ => "saved plan",
+        };
         wait_text(c, "[data-out=storage_notice]", &[which, "could not be read", "kept below"])
             .await
             .map_err(|e| format!("{raw}: {e}"))?;
@@ -331,5 +344,120 @@ async fn a_held_record_discarded_by_the_grower_frees_its_place_for_the_entries()
     wait_stored(c, "stillroom.scenario", |t| t.contains("\"plant_mass_kg\":23")).await?;
     wait_gone(c, "[data-out=save_problem]").await?;
     wait_gone(c, "#kept-aside").await?;
+    page.close().await
+}
+
+#[tokio::test]
+async fn a_library_record_too_large_to_copy_aside_is_listed_told_and_never_saved_over() -> Result<(), BoxError>
+{
+    let page = browser::open().await?;
+    start(&page).await?;
+    let c = &page.client;
+    // The workbench's saved plans and stills, cut off mid-way, and no room to copy them aside.
+    const MAKE: &str = "return '{\"record_version\":1,\"plans\":[\"' + 'p'.repeat(1500000);";
+    let big = c.execute(MAKE, vec![]).await?;
+    let big = big.as_str().ok_or("no text")?.to_string();
+    c.execute(
+        "localStorage.clear(); localStorage.setItem('stillroom.library', arguments[0]);",
+        vec![json!(big)],
+    )
+    .await?;
+    page.fill_storage().await?;
+    reload(&page).await?;
+    // On the first screen: told, and listed where the grower can download or delete it.
+    wait_text(c, "[data-out=storage_notice]", &["saved plans and stills", "could not be read", "no room"])
+        .await?;
+    wait_text(c, "[data-key='stillroom.library']", &["Saved plans and stills", "still in its place"]).await?;
+    plans(c).await?;
+    // (The plan's own saves fail in full storage too; their bar is set aside.)
+    if let Ok(hide) = c.find(Locator::Id("save-toast-hide")).await {
+        hide.click().await?;
+    }
+    // The workbench, which owns the record, tells it too once all its records are read.
+    c.find(Locator::Id("mode-workbench")).await?.click().await?;
+    wait_text(c, "[data-out=workbench_notice]", &["saved plans and stills", "no room"]).await?;
+    // A plan saved there is kept on the page, and the original is not written over.
+    set_value(c, "#plan-name", "Larkfield north field").await?;
+    c.find(Locator::Id("plan-save")).await?.click().await?;
+    // (The run log's save may fail beside it, in full storage; the notice then speaks of all.)
+    wait_text(c, "#library-unsaved", &["Not saved", "download everything"]).await?;
+    wait_text(c, "[data-out=workbench_notice]", &["plans and stills", "no room"]).await?;
+    assert!(
+        stored(c, "stillroom.library").await?.as_deref() == Some(big.as_str()),
+        "the original was rewritten"
+    );
+    page.close().await
+}
+
+async fn set_value(c: &Client, css: &str, value: &str) -> Result<(), BoxError> {
+    let input = c.find(Locator::Css(css)).await?;
+    input.clear().await?;
+    input.send_keys(value).await?;
+    Ok(())
+}
+
+/// Whether `<html>` carries `attr` (the marks the page's shell reads before an update reload).
+async fn marked(c: &Client, attr: &str) -> Result<bool, BoxError> {
+    let v =
+        c.execute("return document.documentElement.hasAttribute(arguments[0]);", vec![json!(attr)]).await?;
+    Ok(v.as_bool() == Some(true))
+}
+
+async fn wait_marked(c: &Client, attr: &str, want: bool) -> Result<(), BoxError> {
+    let start = Instant::now();
+    while marked(c, attr).await? != want {
+        if start.elapsed() > WAIT {
+            return Err(format!("<html> {attr}: wanted {want}").into());
+        }
+        tokio::time::sleep(Duration::from_millis(50)).await;
+    }
+    Ok(())
+}
+
+#[tokio::test]
+async fn a_workbench_save_into_full_storage_marks_the_page_and_is_in_the_download() -> Result<(), BoxError> {
+    let page = browser::open().await?;
+    start(&page).await?;
+    let c = &page.client;
+    c.find(Locator::Id("mode-workbench")).await?.click().await?;
+    c.wait().at_most(WAIT).for_element(Locator::Id("plan-name")).await?;
+    set_value(c, "#plan-name", "Larkfield before the storage filled").await?;
+    c.find(Locator::Id("plan-save")).await?.click().await?;
+    wait_stored(c, "stillroom.library", |t| t.contains("Larkfield before the storage filled")).await?;
+    assert!(!marked(c, "data-unsaved-workbench").await?);
+    page.fill_storage().await?;
+    set_value(c, "#plan-name", "Larkfield after it filled").await?;
+    c.find(Locator::Id("plan-save")).await?.click().await?;
+    wait_text(c, "#library-unsaved", &["Not saved"]).await?;
+    // The plan's entries fail too; its "Download everything" holds the workbench's entries as
+    // they are on the page, not only what storage kept.
+    c.find(Locator::Id("mode-plan")).await?.click().await?;
+    set_field(c, "plant_mass", "34.123456789").await?;
+    wait_text(c, "[data-out=save_problem]", &["Not saved"]).await?;
+    c.find(Locator::Id("download-all")).await?.click().await?;
+    let (_, text) = last_download(c).await?;
+    let all: Value = serde_json::from_str(&text)?;
+    let names: Vec<&str> = all["library_record"]["plans"]
+        .as_array()
+        .into_iter()
+        .flatten()
+        .filter_map(|p| p["name"].as_str())
+        .collect();
+    assert!(
+        names.contains(&"Larkfield before the storage filled")
+            && names.contains(&"Larkfield after it filled"),
+        "{names:?}"
+    );
+    let kept = stored(c, "stillroom.library").await?.unwrap_or_default();
+    assert!(!kept.contains("Larkfield after it filled"), "{kept}");
+    // The page's shell will ask before an update reloads the page (public/start.js).
+    wait_marked(c, "data-unsaved-workbench", true).await?;
+    // Room again: the workbench's next save goes through and the mark goes.
+    page.unfill_storage().await?;
+    c.find(Locator::Id("mode-workbench")).await?.click().await?;
+    set_value(c, "#plan-name", "Larkfield with room again").await?;
+    c.find(Locator::Id("plan-save")).await?.click().await?;
+    wait_stored(c, "stillroom.library", |t| t.contains("Larkfield after it filled")).await?;
+    wait_marked(c, "data-unsaved-workbench", false).await?;
     page.close().await
 }

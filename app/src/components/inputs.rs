@@ -10,6 +10,7 @@ use stillroom_core::compounds::COMPOUNDS;
 use stillroom_core::crops::CROPS;
 use stillroom_core::heat::{Appliance, Fuel, Metal};
 use stillroom_core::scenario::CondenserKind;
+use stillroom_core::scenario::limits::MAX_MIXTURE_PARTS;
 
 /// The message shown beside a field: its own text first, then the core's verdict on its value,
 /// its limits restated in the field's own unit and precision.
@@ -308,14 +309,13 @@ fn row_message(index: usize, state: &AppState) -> Option<String> {
     })
 }
 
-/// One line of the analysis: a compound and its share by mass.
+/// One line of the analysis: a compound and its share by mass. `index` is the line's place in the
+/// list, kept by the list itself (no line searches the others for its place).
 #[component]
-fn MixLine(row: MixRow) -> impl IntoView {
+fn MixLine(row: MixRow, index: ReadSignal<usize>) -> impl IntoView {
     let state = expect_context::<AppState>();
-    let index_state = state.clone();
-    let index = move || index_state.mixture.get().iter().position(|r| r.key == row.key).unwrap_or(0);
     let msg_state = state.clone();
-    let message = Memo::new(move |_| row_message(index(), &msg_state));
+    let message = Memo::new(move |_| row_message(index.get(), &msg_state));
     let opt_state = state.clone();
     let remove_state = state.clone();
     let id = format!("mix-compound-{}", row.key);
@@ -338,6 +338,11 @@ fn MixLine(row: MixRow) -> impl IntoView {
     }
 }
 
+/// Said when the analysis has as many lines as the core plans.
+const MIX_FULL: &str = "At most 64 compounds: list the main ones.";
+// The text above says the core's limit.
+const _: () = assert!(MAX_MIXTURE_PARTS == 64);
+
 /// The grower's own oil analysis: compounds and their shares by mass.
 #[component]
 pub fn MixtureEditor() -> impl IntoView {
@@ -348,9 +353,11 @@ pub fn MixtureEditor() -> impl IntoView {
         <div class="mixture">
             <p class="hint">"Shares by mass from your analysis. They are scaled to 100 %; list the main compounds."</p>
             <ul class="mix-lines">
-                <For each=move || rows.get() key=|r| r.key children=move |row| view! { <MixLine row=row /> } />
+                <ForEnumerate each=move || rows.get() key=|r| r.key children=move |index, row| view! { <MixLine row=row index=index /> } />
             </ul>
             <button type="button" id="mix-add" on:click=move |_| add_state.add_mix_row(COMPOUNDS[0].id)>"Add a compound"</button>
+            // Shown in place of the button once the list is full (style.css).
+            <p class="hint" id="mix-full">{MIX_FULL}</p>
         </div>
     }
 }

@@ -56,13 +56,23 @@ pub fn ModeTabs() -> impl IntoView {
     let on_hash = window_event_listener_untyped("hashchange", move |_| take_share_link(mode));
     on_cleanup(move || on_hash.remove());
     let app = expect_context::<AppState>();
+    // A plan the form cannot take (too large, a mixture of thousands, unreadable) is refused
+    // before any of the form changes, and said at the top of the page.
     let handle = window_event_listener_untyped(bridge::OPEN_PLAN_EVENT, move |ev| {
         let text = bridge::detail(ev).filter(|j| j.len() <= crate::state::MAX_PASTE_BYTES);
-        if let Some(s) = text.and_then(|j| crate::records::read_scenario(&j).ok()) {
-            app.apply(&s);
-            mode.set(Mode::Plan);
-            if let Some(w) = web_sys::window() {
-                w.scroll_to_with_x_and_y(0.0, 0.0);
+        match text
+            .ok_or_else(|| "it is not a text of up to 256 kB".to_string())
+            .and_then(|j| crate::records::read_scenario(&j))
+        {
+            Ok(s) => {
+                app.apply(&s);
+                mode.set(Mode::Plan);
+                if let Some(w) = web_sys::window() {
+                    w.scroll_to_with_x_and_y(0.0, 0.0);
+                }
+            }
+            Err(e) => {
+                app.store.say(format!("That plan was not opened in the form: {e}. The form is unchanged."))
             }
         }
     });

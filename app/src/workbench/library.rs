@@ -96,7 +96,8 @@ pub struct Library {
 }
 
 impl Library {
-    /// Reads the saved library (anything unreadable kept aside and reported) and keeps it saved.
+    /// Reads the saved library (anything unreadable kept aside, and reported by the workbench
+    /// once every part has loaded) and keeps it saved.
     pub fn new(wb: Workbench) -> Library {
         let store = wb.store;
         let found = store.load(Kind::Library, read_library).unwrap_or_default();

@@ -112,8 +112,14 @@ impl Shelf {
     }
 
     /// Opens `scenario` in the form, after saving the form's plan as a new one if it is not saved
-    /// already; `what` names what is opened. False if the form could not be read.
+    /// already; `what` names what is opened. False if the form could not be read, or would
+    /// refuse the plan.
     fn open(&self, scenario: Scenario, what: &str) -> bool {
+        // What the form would refuse is refused here, where the grower asked for it.
+        if let Err(e) = records::fits(&scenario, "") {
+            self.said.set(Some(format!("{what} was not opened: {e}. The form is unchanged.")));
+            return false;
+        }
         self.wb.refresh();
         let Some(form) = self.wb.current.get_untracked() else {
             self.said.set(Some(

@@ -64,18 +64,42 @@ pub fn WorkbenchView() -> impl IntoView {
     let wb = Workbench::new();
     provide_context(wb);
     // Every part's state first, so any part may use another's.
-    provide_context(runs::Runs::new(wb));
-    provide_context(library::Library::new(wb));
+    let runs = runs::Runs::new(wb);
+    provide_context(runs);
+    let lib = library::Library::new(wb);
+    provide_context(lib);
+    // Every record read: what could not be, told once.
+    wb.store.report_found();
+    // The plan's "Download everything" takes these records from here, as they are in memory, so
+    // entries whose save failed are in the file too.
+    bridge::expose_workbench_records(move || {
+        let log = runs.lot_pattern.with_untracked(|p| runs.runs.with_untracked(|r| records::runs_text(r, p)));
+        let library =
+            lib.plans.with_untracked(|p| lib.stills.with_untracked(|s| library::library_text(p, s)));
+        format!(r#"{{"run_log_record":{log},"library_record":{library}}}"#)
+    });
     provide_context(library_view::Shelf::new(wb, expect_context::<library::Library>()));
     let shown = window_event_listener_untyped(bridge::SHOWN_EVENT, move |_| wb.refresh());
     on_cleanup(move || shown.remove());
     let units = window_event_listener_untyped(bridge::UNITS_EVENT, move |_| wb.units.set(bridge::units()));
     on_cleanup(move || units.remove());
+    // The page's shell asks before an update reload while this is set, as it does for the
+    // plan's entries (public/start.js): the workbench's unsaved entries live only on the page.
+    Effect::new(move |_| {
+        let unsaved = wb.store.unsaved().is_some();
+        if let Some(root) = web_sys::window().and_then(|w| w.document()).and_then(|d| d.document_element()) {
+            let _ = if unsaved {
+                root.set_attribute("data-unsaved-workbench", "")
+            } else {
+                root.remove_attribute("data-unsaved-workbench")
+            };
+        }
+    });
     let notice = wb.store.notice;
     view! {
         <div id="workbench" class="workbench">
             <Show when=move || notice.with(|n| n.is_some())>
-                <p class="notice" role="status">{move || notice.get()}</p>
+                <p class="notice" role="status" data-out="workbench_notice">{move || notice.get()}</p>
             </Show>
             <p class="error" role="alert">{move || wb.store.unsaved()}</p>
             <library_view::SavedParts />

@@ -26,12 +26,12 @@ pub struct Runs {
 }
 
 impl Runs {
-    /// Reads the saved log (anything unreadable kept aside and reported), keeps it saved, and
+    /// Reads the saved log (anything unreadable kept aside, and reported by the workbench once
+    /// every part has loaded), keeps it saved, and
     /// takes in run logs the plan hands over (now and whenever it announces one).
     pub fn new(wb: Workbench) -> Runs {
         let store = wb.store;
         let logged = store.load(Kind::RunLog, records::read_runs).unwrap_or_default();
-        store.report_found();
         let mut list = logged.runs;
         log::fill_missing_lots(&mut list, &logged.lot_pattern);
         let runs = Runs {
