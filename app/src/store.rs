@@ -159,7 +159,9 @@ impl Store {
                 self.refresh_kept();
                 Ok(())
             }
-            Err(_) => Err(format!("the unreadable saved {} is in the way: see above", kind.word())),
+            Err(_) => {
+                Err(format!("the unreadable copy of your saved {} is in the way: see above", kind.word()))
+            }
         }
     }
 
