@@ -54,3 +54,44 @@ async fn no_two_shown_warnings_give_opposite_advice_for_any_crop_preset() -> Res
     assert!(trips.is_empty(), "opposite advice on the page:\n{}", trips.join("\n"));
     page.close().await
 }
+
+/// Notes about the data, among them the grower's own calibration and the separator's settling
+/// formula used beyond its range, sit under "How sure is this?", not under "Watch out".
+#[tokio::test]
+async fn notes_about_the_data_sit_under_how_sure_not_watch_out() -> Result<(), BoxError> {
+    use stillroom_core::calibration::{Calibration, SpreadMeasure};
+    use stillroom_core::{Scenario, plan};
+    // An invented farm's record: its own oil content from 3 logged runs, and a separator set to
+    // catch 0.4 mm droplets, which settle faster than Stokes' law holds for (it is the law of
+    // creeping flow, Reynolds number under 1: Perry's Chemical Engineers' Handbook, 8th ed.,
+    // section 6, from memory).
+    let mut s = Scenario::default();
+    s.charge.oil_content_percent = Some(1.2);
+    s.calibration = Some(Calibration {
+        oil_content_percent: 1.2,
+        oil_content_runs: 3,
+        oil_content_spread_percent: Some(0.1),
+        rate_constant_per_min: 0.0,
+        rate_constant_runs: 0,
+        rate_constant_spread_per_min: None,
+        spread: SpreadMeasure::RunToRun,
+    });
+    s.separator.droplet_diameter_m = 400e-6;
+    let p = plan(&s).map_err(|e| e.to_string())?;
+    for code in ["own_calibration", "stokes_limit"] {
+        assert!(p.warnings.iter().any(|w| w.code == code), "the plan has no {code} note: {:?}", p.warnings);
+    }
+    let page = browser::open().await?;
+    drive::start_clean(&page).await?;
+    let c = &page.client;
+    let record = serde_json::json!({ "record_version": 1, "scenario": s }).to_string();
+    drive::open_in_form(c, &record).await?;
+    drive::tap(c, "[data-out=how_sure] summary").await?;
+    let notes = wait_text(c, "[data-out=how_sure]", |t| t.contains("logged runs")).await?;
+    assert!(notes.contains("a little more area"), "{notes}");
+    for code in ["own_calibration", "stokes_limit"] {
+        let css = format!(".warnings [data-warning={code}]");
+        assert_eq!(drive::count(c, &css).await?, 0, "{code} is listed as something to act on");
+    }
+    page.close().await
+}

@@ -334,7 +334,7 @@ fn separator_and_yield_warnings(f: &Facts, list: &mut Vec<Warning>) {
             list,
             "stokes_limit",
             format!(
-                "The design droplet's Reynolds number is {:.1}, above Stokes' range (< 1): it moves slower than computed, so allow more area.",
+                "The separator is sized for droplets that rise or sink a little faster than its settling formula covers (Reynolds number {:.1}, over 1): they move somewhat slower than reckoned, so a little more area than shown is safer.",
                 sp.droplet_reynolds_number
             ),
         );
