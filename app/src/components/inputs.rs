@@ -186,6 +186,15 @@ pub fn NumberInput(key: &'static str) -> impl IntoView {
     }
 }
 
+/// How a typed number was read, where it could be meant another way ("read as 1500"): shown
+/// beside every number typed outside the main form's fields (which add their own unit notes).
+#[component]
+pub fn ReadingNote(#[prop(into)] text: Signal<String>, id: String) -> impl IntoView {
+    let note =
+        move || read_number(&text.get()).ok().flatten().and_then(|r| r.note).map(|n| n.trim().to_string());
+    view! { <p class="reading" id=id aria-live="polite">{note}</p> }
+}
+
 /// Picks the crop preset.
 #[component]
 pub fn CropPicker() -> impl IntoView {
@@ -328,12 +337,14 @@ fn MixLine(row: MixRow) -> impl IntoView {
                     view! { <option value=cid selected=move || row.compound.get() == sel>{name}</option> }
                 }).collect_view()}
             </select>
-            <input id=pid type="text" inputmode="decimal" aria-label="Share by mass, %" placeholder="%"
+            <input id=pid.clone() type="text" inputmode="decimal" aria-label="Share by mass, %" placeholder="%"
+                aria-describedby=format!("{pid}-reading")
                 prop:value=move || row.percent.get()
                 on:input=move |ev| row.percent.set(event_target_value(&ev)) />
             <button type="button" class="quiet" aria-label="Remove this compound"
                 on:click=move |_| remove_state.remove_mix_row(row.key)>"✕"</button>
             <p class="error" aria-live="polite">{move || message.get()}</p>
+            <ReadingNote text=row.percent id=format!("{pid}-reading") />
         </li>
     }
 }
