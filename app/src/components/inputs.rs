@@ -692,8 +692,11 @@ pub fn UnitsChoice() -> impl IntoView {
     }
 }
 
+/// Where the page remembers that the grower declined the install hint.
+pub const INSTALL_DISMISSED_KEY: &str = "stillroom.install-dismissed";
+
 /// A small, dismissable offer to install the page, shown only where the browser offers it
-/// (its `beforeinstallprompt` event).
+/// (its `beforeinstallprompt` event) and the grower has not declined it before.
 #[component]
 pub fn InstallHint() -> impl IntoView {
     use wasm_bindgen::JsCast;
@@ -702,7 +705,10 @@ pub fn InstallHint() -> impl IntoView {
     if let Some(w) = web_sys::window() {
         let on_offer = Closure::<dyn FnMut(web_sys::Event)>::new(move |ev: web_sys::Event| {
             ev.prevent_default();
-            offer.set(Some(ev));
+            // Once declined, the hint stays away on later visits too.
+            if !matches!(crate::storage::get(INSTALL_DISMISSED_KEY), Ok(Some(_))) {
+                offer.set(Some(ev));
+            }
         });
         let _ = w.add_event_listener_with_callback("beforeinstallprompt", on_offer.as_ref().unchecked_ref());
         on_offer.forget();
@@ -721,7 +727,10 @@ pub fn InstallHint() -> impl IntoView {
             <p class="install-hint">
                 <span>"Keep it on this device, for offline use"</span>
                 <button type="button" on:click=install>"Install"</button>
-                <button type="button" class="quiet" aria-label="No thanks" on:click=move |_| offer.set(None)>"✕"</button>
+                <button type="button" class="quiet" aria-label="No thanks" on:click=move |_| {
+                    let _ = crate::storage::set(INSTALL_DISMISSED_KEY, "1");
+                    offer.set(None);
+                }>"✕"</button>
             </p>
         </Show>
     }
