@@ -187,6 +187,15 @@ pub fn NumberInput(key: &'static str) -> impl IntoView {
     }
 }
 
+/// How a typed number was read, where it could be meant another way ("read as 1500"): shown
+/// beside every number typed outside the main form's fields (which add their own unit notes).
+#[component]
+pub fn ReadingNote(#[prop(into)] text: Signal<String>, id: String) -> impl IntoView {
+    let note =
+        move || read_number(&text.get()).ok().flatten().and_then(|r| r.note).map(|n| n.trim().to_string());
+    view! { <p class="reading" id=id aria-live="polite">{note}</p> }
+}
+
 /// Picks the crop preset.
 #[component]
 pub fn CropPicker() -> impl IntoView {
@@ -328,12 +337,14 @@ fn MixLine(row: MixRow, index: ReadSignal<usize>) -> impl IntoView {
                     view! { <option value=cid selected=move || row.compound.get() == sel>{name}</option> }
                 }).collect_view()}
             </select>
-            <input id=pid type="text" inputmode="decimal" aria-label="Share by mass, %" placeholder="%"
+            <input id=pid.clone() type="text" inputmode="decimal" aria-label="Share by mass, %" placeholder="%"
+                aria-describedby=format!("{pid}-reading")
                 prop:value=move || row.percent.get()
                 on:input=move |ev| row.percent.set(event_target_value(&ev)) />
             <button type="button" class="quiet" aria-label="Remove this compound"
                 on:click=move |_| remove_state.remove_mix_row(row.key)>"✕"</button>
             <p class="error" aria-live="polite">{move || message.get()}</p>
+            <ReadingNote text=row.percent id=format!("{pid}-reading") />
         </li>
     }
 }
@@ -688,8 +699,11 @@ pub fn UnitsChoice() -> impl IntoView {
     }
 }
 
+/// Where the page remembers that the grower declined the install hint.
+pub const INSTALL_DISMISSED_KEY: &str = "stillroom.install-dismissed";
+
 /// A small, dismissable offer to install the page, shown only where the browser offers it
-/// (its `beforeinstallprompt` event).
+/// (its `beforeinstallprompt` event) and the grower has not declined it before.
 #[component]
 pub fn InstallHint() -> impl IntoView {
     use wasm_bindgen::JsCast;
@@ -698,7 +712,10 @@ pub fn InstallHint() -> impl IntoView {
     if let Some(w) = web_sys::window() {
         let on_offer = Closure::<dyn FnMut(web_sys::Event)>::new(move |ev: web_sys::Event| {
             ev.prevent_default();
-            offer.set(Some(ev));
+            // Once declined, the hint stays away on later visits too.
+            if !matches!(crate::storage::get(INSTALL_DISMISSED_KEY), Ok(Some(_))) {
+                offer.set(Some(ev));
+            }
         });
         let _ = w.add_event_listener_with_callback("beforeinstallprompt", on_offer.as_ref().unchecked_ref());
         on_offer.forget();
@@ -717,7 +734,10 @@ pub fn InstallHint() -> impl IntoView {
             <p class="install-hint">
                 <span>"Keep it on this device, for offline use"</span>
                 <button type="button" on:click=install>"Install"</button>
-                <button type="button" class="quiet" aria-label="No thanks" on:click=move |_| offer.set(None)>"✕"</button>
+                <button type="button" class="quiet" aria-label="No thanks" on:click=move |_| {
+                    let _ = crate::storage::set(INSTALL_DISMISSED_KEY, "1");
+                    offer.set(None);
+                }>"✕"</button>
             </p>
         </Show>
     }

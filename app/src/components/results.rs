@@ -245,8 +245,13 @@ fn doubt_words(u: Uncertainty) -> &'static str {
 }
 
 /// Warning codes about the data rather than about the run: they belong with the ranges.
-const DATA_NOTES: [&str; 3] =
-    ["correlation_out_of_range", "estimated_vapour_pressure", "still_volume_estimated"];
+const DATA_NOTES: [&str; 5] = [
+    "correlation_out_of_range",
+    "estimated_vapour_pressure",
+    "still_volume_estimated",
+    "own_calibration",
+    "stokes_limit",
+];
 
 /// How sure the answers are: the biggest source of doubt, and notes about the data.
 #[component]

@@ -35,6 +35,7 @@ mod validate;
 mod warnings;
 
 pub use validate::{ESTIMATED_FILL_SHARE, ESTIMATED_PACKING_KG_PER_M3, estimated_still_volume_m3, validate};
+pub use warnings::{OPPOSITE_ADVICE, opposite_advice};
 
 macro_rules! output {
     ($($item:item)*) => { $(

@@ -4,6 +4,7 @@
 
 use super::FirstStillState;
 use super::request::{HarvestMode, START_NOTE, SupplyMode, error_words, shown_on, si_value, size_field};
+use crate::components::inputs::ReadingNote;
 use leptos::prelude::*;
 use stillroom_core::crops::CROPS;
 use stillroom_core::heat::Fuel;
@@ -54,11 +55,12 @@ fn SizeInput(key: &'static str) -> impl IntoView {
             </label>
             <input id=id.clone() name=id type="text" inputmode="decimal" autocomplete="off"
                 placeholder=placeholder
-                aria-describedby=err_id.clone()
+                aria-describedby=format!("{err_id} fs-n-{key}")
                 aria-invalid=move || if message.get().is_some() { "true" } else { "false" }
                 prop:value=move || text.get()
                 on:input=move |ev| text.set(event_target_value(&ev)) />
             <p class="error" id=err_id aria-live="polite">{move || message.get()}</p>
+            <ReadingNote text=text id=format!("fs-n-{key}") />
             <p class="hint">{f.hint}</p>
         </div>
     }

@@ -1,6 +1,7 @@
 //! The batch-record form, in the grower's units; each field's error beside it.
 
 use super::{Runs, log};
+use crate::components::inputs::ReadingNote;
 use crate::fields::{TextError, parse_number};
 use crate::units::{UnitSystem, sp811};
 use crate::workbench::Workbench;
@@ -110,9 +111,10 @@ fn Field(
             <label for=id><span class="label">{label}</span><span class="unit">{move || unit.get()}</span></label>
             <input id=id type="text" autocomplete="off" inputmode=if numeric { "decimal" } else { "text" }
                 placeholder=move || placeholder.get()
-                aria-describedby=format!("{id}-error")
+                aria-describedby=format!("{id}-error {id}-reading")
                 prop:value=move || value.get() on:input=move |ev| value.set(event_target_value(&ev)) />
             <p class="error" id=format!("{id}-error") aria-live="polite">{error}</p>
+            {numeric.then(|| view! { <ReadingNote text=value id=format!("{id}-reading") /> })}
         </div>
     }
 }
