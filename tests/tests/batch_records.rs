@@ -110,9 +110,15 @@ async fn three_runs_calibrate_the_plan_and_the_log_travels() -> Result<(), BoxEr
     std::fs::write(std::env::temp_dir().join("stillroom-runs-412x915.png"), c.screenshot().await?)?;
 
     c.find(Locator::Id("run-use")).await?.click().await?;
-    c.wait().at_most(WAIT).for_element(Locator::Css("[data-warning=own_calibration]")).await?;
-    let note =
-        wait_text(c, "[data-warning=own_calibration]", |t| t.contains("3 of your logged runs")).await?;
+    // A note about where the numbers come from: under "how sure", not "Watch out".
+    c.wait().at_most(WAIT).for_element(Locator::Css("[data-out=how_sure]")).await?;
+    c.execute("document.querySelector('[data-out=how_sure]').open = true;", vec![]).await?;
+    let note = wait_text(c, "[data-out=how_sure]", |t| t.contains("3 of your logged runs")).await?;
+    assert_eq!(
+        count(c, ".warnings [data-warning=own_calibration]").await?,
+        0,
+        "listed as something to act on"
+    );
     assert!(note.contains(&format!("{c_pct:.2} %")), "{note} / {content}");
     let typed_c: f64 = value(c, "f-oil_content").await?.parse()?;
     let typed_k: f64 = value(c, "f-rate_constant").await?.parse()?;
@@ -122,7 +128,16 @@ async fn three_runs_calibrate_the_plan_and_the_log_travels() -> Result<(), BoxEr
     // Another oil content: the note goes.
     fill(c, "#f-oil_content", "1.5").await?;
     let start_wait = Instant::now();
-    while c.find(Locator::Css("[data-warning=own_calibration]")).await.is_ok() {
+    loop {
+        c.execute("const d = document.querySelector('[data-out=how_sure]'); if (d) d.open = true;", vec![])
+            .await?;
+        let shown = match c.find(Locator::Css("[data-out=how_sure]")).await {
+            Ok(e) => e.text().await.unwrap_or_default(),
+            Err(_) => String::new(),
+        };
+        if !shown.contains("logged runs") {
+            break;
+        }
         assert!(start_wait.elapsed() < WAIT, "the note stays after the content changed");
         tokio::time::sleep(Duration::from_millis(50)).await;
     }

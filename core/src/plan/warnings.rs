@@ -178,7 +178,9 @@ fn density_warnings(f: &Facts, list: &mut Vec<Warning>) {
             ),
         );
     }
-    if oil.inversion_risk {
+    // An oil that will not part at all is told so once (`no_gravity_separation`), with its own
+    // advice; telling it which outlet to use as well would contradict that.
+    if oil.inversion_risk && f.separator.plan_area_m2.is_some() {
         let (moves, outlet) = outlet_words(oil.collects_at);
         let crossing = match oil.inversion_temperature_c {
             Some(t) => format!(" The whole oil is as dense as the water at about {t:.0} °C."),
