@@ -108,7 +108,7 @@ pub(super) fn shortfall_error(
             format!("{} kW", num(kw)),
             format!("enough heat for {} kg/h of steam", num(need * charge)),
             format!(
-                "{} kW cannot raise the steam the crop needs: {} kg/h per kg of charge ({:.1} kg/h for {:.1} kg at {} charges a day) against {:.3} it gives; allow more charges a day or a larger supply",
+                "{} kW cannot raise the steam the crop needs: {} kg/h per kg of charge ({:.1} kg/h for {:.1} kg at {} charges a day) against the {:.3} kg/h per kg it can raise; allow more charges a day or a larger supply",
                 num(kw), num(need), need * charge, charge, charges, got
             ),
         ),
