@@ -136,6 +136,16 @@ pub async fn stored(c: &Client, key: &str) -> Result<Option<String>, BoxError> {
     Ok(v.as_str().map(str::to_string))
 }
 
+/// The names of the saved plans in a "download everything" file, in their order.
+pub fn saved_plan_names(everything: &serde_json::Value) -> Vec<&str> {
+    everything["library_record"]["plans"]
+        .as_array()
+        .into_iter()
+        .flatten()
+        .filter_map(|p| p["name"].as_str())
+        .collect()
+}
+
 /// The form's scenario as the page would save it (read through the page's bridge).
 pub async fn form_plan(c: &Client) -> Result<serde_json::Value, BoxError> {
     let v = c

@@ -442,12 +442,7 @@ async fn a_library_save_into_full_storage_is_told_at_once_and_kept_on_the_page()
     let kept = stored(c, "stillroom.library").await?.unwrap_or_default();
     assert!(kept.contains("Before the storage filled") && !kept.contains("After it filled"), "{kept}");
     let all: Value = serde_json::from_str(&export_everything(&page).await?)?;
-    let listed: Vec<&str> = all["library_record"]["plans"]
-        .as_array()
-        .into_iter()
-        .flatten()
-        .filter_map(|p| p["name"].as_str())
-        .collect();
+    let listed = drive::saved_plan_names(&all);
     assert_eq!(listed, ["Before the storage filled", "After it filled"]);
 
     // Room again: the next change saves both, and the notice goes.

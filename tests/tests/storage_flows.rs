@@ -377,7 +377,7 @@ async fn a_library_record_too_large_to_copy_aside_is_listed_told_and_never_saved
     c.find(Locator::Id("mode-workbench")).await?.click().await?;
     wait_text(c, "[data-out=workbench_notice]", &["saved plans and stills", "no room"]).await?;
     // A plan saved there is kept on the page, and the original is not written over.
-    set_value(c, "#plan-name", "Larkfield north field").await?;
+    drive::fill(c, "#plan-name", "Larkfield north field").await?;
     c.find(Locator::Id("plan-save")).await?.click().await?;
     // (The run log's save may fail beside it, in full storage; the notice then speaks of all.)
     wait_text(c, "#library-unsaved", &["Not saved", "download everything"]).await?;
@@ -387,13 +387,6 @@ async fn a_library_record_too_large_to_copy_aside_is_listed_told_and_never_saved
         "the original was rewritten"
     );
     page.close().await
-}
-
-async fn set_value(c: &Client, css: &str, value: &str) -> Result<(), BoxError> {
-    let input = c.find(Locator::Css(css)).await?;
-    input.clear().await?;
-    input.send_keys(value).await?;
-    Ok(())
 }
 
 /// Whether `<html>` carries `attr` (the marks the page's shell reads before an update reload).
@@ -421,12 +414,12 @@ async fn a_workbench_save_into_full_storage_marks_the_page_and_is_in_the_downloa
     let c = &page.client;
     c.find(Locator::Id("mode-workbench")).await?.click().await?;
     c.wait().at_most(WAIT).for_element(Locator::Id("plan-name")).await?;
-    set_value(c, "#plan-name", "Larkfield before the storage filled").await?;
+    drive::fill(c, "#plan-name", "Larkfield before the storage filled").await?;
     c.find(Locator::Id("plan-save")).await?.click().await?;
     wait_stored(c, "stillroom.library", |t| t.contains("Larkfield before the storage filled")).await?;
     assert!(!marked(c, "data-unsaved-workbench").await?);
     page.fill_storage().await?;
-    set_value(c, "#plan-name", "Larkfield after it filled").await?;
+    drive::fill(c, "#plan-name", "Larkfield after it filled").await?;
     c.find(Locator::Id("plan-save")).await?.click().await?;
     wait_text(c, "#library-unsaved", &["Not saved"]).await?;
     // The plan's entries fail too; its "Download everything" holds the workbench's entries as
@@ -437,12 +430,7 @@ async fn a_workbench_save_into_full_storage_marks_the_page_and_is_in_the_downloa
     c.find(Locator::Id("download-all")).await?.click().await?;
     let (_, text) = last_download(c).await?;
     let all: Value = serde_json::from_str(&text)?;
-    let names: Vec<&str> = all["library_record"]["plans"]
-        .as_array()
-        .into_iter()
-        .flatten()
-        .filter_map(|p| p["name"].as_str())
-        .collect();
+    let names = drive::saved_plan_names(&all);
     assert!(
         names.contains(&"Larkfield before the storage filled")
             && names.contains(&"Larkfield after it filled"),
@@ -455,7 +443,7 @@ async fn a_workbench_save_into_full_storage_marks_the_page_and_is_in_the_downloa
     // Room again: the workbench's next save goes through and the mark goes.
     page.unfill_storage().await?;
     c.find(Locator::Id("mode-workbench")).await?.click().await?;
-    set_value(c, "#plan-name", "Larkfield with room again").await?;
+    drive::fill(c, "#plan-name", "Larkfield with room again").await?;
     c.find(Locator::Id("plan-save")).await?.click().await?;
     wait_stored(c, "stillroom.library", |t| t.contains("Larkfield after it filled")).await?;
     wait_marked(c, "data-unsaved-workbench", false).await?;
