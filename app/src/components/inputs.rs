@@ -91,8 +91,8 @@ fn first_upper(s: &str) -> String {
 /// What an optional field falls back to, shown as its placeholder (in the field's unit).
 fn fallback(f: &NumField, state: &AppState) -> String {
     let crop = state.crop.get().and_then(|id| CROPS.iter().find(|c| c.id == id));
-    let system = state.field_units();
-    let shown = |si: f64, whose: &str| format!("{} ({whose})", units::plain(f.from_si_in(system, si)));
+    let shown_in = state.field_units();
+    let shown = |si: f64, whose: &str| format!("{} ({whose})", units::plain(f.from_si_in(shown_in, si)));
     match (f.key, crop) {
         ("oil_content", Some(c)) => shown(c.oil_content_percent.typical, "crop"),
         ("oil_density", Some(c)) => shown(c.oil_density_kg_per_m3, "crop"),
