@@ -2,7 +2,8 @@
 //! converts to the core's SI field, and back. This is the page's edge: the only place where
 //! units change.
 
-use crate::units::UnitSystem;
+use crate::units::{FIREWOOD_STACKED_KG_PER_M3, PROPANE_LIQUID_KG_PER_M3, UnitSystem};
+use stillroom_core::heat::Fuel;
 use stillroom_core::scenario::{
     Barometer, BarometerReference, CustomCompound, CustomVapourPressure, Scenario,
 };
@@ -173,27 +174,84 @@ pub fn us_alt(key: &str) -> Option<Alt> {
     }
 }
 
+/// What a field's text is read in: the system of units and, for the one field whose unit
+/// follows it, the fuel (a fuel's price is per the unit that fuel is sold by). Every
+/// conversion between a field's text and the scenario goes through one of these.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub struct FieldUnits {
+    pub system: UnitSystem,
+    pub fuel: Fuel,
+}
+
+impl FieldUnits {
+    pub fn new(system: UnitSystem, fuel: Fuel) -> FieldUnits {
+        FieldUnits { system, fuel }
+    }
+
+    /// The units a scenario's own values are shown in under a system (its own fuel).
+    pub fn of(system: UnitSystem, scenario: &Scenario) -> FieldUnits {
+        FieldUnits::new(system, scenario.boiler.fuel)
+    }
+}
+
+/// The key of the fuel's price: the field whose unit follows the fuel.
+pub const FUEL_PRICE_KEY: &str = "fuel_price";
+
+/// The fuel's price in metric: per the core's sales unit (`Fuel::data().unit`).
+fn per_core_sales_unit(fuel: Fuel) -> &'static str {
+    match fuel {
+        Fuel::Propane | Fuel::Firewood => "per kg",
+        Fuel::NaturalGas => "per m³",
+        Fuel::Electricity => "per kWh",
+    }
+}
+
+/// The unit a US grower buys a fuel by, and how many of the core's sales units it holds:
+/// propane by the gallon of liquid at 60 °F ([`PROPANE_LIQUID_KG_PER_M3`] kg/m³), natural gas by
+/// the therm (on the core's heating value of the gas, as [`crate::units::fuel`] counts therms;
+/// a utility's therm counts the higher heating value, about a tenth more, from memory), firewood
+/// by the cord (stacked at [`FIREWOOD_STACKED_KG_PER_M3`]), electricity by the kWh. SP 811
+/// factors ([`sp811`]). The same densities as the fuel amounts shown, so price times amount is
+/// the cost shown.
+pub fn us_sales_unit(fuel: Fuel) -> (&'static str, f64) {
+    match fuel {
+        Fuel::Propane => ("per gal", sp811::GAL_M3 * PROPANE_LIQUID_KG_PER_M3),
+        Fuel::NaturalGas => ("per therm", sp811::THERM_J / fuel.data().heating_value_j_per_unit),
+        Fuel::Firewood => ("per cord", sp811::CORD_M3 * FIREWOOD_STACKED_KG_PER_M3),
+        Fuel::Electricity => ("per kWh", 1.0),
+    }
+}
+
 impl NumField {
-    /// The unit the field is typed in under a system.
-    pub fn unit_in(&self, system: UnitSystem) -> &'static str {
-        match (system, us_alt(self.key)) {
+    /// The unit the field is typed in.
+    pub fn unit_in(&self, units: FieldUnits) -> &'static str {
+        if self.key == FUEL_PRICE_KEY {
+            return match units.system {
+                UnitSystem::Metric => per_core_sales_unit(units.fuel),
+                UnitSystem::UsCustomary => us_sales_unit(units.fuel).0,
+            };
+        }
+        match (units.system, us_alt(self.key)) {
             (UnitSystem::UsCustomary, Some(a)) => a.unit,
             _ => self.unit,
         }
     }
 
-    /// Typed value -> SI, under a system.
-    pub fn to_si_in(&self, system: UnitSystem, v: f64) -> f64 {
-        match (system, us_alt(self.key)) {
+    /// Typed value -> SI.
+    pub fn to_si_in(&self, units: FieldUnits, v: f64) -> f64 {
+        match (units.system, us_alt(self.key)) {
+            // A price per US unit over the core units that unit holds.
+            (UnitSystem::UsCustomary, _) if self.key == FUEL_PRICE_KEY => v / us_sales_unit(units.fuel).1,
             (UnitSystem::UsCustomary, Some(a)) => (a.to_si)(v),
             _ if self.key == "sea_level_pressure" => report_pressure(v),
             _ => (self.to_si)(v),
         }
     }
 
-    /// SI -> the value shown, under a system.
-    pub fn from_si_in(&self, system: UnitSystem, si: f64) -> f64 {
-        match (system, us_alt(self.key)) {
+    /// SI -> the value shown.
+    pub fn from_si_in(&self, units: FieldUnits, si: f64) -> f64 {
+        match (units.system, us_alt(self.key)) {
+            (UnitSystem::UsCustomary, _) if self.key == FUEL_PRICE_KEY => si * us_sales_unit(units.fuel).1,
             (UnitSystem::UsCustomary, Some(a)) => (a.from_si)(si),
             _ => (self.from_si)(si),
         }
@@ -563,8 +621,9 @@ pub const FIELDS: &[NumField] = &[
         key: "fuel_price",
         path: "costs.fuel_price_per_unit",
         label: "Fuel price",
+        // Follows the fuel: see `NumField::unit_in`.
         unit: "per unit",
-        hint: "Per kg, m³ or kWh, as the fuel is sold. Optional.",
+        hint: "Per the unit shown, which follows the fuel chosen. Optional.",
         optional: true,
         to_si: same,
         from_si: same,
@@ -822,14 +881,14 @@ pub fn text_for(field: &NumField, scenario: &Scenario) -> String {
 pub fn text_for_in(field: &NumField, scenario: &Scenario, system: UnitSystem) -> String {
     match (field.get)(scenario) {
         None => String::new(),
-        Some(si) => text_in(field, si, system),
+        Some(si) => text_in(field, si, FieldUnits::of(system, scenario)),
     }
 }
 
 /// The text for an SI value in a system's unit, to nine significant figures: what a unit switch
 /// writes into a field (the exact SI value stays pinned behind it, see `AppState::set_units`).
-pub fn text_in(field: &NumField, si: f64, system: UnitSystem) -> String {
-    let w = field.from_si_in(system, si);
+pub fn text_in(field: &NumField, si: f64, units: FieldUnits) -> String {
+    let w = field.from_si_in(units, si);
     let digits = if w == 0.0 { 0 } else { 8 - w.abs().log10().floor() as i32 };
     let scale = 10f64.powi(digits);
     let r = (w * scale).round() / scale;
@@ -889,30 +948,108 @@ mod tests {
         assert_eq!(read_number("   "), Ok(None));
     }
 
+    const FUELS: [Fuel; 4] = [Fuel::Propane, Fuel::NaturalGas, Fuel::Firewood, Fuel::Electricity];
+
     #[wasm_bindgen_test]
     fn us_units_round_trip_and_keep_the_metric_text() {
-        let s = Scenario::default();
-        for f in FIELDS {
-            if let Some(si) = (f.get)(&s) {
-                let us = f.from_si_in(UnitSystem::UsCustomary, si);
-                let back = f.to_si_in(UnitSystem::UsCustomary, us);
-                assert!((back - si).abs() <= 1e-9 * si.abs().max(1.0), "{}", f.key);
-                // What a switch writes, from the exact SI value, and back.
-                let metric = text_for(f, &s);
-                let there = text_in(f, si, UnitSystem::UsCustomary);
-                assert_eq!(text_in(f, si, UnitSystem::Metric), metric, "{}", f.key);
-                let typed_back = f.to_si_in(UnitSystem::UsCustomary, parse_number(&there).unwrap().unwrap());
-                assert!((typed_back - si).abs() <= 1e-8 * si.abs().max(1.0), "{}: {there}", f.key);
+        let mut s = Scenario::default();
+        s.costs.fuel_price_per_unit = Some(1.85);
+        for fuel in FUELS {
+            s.boiler.fuel = fuel;
+            let (us_units, metric_units) =
+                (FieldUnits::of(UnitSystem::UsCustomary, &s), FieldUnits::of(UnitSystem::Metric, &s));
+            for f in FIELDS {
+                if let Some(si) = (f.get)(&s) {
+                    let us = f.from_si_in(us_units, si);
+                    let back = f.to_si_in(us_units, us);
+                    assert!((back - si).abs() <= 1e-9 * si.abs().max(1.0), "{} {fuel:?}", f.key);
+                    // What a switch writes, from the exact SI value, and back.
+                    let metric = text_for(f, &s);
+                    let there = text_in(f, si, us_units);
+                    assert_eq!(text_in(f, si, metric_units), metric, "{}", f.key);
+                    let typed_back = f.to_si_in(us_units, parse_number(&there).unwrap().unwrap());
+                    assert!(
+                        (typed_back - si).abs() <= 1e-8 * si.abs().max(1.0),
+                        "{} {fuel:?}: {there}",
+                        f.key
+                    );
+                }
             }
         }
+        let us = FieldUnits::new(UnitSystem::UsCustomary, Fuel::Propane);
+        let metric = FieldUnits::new(UnitSystem::Metric, Fuel::Propane);
         // NIST SP 811: 1 ft = 0.3048 m; 212 °F = 100 °C; 1 BTU/h = 0.2930711 W.
-        assert!((field("altitude").to_si_in(UnitSystem::UsCustomary, 1000.0) - 304.8).abs() < 1e-9);
-        assert!((field("ambient").to_si_in(UnitSystem::UsCustomary, 212.0) - 100.0).abs() < 1e-9);
-        assert!((field("heat_input").to_si_in(UnitSystem::UsCustomary, 1.0) - 0.2930711).abs() < 1e-9);
+        assert!((field("altitude").to_si_in(us, 1000.0) - 304.8).abs() < 1e-9);
+        assert!((field("ambient").to_si_in(us, 212.0) - 100.0).abs() < 1e-9);
+        assert!((field("heat_input").to_si_in(us, 1.0) - 0.2930711).abs() < 1e-9);
         // A weather report is read in hPa or inHg in either system: 29.92 inHg ≈ 1013.2 hPa.
         let report = field("sea_level_pressure");
-        assert!((report.to_si_in(UnitSystem::Metric, 29.92) - 101_320.8).abs() < 1.0);
-        assert!((report.to_si_in(UnitSystem::UsCustomary, 1013.0) - 101_300.0).abs() < 1e-6);
+        assert!((report.to_si_in(metric, 29.92) - 101_320.8).abs() < 1.0);
+        assert!((report.to_si_in(us, 1013.0) - 101_300.0).abs() < 1e-6);
+    }
+
+    /// A fuel's price typed per the US unit it is bought by, against hand arithmetic with each
+    /// factor's source written out; the scenario holds it per the core's sales unit.
+    #[wasm_bindgen_test]
+    fn a_fuel_price_per_us_unit_is_held_per_the_cores_sales_unit() {
+        let price = field(FUEL_PRICE_KEY);
+        let us = |fuel| FieldUnits::new(UnitSystem::UsCustomary, fuel);
+        let metric = |fuel| FieldUnits::new(UnitSystem::Metric, fuel);
+        let close = |a: f64, b: f64| (a - b).abs() <= 1e-12 * b.abs();
+        // Propane, 3.00 per gal: 1 US gal = 3.785 411 784 L (SP 811 B.8, exact); liquid propane
+        // at 60 °F 0.507 × 999.0 kg/m³ = 506.493 kg/m³ (GPA 2145 relative density, from
+        // memory), so 1 gal = 3.785 411 784e-3 × 506.493 = 1.917 284 570 7 kg; 3.00 / 1.917 284 570 7
+        // = 1.564 712 951 8 per kg.
+        assert!(close(price.to_si_in(us(Fuel::Propane), 3.0), 1.564_712_951_757_369), "propane");
+        // Natural gas, 1.20 per therm: 1 therm (U.S.) = 105 480 400 J (SP 811 B.8); 1 m³ of the
+        // gas holds 36.6 MJ (its lower heating value in the core's fuel table), so 1 m³ =
+        // 36.6e6 / 105 480 400 = 0.346 983 894 6 therm; 1.20 × 0.346 983 894 6 = 0.416 380 673 6
+        // per m³.
+        assert!(close(price.to_si_in(us(Fuel::NaturalGas), 1.2), 0.416_380_673_565_894_7), "natural gas");
+        // Firewood, 300 per cord: 1 cord (128 ft³) = 3.624 556 m³ (SP 811 B.8), stacked at the
+        // 2000 kg a cord of seasoned hardwood weighs (from memory; the amounts use the same):
+        // 300 / 2000 = 0.15 per kg.
+        assert!(close(price.to_si_in(us(Fuel::Firewood), 300.0), 0.15), "firewood");
+        // Electricity is bought by the kWh in both systems.
+        assert_eq!(price.to_si_in(us(Fuel::Electricity), 0.16), 0.16);
+        // Metric keeps the core's sales unit as it is.
+        assert_eq!(price.to_si_in(metric(Fuel::NaturalGas), 0.9), 0.9);
+        // The labels follow the fuel in each system.
+        let labels: Vec<_> =
+            FUELS.iter().map(|f| (price.unit_in(us(*f)), price.unit_in(metric(*f)))).collect();
+        assert_eq!(
+            labels,
+            [("per gal", "per kg"), ("per therm", "per m³"), ("per cord", "per kg"), ("per kWh", "per kWh")]
+        );
+        // The metric label is the core's own sales unit.
+        for fuel in FUELS {
+            assert_eq!(price.unit_in(metric(fuel)), format!("per {}", fuel.data().unit), "{fuel:?}");
+        }
+        // US -> SI -> US, every fuel, and the shown text read back.
+        for fuel in FUELS {
+            for v in [0.01, 2.5, 417.0] {
+                let si = price.to_si_in(us(fuel), v);
+                assert!((price.from_si_in(us(fuel), si) - v).abs() <= 1e-12 * v, "{fuel:?} {v}");
+                let text = text_in(price, si, us(fuel));
+                assert_eq!(parse_number(&text), Ok(Some(v)), "{fuel:?}: {text}");
+            }
+        }
+    }
+
+    /// The fuel's price in US units restates the core's limit in the fuel's unit: the core
+    /// takes at most 1 000 000 per kg, which for propane is 1 917 284.57 per gal (× 1.917 284 570 7
+    /// kg/gal, as above), said rounded down.
+    #[wasm_bindgen_test]
+    fn a_fuel_price_limit_is_said_per_gal() {
+        let units = FieldUnits::new(UnitSystem::UsCustomary, Fuel::Propane);
+        let price = field(FUEL_PRICE_KEY);
+        let mut s = Scenario::default();
+        s.boiler.fuel = Fuel::Propane;
+        s.costs.fuel_price_per_unit = Some(price.to_si_in(units, 2e6));
+        let errors = stillroom_core::plan(&s).expect_err("a price past the core's limit");
+        let e = errors.errors.iter().find(|e| e.field == price.path).expect("an error on the price");
+        let msg = crate::components::inputs::limit_message(price, units, e, s.costs.fuel_price_per_unit);
+        assert_eq!(msg, "Must be at most 1917284\u{a0}per gal.");
     }
 
     #[wasm_bindgen_test]

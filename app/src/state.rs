@@ -6,7 +6,8 @@
 //! what is saved; the plan is always recomputed.
 
 use crate::fields::{
-    FIELDS, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, text_for_in, text_in,
+    FIELDS, FieldUnits, NumField, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, text_for_in,
+    text_in,
 };
 use crate::records::{self, Kind};
 use crate::storage;
@@ -96,7 +97,28 @@ pub struct AppState {
     pub stale: Memo<bool>,
     /// Per field, the text a unit switch wrote and the exact SI value it stands for, so a
     /// switch (and a switch back) leaves the scenario exactly as it was.
-    pinned: StoredValue<Vec<Option<(String, f64)>>>,
+    pinned: StoredValue<Vec<Option<Pin>>>,
+}
+
+/// The exact SI value behind a field's text, written in one unit. It holds while both the text
+/// and the field's unit are unchanged: a fuel's price typed "2.5" per gal of propane is read
+/// afresh per therm when the fuel becomes natural gas, never kept as the propane price.
+#[derive(Debug, Clone, PartialEq)]
+struct Pin {
+    text: String,
+    unit: &'static str,
+    si: f64,
+}
+
+impl Pin {
+    fn new(f: &NumField, units: FieldUnits, text: String, si: f64) -> Pin {
+        Pin { text, unit: f.unit_in(units), si }
+    }
+
+    /// The pinned value, if it still stands behind `text` in the field's unit now.
+    fn value(pin: &Option<Pin>, f: &NumField, units: FieldUnits, text: &str) -> Option<f64> {
+        pin.as_ref().filter(|p| p.text == text && p.unit == f.unit_in(units)).map(|p| p.si)
+    }
 }
 
 /// The scenario built from the form, with the texts that could not be read.
@@ -207,15 +229,17 @@ impl AppState {
                 if skip {
                     continue;
                 }
-                let exact = pinned.with_value(|p| p[i].as_ref().filter(|(t, _)| *t == text).map(|(_, v)| *v));
+                // Units read untracked: a switch rewrites the texts first (see `set_units`). The
+                // fuel is read tracked: the price's unit follows it.
+                let read_in = FieldUnits::new(units.get_untracked(), fuel.get());
+                let exact = pinned.with_value(|p| Pin::value(&p[i], f, read_in, &text));
                 if let Some(si) = exact {
                     (f.set)(&mut s, Some(si));
                     continue;
                 }
                 let fault = match parse_number(&text) {
-                    // Units read untracked: a switch rewrites the texts first (see `set_units`).
                     Ok(Some(v)) => {
-                        (f.set)(&mut s, Some(f.to_si_in(units.get_untracked(), v)));
+                        (f.set)(&mut s, Some(f.to_si_in(read_in, v)));
                         continue;
                     }
                     Ok(None) if f.optional => {
@@ -415,9 +439,11 @@ impl AppState {
     pub fn apply(&self, s: &Scenario) {
         self.base.set(s.clone());
         let units = self.units.get_untracked();
+        let shown_in = FieldUnits::of(units, s);
         for (i, (f, text)) in FIELDS.iter().zip(&self.texts).enumerate() {
             let shown = text_for_in(f, s, units);
-            self.pinned.update_value(|p| p[i] = (f.get)(s).map(|si| (shown.clone(), si)));
+            self.pinned
+                .update_value(|p| p[i] = (f.get)(s).map(|si| Pin::new(f, shown_in, shown.clone(), si)));
             text.set(shown);
         }
         self.pressure_mode.set(match s.site.barometer.as_ref().map(|b| b.reference) {
@@ -496,19 +522,22 @@ impl AppState {
     }
 
     /// Shows the form and the answers in other units. Every number typed is carried over as
-    /// the same quantity, so the scenario (always SI) does not change.
+    /// the same quantity, so the scenario (always SI) does not change. (A change of fuel is not
+    /// a switch: the price's text stays and is read in the new fuel's unit, see [`Pin`].)
     pub fn set_units(&self, to: UnitSystem) {
-        let from = self.units.get_untracked();
+        let fuel = self.fuel.get_untracked();
+        let from = FieldUnits::new(self.units.get_untracked(), fuel);
+        let to_units = FieldUnits::new(to, fuel);
         for (i, (f, text)) in FIELDS.iter().zip(&self.texts).enumerate() {
             let before = text.get_untracked();
             // The exact SI value behind the old text: pinned, or read in the old units. Text
             // that is not a number stays as typed.
             let exact = self
                 .pinned
-                .with_value(|p| p[i].as_ref().filter(|(t, _)| *t == before).map(|(_, v)| *v))
+                .with_value(|p| Pin::value(&p[i], f, from, &before))
                 .or_else(|| parse_number(&before).ok().flatten().map(|v| f.to_si_in(from, v)));
-            let converted = exact.map(|si| text_in(f, si, to)).unwrap_or(before);
-            self.pinned.update_value(|p| p[i] = exact.map(|v| (converted.clone(), v)));
+            let converted = exact.map(|si| text_in(f, si, to_units)).unwrap_or(before);
+            self.pinned.update_value(|p| p[i] = exact.map(|v| Pin::new(f, to_units, converted.clone(), v)));
             text.set(converted);
         }
         self.units.set(to);
@@ -533,6 +562,11 @@ impl AppState {
     /// Removes a line from the oil analysis.
     pub fn remove_mix_row(&self, key: u32) {
         self.mixture.update(|rows| rows.retain(|r| r.key != key));
+    }
+
+    /// The units the form's fields are read in now: the system and the fuel (tracked).
+    pub fn field_units(&self) -> FieldUnits {
+        FieldUnits::new(self.units.get(), self.fuel.get())
     }
 
     /// The text signal of a field.

@@ -104,6 +104,28 @@ pub async fn fill(c: &Client, css: &str, text: &str) -> Result<(), BoxError> {
     Ok(())
 }
 
+/// Types into the element with `id` even inside a folded section, as a paste would: its value
+/// set and an `input` event sent.
+pub async fn type_into(c: &Client, id: &str, text: &str) -> Result<(), BoxError> {
+    c.execute(
+        "const i = document.getElementById(arguments[0]); i.value = arguments[1]; i.dispatchEvent(new Event('input', {bubbles: true}));",
+        vec![json!(id), json!(text)],
+    )
+    .await?;
+    Ok(())
+}
+
+/// Chooses `value` in the drop-down list with `id`, as a tap on the option would (a `change`
+/// event).
+pub async fn choose(c: &Client, id: &str, value: &str) -> Result<(), BoxError> {
+    c.execute(
+        "const s = document.getElementById(arguments[0]); s.value = arguments[1]; s.dispatchEvent(new Event('change', {bubbles: true}));",
+        vec![json!(id), json!(value)],
+    )
+    .await?;
+    Ok(())
+}
+
 /// Taps the first element matching `css`.
 pub async fn tap(c: &Client, css: &str) -> Result<(), BoxError> {
     c.find(Locator::Css(css)).await?.click().await?;

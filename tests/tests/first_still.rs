@@ -456,6 +456,11 @@ async fn a_grower_on_us_units_starts_with_us_units_and_inch_tube() -> Result<(),
     click(c, "mode-first").await?;
     wait_text(c, "label[for=fs-kg_per_day] .unit", |t| t == "lb").await?;
     assert_eq!(value_of(c, "kg_per_day").await?, "88.18");
+    // The note on the starting entries says them as the fields do: 40 kg = 88.18 lb and
+    // 300 m = 984.3 ft (SP 811 B.8), no kilograms or metres left in it.
+    let note = wait_text(c, "#fs-start-note", |t| t.contains("lb")).await?.replace('\u{a0}', " ");
+    assert!(note.contains("88.18 lb of lavender a day for 20 days, at 984.3 ft,"), "{note}");
+    assert!(!note.contains("kg") && !note.contains(" m,"), "{note}");
     // The tube standard starts at what a US shop sells: the Larkfield request on US tube.
     let mut want = larkfield(40.0);
     want.cooling.tube_standard = TubeStandard::Us;

@@ -1,7 +1,7 @@
 //! The form: small components, one concern each. They read and write the state's signals and
 //! never compute physics.
 
-use crate::fields::{NumField, TextError, field, read_number};
+use crate::fields::{FieldUnits, NumField, TextError, field, read_number};
 use crate::state::{AppState, CROP_OIL, MIXTURE_OIL, MixRow, PressureMode};
 use crate::units;
 use crate::units::UnitSystem;
@@ -24,11 +24,11 @@ fn field_message(f: &NumField, state: &AppState) -> Option<String> {
             TextError::NotANumber => "Enter a number, such as 12.5.".to_string(),
         });
     }
-    let system = state.units.get();
+    let units = state.field_units();
     let value = state.scenario.with(|d| (f.get)(&d.scenario));
     state.plan.with(|plan| {
         let e = plan.as_ref().err()?.errors.iter().find(|e| e.field == f.path)?;
-        Some(limit_message(f, system, e, value))
+        Some(limit_message(f, units, e, value))
     })
 }
 
@@ -36,15 +36,15 @@ fn field_message(f: &NumField, state: &AppState) -> Option<String> {
 /// rounded inwards so a value typed as shown is valid.
 pub fn limit_message(
     f: &NumField,
-    system: crate::units::UnitSystem,
+    units: FieldUnits,
     e: &stillroom_core::scenario::FieldError,
     value_si: Option<f64>,
 ) -> String {
-    let unit = f.unit_in(system);
+    let unit = f.unit_in(units);
     let with_unit = |v: String| if unit.is_empty() { v } else { format!("{v}\u{a0}{unit}") };
     // Converted ends, low first (a conversion may turn the order round, as 1/x would).
     let ends = |min: f64, max: f64| {
-        let (a, b) = (f.from_si_in(system, min), f.from_si_in(system, max));
+        let (a, b) = (f.from_si_in(units, min), f.from_si_in(units, max));
         (a.min(b), a.max(b))
     };
     let plain_message = || {
@@ -53,7 +53,7 @@ pub fn limit_message(
         m + "."
     };
     // Zero means zero in this unit (not so for °F): "more than zero" reads true.
-    let zero_is_zero = f.from_si_in(system, 0.0).abs() < 1e-12;
+    let zero_is_zero = f.from_si_in(units, 0.0).abs() < 1e-12;
     // The core's own words, when they say more than the bound ("too warm to cool …").
     let reason = if e.message.starts_with("must be") { String::new() } else { plain_message() + " " };
     match (e.min, e.max, value_si) {
@@ -91,8 +91,8 @@ fn first_upper(s: &str) -> String {
 /// What an optional field falls back to, shown as its placeholder (in the field's unit).
 fn fallback(f: &NumField, state: &AppState) -> String {
     let crop = state.crop.get().and_then(|id| CROPS.iter().find(|c| c.id == id));
-    let system = state.units.get();
-    let shown = |si: f64, whose: &str| format!("{} ({whose})", units::plain(f.from_si_in(system, si)));
+    let shown_in = state.field_units();
+    let shown = |si: f64, whose: &str| format!("{} ({whose})", units::plain(f.from_si_in(shown_in, si)));
     match (f.key, crop) {
         ("oil_content", Some(c)) => shown(c.oil_content_percent.typical, "crop"),
         ("oil_density", Some(c)) => shown(c.oil_density_kg_per_m3, "crop"),
@@ -124,17 +124,16 @@ pub fn NumberInput(key: &'static str) -> impl IntoView {
     let message = Memo::new(move |_| field_message(f, &msg_state));
     let ph_state = state.clone();
     let placeholder = move || fallback(f, &ph_state);
-    let units_signal = state.units;
-    let fuel = state.fuel;
-    // A fuel's price is per the unit it is sold by, whatever units the page shows.
+    let (units_signal, fuel) = (state.units, state.fuel);
+    let units_now = move || FieldUnits::new(units_signal.get(), fuel.get());
     let scenario = state.scenario;
-    // Prices carry the scenario's currency; a fuel's price is per the unit it is sold by.
+    // Prices carry the scenario's currency; a fuel's price is per the unit the fuel is sold by
+    // in the units shown (`NumField::unit_in`).
     let unit = move || {
         let currency = || scenario.with(|d| d.scenario.costs.currency.clone());
         match key {
-            "fuel_price" => format!("{} per {}", currency(), fuel.get().data().unit),
-            "plant_value" | "labour" => format!("{} {}", currency(), f.unit_in(units_signal.get())),
-            _ => f.unit_in(units_signal.get()).to_string(),
+            "fuel_price" | "plant_value" | "labour" => format!("{} {}", currency(), f.unit_in(units_now())),
+            _ => f.unit_in(units_now()).to_string(),
         }
     };
     // "read as 1500" for a reading that could be meant another way; the weather-report field
@@ -144,7 +143,7 @@ pub fn NumberInput(key: &'static str) -> impl IntoView {
         let mut note = r.note;
         if key == "sea_level_pressure" {
             let taken = if r.value.abs() < 100.0 { "inHg" } else { "hPa" };
-            if taken != f.unit_in(units_signal.get()) {
+            if taken != f.unit_in(units_now()) {
                 note =
                     Some(format!("{} read as {} {taken}", note.unwrap_or_default(), units::plain(r.value)));
             }

@@ -4,7 +4,7 @@
 //! as a table and a small chart, and offered as the command line's CSV (SI, byte for byte).
 
 use super::Workbench;
-use crate::fields::{self, NumField, TextError, parse_number};
+use crate::fields::{self, FieldUnits, NumField, TextError, parse_number};
 use crate::storage;
 use crate::units::{self, UnitSystem, sp811};
 use leptos::prelude::*;
@@ -91,29 +91,29 @@ fn chart_value(key: &str, si: f64, fuel: Fuel) -> (f64, &'static str) {
 }
 
 /// A varied value in the grower's units, to about three figures: "1640 ft".
-fn show_input(f: &NumField, si: f64, system: UnitSystem) -> String {
-    let v = f.from_si_in(system, si);
+fn show_input(f: &NumField, si: f64, units: FieldUnits) -> String {
+    let v = f.from_si_in(units, si);
     // sig3 writes a zero as "0.0000"; a range's start is often a plain 0.
     let n = if v == 0.0 { "0".to_string() } else { units::sig3(v) };
-    format!("{n} {}", f.unit_in(system))
+    format!("{n} {}", f.unit_in(units))
 }
 
 /// A step is a difference: in °F it is 5/9 K whatever the offset, so it converts as
 /// to_si(step) - to_si(0).
-fn step_to_si(f: &NumField, system: UnitSystem, v: f64) -> f64 {
-    f.to_si_in(system, v) - f.to_si_in(system, 0.0)
+fn step_to_si(f: &NumField, units: FieldUnits, v: f64) -> f64 {
+    f.to_si_in(units, v) - f.to_si_in(units, 0.0)
 }
 
-fn step_from_si(f: &NumField, system: UnitSystem, si: f64) -> f64 {
-    f.from_si_in(system, si) - f.from_si_in(system, 0.0)
+fn step_from_si(f: &NumField, units: FieldUnits, si: f64) -> f64 {
+    f.from_si_in(units, si) - f.from_si_in(units, 0.0)
 }
 
 /// The text for a step in SI, as a field shows it (nine figures, see [`fields::text_in`]).
-fn step_text(f: &NumField, system: UnitSystem, si: f64) -> String {
-    let shown = step_from_si(f, system, si);
+fn step_text(f: &NumField, units: FieldUnits, si: f64) -> String {
+    let shown = step_from_si(f, units, si);
     // text_in converts from SI itself; hand it the SI value whose plain conversion is `shown`.
-    let back = f.to_si_in(system, shown);
-    fields::text_in(f, back, system)
+    let back = f.to_si_in(units, shown);
+    fields::text_in(f, back, units)
 }
 
 /// One range field: the text as typed, and the exact SI value it was written from (kept until
@@ -175,6 +175,12 @@ fn input_key(key: &str) -> &'static str {
 #[component]
 pub fn Tables() -> impl IntoView {
     let wb = expect_context::<Workbench>();
+    // The inputs a table varies do not follow the fuel; the form's fuel is used all the same,
+    // so every conversion here is the form's own.
+    let units_of = move |system: UnitSystem| {
+        let fuel = wb.current.with_untracked(|s| s.as_ref().map(|s| s.boiler.fuel));
+        FieldUnits::new(system, fuel.unwrap_or_else(|| stillroom_core::Scenario::default().boiler.fuel))
+    };
     let input = RwSignal::new(INPUTS[0].0);
     let from = RangeField::new();
     let to = RangeField::new();
@@ -192,9 +198,9 @@ pub fn Tables() -> impl IntoView {
         let system = wb.units.get_untracked();
         let f = fields::field(key);
         let (_, a, b, s) = INPUTS.iter().copied().find(|i| i.0 == key).unwrap_or(INPUTS[0]);
-        from.set_si(fields::text_in(f, a, system), a);
-        to.set_si(fields::text_in(f, b, system), b);
-        step.set_si(step_text(f, system, s), s);
+        from.set_si(fields::text_in(f, a, units_of(system)), a);
+        to.set_si(fields::text_in(f, b, units_of(system)), b);
+        step.set_si(step_text(f, units_of(system), s), s);
         typed_in.set(system);
     };
     preset(INPUTS[0].0);
@@ -209,12 +215,16 @@ pub fn Tables() -> impl IntoView {
         let f = fields::field(input.get_untracked());
         for (r, is_step) in [(from, false), (to, false), (step, true)] {
             let si = if is_step {
-                r.si("", |v| step_to_si(f, before, v))
+                r.si("", |v| step_to_si(f, units_of(before), v))
             } else {
-                r.si("", |v| f.to_si_in(before, v))
+                r.si("", |v| f.to_si_in(units_of(before), v))
             };
             if let Ok(si) = si {
-                let text = if is_step { step_text(f, system, si) } else { fields::text_in(f, si, system) };
+                let text = if is_step {
+                    step_text(f, units_of(system), si)
+                } else {
+                    fields::text_in(f, si, units_of(system))
+                };
                 r.set_si(text, si);
             }
         }
@@ -227,8 +237,8 @@ pub fn Tables() -> impl IntoView {
         let key = input.get_untracked();
         let f = fields::field(key);
         let mut found = Faults::default();
-        let a = from.si("where the table starts", |v| f.to_si_in(system, v));
-        let b = to.si("where the table ends", |v| f.to_si_in(system, v));
+        let a = from.si("where the table starts", |v| f.to_si_in(units_of(system), v));
+        let b = to.si("where the table ends", |v| f.to_si_in(units_of(system), v));
         let s = if by_rows.get_untracked() {
             match (&a, &b, parse_number(&rows_text.get_untracked())) {
                 (Ok(a), Ok(b), Ok(Some(n))) if n >= 2.0 && n.fract() == 0.0 => Ok((b - a) / (n - 1.0)),
@@ -240,7 +250,7 @@ pub fn Tables() -> impl IntoView {
                 (_, _, Ok(None) | Err(_)) => Err("Enter the number of rows, e.g. 7.".to_string()),
             }
         } else {
-            step.si("the step", |v| step_to_si(f, system, v))
+            step.si("the step", |v| step_to_si(f, units_of(system), v))
         };
         found.from = a.clone().err();
         found.to = b.clone().err();
@@ -263,11 +273,13 @@ pub fn Tables() -> impl IntoView {
             made.set(None);
             return;
         };
-        let unit = f.unit_in(system);
+        let unit = f.unit_in(units_of(system));
         match sweep::row_count(a, b, s) {
             Err(SweepError::BadRange) if b < a => {
-                found.to =
-                    Some(format!("The end must not be below the start ({}).", show_input(f, a, system)));
+                found.to = Some(format!(
+                    "The end must not be below the start ({}).",
+                    show_input(f, a, units_of(system))
+                ));
             }
             Err(SweepError::BadRange) => found.step = Some(format!("The step must be more than 0 {unit}.")),
             Err(SweepError::TooManyRows { rows }) => {
@@ -318,7 +330,7 @@ pub fn Tables() -> impl IntoView {
 
     let unit_label = move || {
         let system = wb.units.get();
-        fields::field(input.get()).unit_in(system)
+        fields::field(input.get()).unit_in(units_of(system))
     };
     let fault = move |pick: fn(&Faults) -> Option<String>| move || faults.with(pick);
 
@@ -434,7 +446,7 @@ fn SweepView(made: RwSignal<Option<Made>>, chart_key: RwSignal<&'static str>) ->
         made.with(|m| {
             m.as_ref().map(|m| {
                 let f = fields::field(m.input);
-                let mut cells = vec![format!("{} ({})", f.label, f.unit_in(system))];
+                let mut cells = vec![format!("{} ({})", f.label, f.unit_in(FieldUnits::new(system, m.fuel)))];
                 cells.extend(keys().into_iter().map(|k| column(k).label.to_string()));
                 cells.into_iter().map(|c| view! { <th scope="col">{c}</th> }).collect_view()
             })
@@ -452,7 +464,7 @@ fn SweepView(made: RwSignal<Option<Made>>, chart_key: RwSignal<&'static str>) ->
                     .iter()
                     .enumerate()
                     .map(|(i, row)| {
-                        let x = show_input(f, row.value, system);
+                        let x = show_input(f, row.value, FieldUnits::new(system, m.fuel));
                         let cells = match &row.cells {
                             Ok(_) => keys
                                 .iter()
@@ -559,7 +571,7 @@ fn SweepChart(made: RwSignal<Option<Made>>, chart_key: RwSignal<&'static str>) -
                     .filter_map(|r| {
                         let (y, u) = chart_value(key, r.number(col)?, m.fuel);
                         unit = u;
-                        Some((f.from_si_in(system, r.value), y))
+                        Some((f.from_si_in(FieldUnits::new(system, m.fuel), r.value), y))
                     })
                     .collect();
                 (pts, unit)
@@ -589,9 +601,9 @@ fn SweepChart(made: RwSignal<Option<Made>>, chart_key: RwSignal<&'static str>) -
                 "{} ({unit}) against {} ({})",
                 column(key).label,
                 f.label.to_lowercase(),
-                f.unit_in(system)
+                f.unit_in(FieldUnits::new(system, m.fuel))
             );
-            Some((line, xlabels, ylabels, dots, title, unit, f.unit_in(system)))
+            Some((line, xlabels, ylabels, dots, title, unit, f.unit_in(FieldUnits::new(system, m.fuel))))
         })
     };
     view! {

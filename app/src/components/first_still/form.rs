@@ -3,7 +3,7 @@
 //! core's verdict on its value.
 
 use super::FirstStillState;
-use super::request::{HarvestMode, START_NOTE, SupplyMode, error_words, shown_on, si_value, size_field};
+use super::request::{HarvestMode, SupplyMode, error_words, shown_on, si_value, size_field, start_note};
 use crate::components::inputs::ReadingNote;
 use leptos::prelude::*;
 use stillroom_core::crops::CROPS;
@@ -190,10 +190,11 @@ pub fn FirstStillForm() -> impl IntoView {
     let electric = move || fuel.get() == Fuel::Electricity;
     let per_day = move || harvest.get() == HarvestMode::PerDay;
     let by_current = move || supply.get() == SupplyMode::Current;
+    let units = fs.units;
     view! {
         <section class="inputs" aria-labelledby="h-fs-crop">
             <h2 id="h-fs-crop">"What you will distil"</h2>
-            <p class="hint">{START_NOTE}</p>
+            <p class="hint" id="fs-start-note">{move || start_note(units.get())}</p>
             <CropChoice />
             {radios("Harvest given as", "fs-harvest", harvest, HARVEST_VALUES, HARVESTS)}
             <div hidden=move || !per_day()>

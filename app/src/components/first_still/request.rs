@@ -30,12 +30,25 @@ pub struct SizeField {
     pub to_si: fn(f64) -> f64,
     /// SI value -> shown-unit value.
     pub from_si: fn(f64) -> f64,
-    /// The text the form starts with: an invented farm (see [`START_NOTE`]).
+    /// The text the form starts with: an invented farm (see [`start_note`]).
     pub start: &'static str,
 }
 
-/// Says where the starting entries come from.
-pub const START_NOTE: &str = "The starting entries are invented: Larkfield Farm's 40 kg of lavender a day for 20 days, at 300 m, over propane.";
+/// Says where the starting entries come from, in the units the form shows them in: the same
+/// numbers and units as the fields (the starting entries are metric, see [`SizeField::start`]).
+pub fn start_note(system: UnitSystem) -> String {
+    let shown = |key: &str| {
+        let f = size_field(key);
+        let si = si_value(f, f.start, UnitSystem::Metric).ok().flatten().unwrap_or_default();
+        format!("{}\u{a0}{}", text_in(f, si, system), f.unit_in(system))
+    };
+    format!(
+        "The starting entries are invented: Larkfield Farm's {} of lavender a day for {} days, at {}, over propane.",
+        shown("kg_per_day"),
+        size_field("days").start,
+        shown("altitude")
+    )
+}
 
 use crate::fields::convert::{kilo, minutes, per_kilo, per_minutes, same};
 
@@ -349,7 +362,7 @@ pub struct Choices {
 }
 
 impl Default for Choices {
-    /// The invented farm's choices (see [`START_NOTE`]).
+    /// The invented farm's choices (see [`start_note`]).
     fn default() -> Self {
         Choices {
             crop: "lavender".into(),
@@ -658,6 +671,16 @@ mod tests {
         assert_eq!(text_in(size_field("kg_per_day"), 40.0, UnitSystem::UsCustomary), "88.18");
         assert_eq!(text_in(size_field("inlet"), 15.0, UnitSystem::UsCustomary), "59");
         assert_eq!(text_in(size_field("altitude"), 300.0, UnitSystem::UsCustomary), "984.3");
+        // The note on the starting entries says them as the fields do: 40 kg is 88.18 lb
+        // (1 lb = 0.453 592 37 kg) and 300 m is 984.3 ft (1 ft = 0.3048 m), SP 811 B.8.
+        assert_eq!(
+            start_note(UnitSystem::UsCustomary),
+            "The starting entries are invented: Larkfield Farm's 88.18\u{a0}lb of lavender a day for 20 days, at 984.3\u{a0}ft, over propane."
+        );
+        assert!(
+            start_note(UnitSystem::Metric)
+                .contains("40\u{a0}kg of lavender a day for 20 days, at 300\u{a0}m,")
+        );
     }
 
     #[wasm_bindgen_test]
