@@ -208,15 +208,15 @@ fn per_core_sales_unit(fuel: Fuel) -> &'static str {
 
 /// The unit a US grower buys a fuel by, and how many of the core's sales units it holds:
 /// propane by the gallon of liquid at 60 °F ([`PROPANE_LIQUID_KG_PER_M3`] kg/m³), natural gas by
-/// the therm (on the core's heating value of the gas, as [`crate::units::fuel`] counts therms;
-/// a utility's therm counts the higher heating value, about a tenth more, from memory), firewood
+/// the therm as a utility bills it (on the gas's gross heating value,
+/// [`crate::units::therms_per_m3_of_gas`], as [`crate::units::fuel`] counts therms), firewood
 /// by the cord (stacked at [`FIREWOOD_STACKED_KG_PER_M3`]), electricity by the kWh. SP 811
 /// factors ([`sp811`]). The same densities as the fuel amounts shown, so price times amount is
 /// the cost shown.
 pub fn us_sales_unit(fuel: Fuel) -> (&'static str, f64) {
     match fuel {
         Fuel::Propane => ("per gal", sp811::GAL_M3 * PROPANE_LIQUID_KG_PER_M3),
-        Fuel::NaturalGas => ("per therm", sp811::THERM_J / fuel.data().heating_value_j_per_unit),
+        Fuel::NaturalGas => ("per therm", 1.0 / crate::units::therms_per_m3_of_gas()),
         Fuel::Firewood => ("per cord", sp811::CORD_M3 * FIREWOOD_STACKED_KG_PER_M3),
         Fuel::Electricity => ("per kWh", 1.0),
     }
@@ -1001,11 +1001,11 @@ mod tests {
         // memory), so 1 gal = 3.785 411 784e-3 × 506.493 = 1.917 284 570 7 kg; 3.00 / 1.917 284 570 7
         // = 1.564 712 951 8 per kg.
         assert!(close(price.to_si_in(us(Fuel::Propane), 3.0), 1.564_712_951_757_369), "propane");
-        // Natural gas, 1.20 per therm: 1 therm (U.S.) = 105 480 400 J (SP 811 B.8); 1 m³ of the
-        // gas holds 36.6 MJ (its lower heating value in the core's fuel table), so 1 m³ =
-        // 36.6e6 / 105 480 400 = 0.346 983 894 6 therm; 1.20 × 0.346 983 894 6 = 0.416 380 673 6
-        // per m³.
-        assert!(close(price.to_si_in(us(Fuel::NaturalGas), 1.2), 0.416_380_673_565_894_7), "natural gas");
+        // Natural gas, 1.20 per therm: 1 therm (U.S.) = 105 480 400 J (SP 811 B.8), billed on the
+        // gross heating value; 1 m³ of the gas holds 36.6 MJ net (the core's fuel table) and
+        // 36.6e6 × 1089 / 983 = 40 546 693.79 J gross (GREET's 1,089 and 983 Btu/ft³, from
+        // memory), so 1 m³ = 0.384 400 265 8 therm; 1.20 × 0.384 400 265 8 = 0.461 280 318 9 per m³.
+        assert!(close(price.to_si_in(us(Fuel::NaturalGas), 1.2), 0.461_280_318_935_157), "natural gas");
         // Firewood, 300 per cord: 1 cord (128 ft³) = 3.624 556 m³ (SP 811 B.8), stacked at the
         // 2000 kg a cord of seasoned hardwood weighs (from memory; the amounts use the same):
         // 300 / 2000 = 0.15 per kg.

@@ -391,6 +391,18 @@ pub const PROPANE_LIQUID_KG_PER_M3: f64 = 0.507 * 999.0;
 /// cord's 3.62 m³ of stack. Only for showing a purchase in cords; the plan works in kg.
 pub const FIREWOOD_STACKED_KG_PER_M3: f64 = 2000.0 / sp811::CORD_M3;
 
+/// Natural gas's higher (gross) heating value over its lower (net) one: 1,089 against 983 Btu/ft³
+/// in the same GREET table the core's net value comes from (from memory). A US utility bills the
+/// therm (100,000 Btu) on the gross value, so therms shown and prices typed per therm use it;
+/// the plan's fuel stays on the net value, the heat a burner can use.
+pub const NATURAL_GAS_GROSS_OVER_NET: f64 = 1089.0 / 983.0;
+
+/// Therms (U.S., as billed: gross heating value) in a cubic metre of natural gas.
+pub fn therms_per_m3_of_gas() -> f64 {
+    let net = stillroom_core::heat::Fuel::NaturalGas.data().heating_value_j_per_unit;
+    net * NATURAL_GAS_GROSS_OVER_NET / sp811::THERM_J
+}
+
 /// An amount of fuel, given in the core's sales unit (kg, m³, kWh): metric as it is; US as
 /// propane in lb and gal, natural gas in therms and ft³, firewood in lb, electricity in kWh.
 pub fn fuel(amount: f64, fuel: stillroom_core::heat::Fuel) -> String {
@@ -407,7 +419,7 @@ pub fn fuel(amount: f64, fuel: stillroom_core::heat::Fuel) -> String {
         ),
         Fuel::NaturalGas => format!(
             "{} therms ({} ft³)",
-            sig3(amount * data.heating_value_j_per_unit / sp811::THERM_J),
+            sig3(amount * therms_per_m3_of_gas()),
             sig3(amount / sp811::FT3_M3)
         ),
         Fuel::Firewood => format!(
@@ -486,6 +498,17 @@ mod tests {
             assert_eq!(fuel(2000.0, Fuel::Firewood), "4409 lb (about 1.00 cord)");
         });
         assert_eq!(fuel(2000.0, Fuel::Firewood), "2000 kg");
+    }
+
+    #[wasm_bindgen_test]
+    fn natural_gas_is_shown_in_therms_as_billed() {
+        use stillroom_core::heat::Fuel;
+        // 10 m³ at 36.6 MJ/m³ net is 366 MJ, 405.5 MJ gross (× 1089 / 983, GREET, from memory);
+        // over 105.4804 MJ a therm (SP 811) that is 3.844 therms; 10 m³ / 0.028 316 846 592 m³
+        // a ft³ (SP 811) is 353.1 ft³.
+        with_system(UnitSystem::UsCustomary, || {
+            assert_eq!(fuel(10.0, Fuel::NaturalGas), "3.84 therms (353 ft³)");
+        });
     }
 
     #[wasm_bindgen_test]

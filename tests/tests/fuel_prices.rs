@@ -16,9 +16,9 @@ const THERM_J: f64 = 1.054_804e8;
 /// Liquid propane at 60 °F: relative density 0.507 (GPA 2145, from memory) times water's
 /// 999.0 kg/m³ at 60 °F; the density the page gives its gallons of propane in.
 const PROPANE_KG_PER_M3: f64 = 0.507 * 999.0;
-/// Natural gas, 36.6 MJ per m³: the lower heating value in the core's fuel table (PNNL, GREET),
-/// the one the page counts its therms of gas on.
-const NATURAL_GAS_J_PER_M3: f64 = 36.6e6;
+/// Natural gas as a US utility bills it, per m³: the core's 36.6 MJ net (PNNL, GREET) on the
+/// gross basis, times 1,089 / 983 (GREET's gross and net Btu/ft³, from memory).
+const NATURAL_GAS_J_PER_M3: f64 = 36.6e6 * 1089.0 / 983.0;
 
 /// The form's price label, whether or not its section is open.
 async fn price_label(c: &Client) -> Result<String, BoxError> {
@@ -104,10 +104,10 @@ async fn a_fuel_price_is_typed_per_gallon_or_therm_and_costs_the_run_as_the_core
     );
 
     // Natural gas: the same text is now read per therm (the propane price behind it is not kept):
-    // 1 m³ holds 36.6e6 / 105 480 400 = 0.346 98 therm, so 2.75 × 0.346 98 = 0.954 21 per m³.
+    // 1 m³ holds 40 546 694 / 105 480 400 = 0.384 40 therm, so 2.75 × 0.384 40 = 1.057 10 per m³.
     choose(c, "f-fuel", "natural_gas").await?;
     let per_m3 = 2.75 * NATURAL_GAS_J_PER_M3 / THERM_J;
-    assert!((per_m3 - 0.954_206).abs() < 1e-6, "{per_m3}");
+    assert!((per_m3 - 1.057_101).abs() < 1e-6, "{per_m3}");
     let gas = scenario_with(c, "natural_gas", per_m3).await?;
     assert_eq!(price_label(c).await?, "USD per therm");
     assert_eq!(price_text(c).await?, "2.75");
