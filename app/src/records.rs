@@ -11,6 +11,7 @@ use serde::{Deserialize, Serialize};
 use serde_json::Value;
 use stillroom_core::Scenario;
 use stillroom_core::calibration::RunRecord;
+use stillroom_core::json_path;
 
 /// Storage key of the saved scenario record.
 pub const SCENARIO_KEY: &str = "stillroom.scenario";
@@ -180,19 +181,18 @@ fn shape(v: &Value) -> &'static str {
     }
 }
 
-/// Deserialises with the failing field's path in the message (`charge.plant_mass_kg: invalid
-/// type: string "lots", expected a number`).
-fn typed<T: serde::de::DeserializeOwned>(value: Value) -> Result<T, String> {
-    serde_path_to_error::deserialize(value).map_err(|e| {
-        let path = e.path().to_string();
+/// Reads `raw` as a `T`, with the failing field's path in the message (`charge.plant_mass_kg:
+/// invalid type: string "lots", expected a number`). From the text, not a parsed value: the
+/// text's places give the path (`stillroom_core::json_path`), and a key given twice is refused.
+fn typed<T: serde::de::DeserializeOwned>(raw: &str) -> Result<T, String> {
+    serde_json::from_str(raw).map_err(|e| {
+        let path = json_path::bracketed(&json_path::error_path(raw, &e));
         // serde's words, with Rust's type names said plainly.
-        let inner = e
-            .into_inner()
-            .to_string()
+        let inner = json_path::message_of(&e)
             .replace("expected f64", "expected a number")
             .replace("expected u32", "expected a whole number")
             .replace("expected u64", "expected a whole number");
-        if path.is_empty() || path == "." { inner } else { format!("{path}: {inner}") }
+        if path == "." { inner } else { format!("{path}: {inner}") }
     })
 }
 
@@ -253,7 +253,7 @@ pub fn read_strict<T: serde::de::DeserializeOwned + Serialize>(
         }
         Some(_) => {}
     }
-    let record: T = typed(value.clone())?;
+    let record: T = typed(raw)?;
     let back = serde_json::to_value(&record).map_err(|e| e.to_string())?;
     match lost_part(&value, &back, "") {
         Some(p) => Err(p),
@@ -270,8 +270,7 @@ pub fn fits(s: &Scenario, at: &str) -> Result<(), String> {
     let said = |e: &stillroom_core::scenario::FieldError| {
         format!("{at}{}: {} (got {}; valid: {})", e.field, e.message, e.value, e.valid)
     };
-    let value = serde_json::to_value(s).map_err(|e| e.to_string())?;
-    if let Err(errors) = stillroom_core::scenario::scenario_from_json_value(value)
+    if let Err(errors) = stillroom_core::scenario::check_version(s.version)
         && let Some(e) = errors.errors.first()
     {
         return Err(said(e));
@@ -294,7 +293,7 @@ pub fn read_scenario(raw: &str) -> Result<Scenario, String> {
     object(&value, "plan")?;
     if value.get("record_version").is_some() {
         version(&value)?;
-        let record: ScenarioRecord = typed(value.clone())?;
+        let record: ScenarioRecord = typed(raw)?;
         fits(&record.scenario, "scenario.")?;
         let back = serde_json::to_value(&record.scenario).map_err(|e| e.to_string())?;
         match lost_part(&value["scenario"], &back, "scenario") {
@@ -302,7 +301,7 @@ pub fn read_scenario(raw: &str) -> Result<Scenario, String> {
             None => Ok(record.scenario),
         }
     } else {
-        let scenario: Scenario = typed(value.clone())?;
+        let scenario: Scenario = typed(raw)?;
         fits(&scenario, "")?;
         let back = serde_json::to_value(&scenario).map_err(|e| e.to_string())?;
         match lost_part(&value, &back, "") {
@@ -343,7 +342,7 @@ pub fn read_runs(raw: &str) -> Result<RunsRecord, String> {
         }
     }
     if v <= 1 {
-        let old: RunsRecordV1 = typed(value.clone())?;
+        let old: RunsRecordV1 = typed(raw)?;
         let back = serde_json::to_value(&old.runs).map_err(|e| e.to_string())?;
         if let Some(p) = lost_part(&value["runs"], &back, "runs") {
             return Err(p);
@@ -351,7 +350,7 @@ pub fn read_runs(raw: &str) -> Result<RunsRecord, String> {
         let runs = old.runs.into_iter().map(RunV1::migrated).collect();
         return Ok(RunsRecord { record_version: RUNS_RECORD_VERSION, runs, lot_pattern: String::new() });
     }
-    let record: RunsRecord = typed(value.clone())?;
+    let record: RunsRecord = typed(raw)?;
     let back = serde_json::to_value(&record).map_err(|e| e.to_string())?;
     match lost_part(&value, &back, "") {
         Some(p) => Err(p),

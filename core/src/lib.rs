@@ -12,6 +12,8 @@ pub mod compounds;
 pub mod condenser;
 pub mod crops;
 pub mod heat;
+#[cfg(feature = "json")]
+pub mod json_path;
 pub mod numeric;
 pub mod oil;
 pub mod plan;

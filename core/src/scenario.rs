@@ -644,12 +644,14 @@ impl<'a> CustomIndex<'a> {
 }
 
 #[cfg(feature = "json")]
-pub use json::{parse_scenario_json, scenario_from_json_value};
+pub use json::{check_version, parse_scenario_json, scenario_from_json_value};
 
 /// Reading a scenario from JSON strictly: every error names its field and what it expects.
 #[cfg(feature = "json")]
 mod json {
     use super::{FieldError, OLDEST_SCENARIO_VERSION, SCENARIO_VERSION, Scenario, ScenarioErrors, limits};
+    use crate::json_path;
+    use serde::Deserialize;
     use serde_json::Value;
 
     /// The only places a scenario holds a list; anywhere else a list would be a section written
@@ -701,8 +703,7 @@ mod json {
             .map_err(|e| one("scenario", String::new(), "JSON text", format!("not readable as JSON: {e}")))?;
         check_shape(&value)?;
         // From the text rather than the value, so that a key given twice is caught as well.
-        let de = &mut serde_json::Deserializer::from_str(text);
-        serde_path_to_error::deserialize(de).map_err(|e| from_serde(&value, e))
+        serde_json::from_str(text).map_err(|e| from_serde(&value, text, &e, true))
     }
 
     /// Reads a scenario from a JSON value, with the same checks as [`parse_scenario_json`].
@@ -715,7 +716,29 @@ mod json {
     pub fn scenario_from_json_value(value: Value) -> Result<Scenario, ScenarioErrors> {
         check_shape(&value)?;
         let original = value.clone();
-        serde_path_to_error::deserialize(value).map_err(|e| from_serde(&original, e))
+        serde_json::from_value(value).map_err(|e| {
+            // The value has no places to name; its text, read again, has (the same fault, as
+            // the text holds the same numbers and keys).
+            let text = original.to_string();
+            match serde_json::from_str::<Scenario>(&text) {
+                Err(at) => from_serde(&original, &text, &at, false),
+                Ok(_) => from_serde(&original, "", &e, false),
+            }
+        })
+    }
+
+    /// Refuses a format `version` this build does not read, in the words [`parse_scenario_json`]
+    /// uses.
+    ///
+    /// ```
+    /// use stillroom_core::scenario::{check_version, SCENARIO_VERSION};
+    /// assert!(check_version(SCENARIO_VERSION).is_ok());
+    /// assert_eq!(check_version(SCENARIO_VERSION + 1).unwrap_err().errors[0].field, "version");
+    /// ```
+    pub fn check_version(version: u32) -> Result<(), ScenarioErrors> {
+        let mut map = serde_json::Map::new();
+        map.insert("version".into(), Value::from(version));
+        check_shape(&Value::Object(map))
     }
 
     /// The checks serde's derive does not make: an object at the top, a version this build reads,
@@ -827,10 +850,11 @@ mod json {
 
     /// Turns serde's error (with the path it failed at) into a field error: the dotted path,
     /// what was expected, in words.
-    fn from_serde(value: &Value, e: serde_path_to_error::Error<serde_json::Error>) -> ScenarioErrors {
-        let mut field = dotted(e.path());
-        let inner = e.into_inner();
-        let text = inner.to_string();
+    /// `text` is what serde_json read (empty when it read the value itself); `keep_place` keeps
+    /// its " (line L column C)" for a grower's own text.
+    fn from_serde(value: &Value, text: &str, e: &serde_json::Error, keep_place: bool) -> ScenarioErrors {
+        let mut field = into_tagged(value, dotted(&json_path::error_path(text, e)));
+        let text = if keep_place { e.to_string() } else { json_path::message_of(e) };
         // serde_json appends " at line L column C"; the field path says more, keep it apart.
         let (message, place) = match text.rfind(" at line ") {
             Some(i) => (text[..i].to_string(), Some(text[i + 1..].to_string())),
@@ -840,9 +864,10 @@ mod json {
         // parts again on their own.
         if field == "oil.composition"
             && let Some(parts) = value.pointer("/oil/composition/parts")
-            && let Err(pe) = serde_path_to_error::deserialize::<_, Vec<super::OilPart>>(parts)
+            && let parts_text = parts.to_string()
+            && let Err(pe) = serde_json::from_str::<Vec<super::OilPart>>(&parts_text)
         {
-            let sub = dotted(pe.path());
+            let sub = dotted(&json_path::error_path(&parts_text, &pe));
             field = if sub == "scenario" {
                 "oil.composition.parts".into()
             } else {
@@ -877,16 +902,30 @@ mod json {
         }
     }
 
-    fn dotted(path: &serde_path_to_error::Path) -> String {
-        let parts: Vec<String> = path
-            .iter()
-            .filter_map(|seg| match seg {
-                serde_path_to_error::Segment::Seq { index } => Some(index.to_string()),
-                serde_path_to_error::Segment::Map { key } => Some(key.clone()),
-                serde_path_to_error::Segment::Enum { .. } | serde_path_to_error::Segment::Unknown => None,
-            })
-            .collect();
-        if parts.is_empty() { "scenario".into() } else { parts.join(".") }
+    /// A fault inside a tagged section (`oil.composition`, an own compound's
+    /// `vapour_pressure`: serde reads such a section whole before its fields) is placed by
+    /// serde_json after the section; when the section is its parent's last member, after the
+    /// parent too, so the path stops at the parent. The parent's tagged section read again on its
+    /// own shows whether the fault is in it.
+    fn into_tagged(value: &Value, field: String) -> String {
+        let pointer = format!("/{}", field.replace('.', "/"));
+        let parent = if field == "scenario" { Some(value) } else { value.pointer(&pointer) };
+        let fails = |name: &str, read: fn(&Value) -> bool| {
+            parent.and_then(|p| p.get(name)).is_some_and(|v| v.is_object() && !read(v))
+        };
+        let in_list = field.strip_prefix("custom_compounds.").is_some_and(|i| i.parse::<usize>().is_ok());
+        if field == "oil" && fails("composition", |v| super::OilComposition::deserialize(v).is_ok()) {
+            "oil.composition".into()
+        } else if in_list && fails("vapour_pressure", |v| super::CustomVapourPressure::deserialize(v).is_ok()) {
+            format!("{field}.vapour_pressure")
+        } else {
+            field
+        }
+    }
+
+    fn dotted(path: &[json_path::Step]) -> String {
+        let d = json_path::dotted(path);
+        if d.is_empty() { "scenario".into() } else { d }
     }
 
     /// serde names Rust types; say what a user would type.
