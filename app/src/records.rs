@@ -370,6 +370,21 @@ mod tests {
     }
 
     #[wasm_bindgen_test]
+    fn a_key_given_twice_is_refused_on_its_path_as_the_core_refuses_it() {
+        // Read as a parsed value first, the last of the two would have been taken silently.
+        let twice = r#"{"record_version":1,"scenario":{"charge":{"plant_mass_kg":40,"plant_mass_kg":4}}}"#;
+        let e = read_scenario(twice).unwrap_err();
+        assert!(e.starts_with("scenario.charge.plant_mass_kg: duplicate field"), "{e}");
+        let core = stillroom_core::scenario::parse_scenario_json(
+            r#"{"charge":{"plant_mass_kg":40,"plant_mass_kg":4}}"#,
+        );
+        assert_eq!(core.unwrap_err().errors[0].field, "charge.plant_mass_kg");
+        // A misplaced value names its field in the page's words.
+        let e = read_scenario(r#"{"charge":{"plant_mass_kg":"lots"}}"#).unwrap_err();
+        assert_eq!(e, "charge.plant_mass_kg: invalid type: string \"lots\", expected a number");
+    }
+
+    #[wasm_bindgen_test]
     fn a_record_of_this_version_reads_and_comes_back_the_same() {
         let s = Scenario::default();
         let text = scenario_text(&s);

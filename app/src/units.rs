@@ -417,11 +417,9 @@ pub fn fuel(amount: f64, fuel: stillroom_core::heat::Fuel) -> String {
             sig3(amount / sp811::LB_KG),
             sig3(amount / PROPANE_LIQUID_KG_PER_M3 / sp811::GAL_M3)
         ),
-        Fuel::NaturalGas => format!(
-            "{} therms ({} ft³)",
-            sig3(amount * therms_per_m3_of_gas()),
-            sig3(amount / sp811::FT3_M3)
-        ),
+        Fuel::NaturalGas => {
+            format!("{} therms ({} ft³)", sig3(amount * therms_per_m3_of_gas()), sig3(amount / sp811::FT3_M3))
+        }
         Fuel::Firewood => format!(
             "{} lb (about {} cord)",
             sig3(amount / sp811::LB_KG),

@@ -916,7 +916,8 @@ mod json {
         let in_list = field.strip_prefix("custom_compounds.").is_some_and(|i| i.parse::<usize>().is_ok());
         if field == "oil" && fails("composition", |v| super::OilComposition::deserialize(v).is_ok()) {
             "oil.composition".into()
-        } else if in_list && fails("vapour_pressure", |v| super::CustomVapourPressure::deserialize(v).is_ok()) {
+        } else if in_list && fails("vapour_pressure", |v| super::CustomVapourPressure::deserialize(v).is_ok())
+        {
             format!("{field}.vapour_pressure")
         } else {
             field

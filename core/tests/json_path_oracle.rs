@@ -59,7 +59,11 @@ fn compare<T: DeserializeOwned + std::fmt::Debug>(doc: &Value) -> usize {
                     serde_path_to_error::deserialize(&mut serde_json::Deserializer::from_str(&text));
                 match (ours, reference) {
                     (Err(e), Err(r)) => {
-                        assert_eq!(bracketed(&error_path(&text, &e)), r.path().to_string(), "fault at {p}: {text}");
+                        assert_eq!(
+                            bracketed(&error_path(&text, &e)),
+                            r.path().to_string(),
+                            "fault at {p}: {text}"
+                        );
                         compared += 1;
                     }
                     (Ok(_), Ok(_)) => {}
@@ -80,7 +84,12 @@ fn full_scenario() -> Value {
         molar_mass_kg_per_mol: 0.154,
         liquid_density_kg_per_m3: 870.0,
         water_solubility_kg_per_m3: 0.5,
-        vapour_pressure: CustomVapourPressure::TwoPoints { t1_c: 25.0, p1_pa: 30.0, t2_c: 200.0, p2_pa: 101_325.0 },
+        vapour_pressure: CustomVapourPressure::TwoPoints {
+            t1_c: 25.0,
+            p1_pa: 30.0,
+            t2_c: 200.0,
+            p2_pa: 101_325.0,
+        },
     });
     s.oil.composition = OilComposition::Mixture {
         parts: vec![
@@ -115,7 +124,12 @@ fn every_fault_of_a_list_of_batch_records_is_placed_where_the_reference_places_i
 #[test]
 fn a_place_inside_a_string_with_escapes_is_found() {
     let text = r#"{"a\"b": {"c\\": [1, {"d": "x"}]}}"#;
-    let e = serde_json::from_str::<std::collections::BTreeMap<String, std::collections::BTreeMap<String, (u8, std::collections::BTreeMap<String, u8>)>>>(text)
-        .unwrap_err();
+    let e = serde_json::from_str::<
+        std::collections::BTreeMap<
+            String,
+            std::collections::BTreeMap<String, (u8, std::collections::BTreeMap<String, u8>)>,
+        >,
+    >(text)
+    .unwrap_err();
     assert_eq!(bracketed(&error_path(text, &e)), "a\"b.c\\[1].d");
 }
