@@ -651,7 +651,6 @@ pub use json::{check_version, parse_scenario_json, scenario_from_json_value};
 mod json {
     use super::{FieldError, OLDEST_SCENARIO_VERSION, SCENARIO_VERSION, Scenario, ScenarioErrors, limits};
     use crate::json_path;
-    use serde::Deserialize;
     use serde_json::Value;
 
     /// The only places a scenario holds a list; anywhere else a list would be a section written
@@ -910,13 +909,17 @@ mod json {
     fn into_tagged(value: &Value, field: String) -> String {
         let pointer = format!("/{}", field.replace('.', "/"));
         let parent = if field == "scenario" { Some(value) } else { value.pointer(&pointer) };
-        let fails = |name: &str, read: fn(&Value) -> bool| {
-            parent.and_then(|p| p.get(name)).is_some_and(|v| v.is_object() && !read(v))
+        // Read from text, as the whole scenario is: the same reader, no second copy of it.
+        let fails = |name: &str, read: fn(&str) -> bool| {
+            parent.and_then(|p| p.get(name)).is_some_and(|v| v.is_object() && !read(&v.to_string()))
         };
         let in_list = field.strip_prefix("custom_compounds.").is_some_and(|i| i.parse::<usize>().is_ok());
-        if field == "oil" && fails("composition", |v| super::OilComposition::deserialize(v).is_ok()) {
+        if field == "oil"
+            && fails("composition", |t| serde_json::from_str::<super::OilComposition>(t).is_ok())
+        {
             "oil.composition".into()
-        } else if in_list && fails("vapour_pressure", |v| super::CustomVapourPressure::deserialize(v).is_ok())
+        } else if in_list
+            && fails("vapour_pressure", |t| serde_json::from_str::<super::CustomVapourPressure>(t).is_ok())
         {
             format!("{field}.vapour_pressure")
         } else {
