@@ -1,7 +1,7 @@
 //! The exact design: the most charges a day the request allows (so the smallest still), and
 //! the least heat input that meets the crop's steam rate, the longest run and the working day.
 
-use super::request::{Needs, SizingErrors, SizingRequest, num};
+use super::request::{Figures, Needs, Quantity, SizingErrors, SizingRequest, num};
 use super::search::{bracket_up, smallest_passing};
 use super::trial::{self, Equipment, Shortfall, Trial, VesselChoice};
 use crate::heat;
@@ -102,25 +102,34 @@ pub(super) fn shortfall_error(
     let kw = needs.heat_cap_w / 1000.0;
     let charge = trial::charge_kg(needs, charges);
     let need = needs.steam_rate_kg_per_h_per_kg;
+    let mut f = Figures::default();
     match s {
-        Shortfall::SteamRate { got } => SizingErrors::one(
-            heat_field(req),
-            format!("{} kW", num(kw)),
-            format!("enough heat for {} kg/h of steam", num(need * charge)),
-            format!(
-                "{} kW cannot raise the steam the crop needs: {} kg/h per kg of charge ({:.1} kg/h for {:.1} kg at {} charges a day) against the {:.3} kg/h per kg it can raise; allow more charges a day or a larger supply",
-                num(kw), num(need), need * charge, charge, charges, got
-            ),
-        ),
-        Shortfall::RunLength { got_s } => SizingErrors::one(
-            "limits.max_run_s",
-            num(req.limits.max_run_s),
-            format!("at least {:.0} s", got_s.ceil()),
-            format!(
-                "even with the full {} kW a charge of {:.1} kg takes {:.0} min from lighting: the plant gives up its oil at its own pace and the boiler water must first boil; allow a longer run",
-                num(kw), charge, got_s / 60.0
-            ),
-        ),
+        Shortfall::SteamRate { got } => {
+            let message = format!(
+                "{} cannot raise the steam the crop needs: {} of charge ({} for {} at {} charges a day) against the {} it can raise; allow more charges a day or a larger supply",
+                f.supply(req, needs.heat_cap_w, format!("{} kW", num(kw))),
+                f.fig(need / 3600.0, Quantity::SteamPerChargeKgPerSPerKg, format!("{} kg/h per kg", num(need))),
+                f.fig(need * charge / 3600.0, Quantity::SteamKgPerS, format!("{:.1} kg/h", need * charge)),
+                f.fig(charge, Quantity::MassKg, format!("{charge:.1} kg")),
+                charges,
+                f.fig(got / 3600.0, Quantity::SteamPerChargeKgPerSPerKg, format!("{got:.3} kg/h per kg")),
+            );
+            f.error(
+                heat_field(req),
+                format!("{} kW", num(kw)),
+                format!("enough heat for {} kg/h of steam", num(need * charge)),
+                message,
+            )
+        }
+        Shortfall::RunLength { got_s } => {
+            let message = format!(
+                "even with the full {} a charge of {} takes {:.0} min from lighting: the plant gives up its oil at its own pace and the boiler water must first boil; allow a longer run",
+                f.supply(req, needs.heat_cap_w, format!("{} kW", num(kw))),
+                f.fig(charge, Quantity::MassKg, format!("{charge:.1} kg")),
+                got_s / 60.0
+            );
+            f.error("limits.max_run_s", num(req.limits.max_run_s), format!("at least {:.0} s", got_s.ceil()), message)
+        }
         Shortfall::WorkingDay { got_s } => SizingErrors::one(
             if req.limits.working_day_s.is_some() { "limits.working_day_s" } else { "limits.max_charges_per_day" },
             num(needs.working_day_s),
@@ -130,12 +139,15 @@ pub(super) fn shortfall_error(
                 charges, got_s / 3600.0
             ),
         ),
-        Shortfall::ChargeDoesNotFit { space_m3 } => SizingErrors::one(
-            "limits.max_charges_per_day",
-            charges.to_string(),
-            "a charge the vessel holds".into(),
-            format!("the vessel's charge space ({:.0} L) is too small", space_m3 * 1000.0),
-        ),
+        Shortfall::ChargeDoesNotFit { space_m3 } => {
+            let space = f.fig(space_m3, Quantity::VolumeM3, format!("{:.0} L", space_m3 * 1000.0));
+            f.error(
+                "limits.max_charges_per_day",
+                charges.to_string(),
+                "a charge the vessel holds".into(),
+                format!("the vessel's charge space ({space}) is too small"),
+            )
+        }
         Shortfall::BoilerRefill => SizingErrors::one(
             "heat",
             num(kw),

@@ -31,12 +31,13 @@ pub mod vessel;
 pub use catalogue::TubeStandard;
 pub use design::*;
 pub use request::{
-    CoolingSupply, ElectricSupply, Harvest, HeatSupply, Limits, SiteRequest, SizingErrors, SizingRequest,
+    CoolingSupply, ElectricSupply, Figure, Harvest, HeatSupply, Limits, Quantity, SiteRequest, SizingErrors,
+    SizingRequest,
 };
 
 use crate::plan::{Plan, plan};
 use crate::scenario::CondenserKind;
-use request::{Needs, num};
+use request::{Figures, Needs, num};
 use trial::Trial;
 
 /// Designs the smallest still, heat source, condenser and separator that meet a request, each
@@ -130,28 +131,37 @@ fn check_final(
     if let (CondenserKind::TubeInTube, Some(limit)) = (req.cooling.condenser, req.cooling.max_flow_kg_per_s) {
         let flow = p.condenser.cooling_water_flow_kg_per_s;
         if flow > limit {
-            return Err(SizingErrors::one(
+            let mut f = Figures::default();
+            let warmest = req.limits.warmest_cooling_water_c;
+            let message = format!(
+                "the jacket needs {} of cooling water to leave at {}: allow a warmer outflow, more flow, or a coil in a tub",
+                f.fig(flow, Quantity::WaterFlowKgPerS, format!("{flow:.3} kg/s")),
+                f.fig(warmest, Quantity::TemperatureC, format!("{} °C", num(warmest))),
+            );
+            return Err(f.error(
                 "cooling.max_flow_kg_per_s",
                 num(limit),
                 format!("at least {flow:.3} kg/s"),
-                format!(
-                    "the jacket needs {flow:.3} kg/s of cooling water to leave at {} °C: allow a warmer outflow, more flow, or a coil in a tub",
-                    num(req.limits.warmest_cooling_water_c)
-                ),
+                message,
             ));
         }
     }
     if let Some(limit) = req.limits.max_water_per_run_kg {
         let used = p.water_use.total_kg;
         if used > limit {
-            return Err(SizingErrors::one(
+            let mut f = Figures::default();
+            let (feed, cooling) = (p.water_use.boiler_feed_kg, p.water_use.cooling_water_kg);
+            let message = format!(
+                "a charge uses {} of water ({} boiler feed, {} cooling): the cooling water carries the condenser's heat, so allow more water or a warmer tub",
+                f.fig(used, Quantity::WaterKg, format!("{used:.0} kg")),
+                f.fig(feed, Quantity::WaterKg, format!("{feed:.0} kg")),
+                f.fig(cooling, Quantity::WaterKg, format!("{cooling:.0} kg")),
+            );
+            return Err(f.error(
                 "limits.max_water_per_run_kg",
                 num(limit),
                 format!("at least {used:.0} kg"),
-                format!(
-                    "a charge uses {used:.0} kg of water ({:.0} kg boiler feed, {:.0} kg cooling): the cooling water carries the condenser's heat, so allow more water or a warmer tub",
-                    p.water_use.boiler_feed_kg, p.water_use.cooling_water_kg
-                ),
+                message,
             ));
         }
     }
@@ -516,6 +526,65 @@ mod tests {
         r.cooling.condenser = CondenserKind::TubeInTube;
         r.cooling.max_flow_kg_per_s = Some(0.001);
         assert!(size(&r).unwrap_err().on("cooling.max_flow_kg_per_s").is_some());
+    }
+
+    /// Each figure's words stand in the message, in order, with a value that reads back as
+    /// them: what a page needs to restate the message in other units.
+    fn figures_stand_in(e: &SizingErrors) {
+        let message = &e.errors[0].message;
+        let mut from = 0;
+        for f in &e.figures {
+            let at =
+                message[from..].find(&f.shown).unwrap_or_else(|| panic!("{:?} not in {message}", f.shown));
+            from += at + f.shown.len();
+            let number: f64 = f.shown.split(' ').next().unwrap().parse().unwrap();
+            let in_words = match f.quantity {
+                Quantity::HeatInputW | Quantity::ElectricPowerW => f.si / 1000.0,
+                Quantity::SteamKgPerS | Quantity::SteamPerChargeKgPerSPerKg => f.si * 3600.0,
+                Quantity::VolumeM3 => f.si * 1000.0,
+                Quantity::MassKg | Quantity::WaterKg | Quantity::WaterFlowKgPerS | Quantity::TemperatureC => {
+                    f.si
+                }
+            };
+            assert!(
+                (number - in_words).abs() <= 0.5 * 10f64.powi(-(decimals(&f.shown) as i32)) + 1e-9,
+                "{f:?}"
+            );
+        }
+    }
+
+    fn decimals(shown: &str) -> usize {
+        let n = shown.split(' ').next().unwrap();
+        n.split_once('.').map_or(0, |(_, d)| d.len())
+    }
+
+    #[test]
+    fn a_limit_that_cannot_be_met_lists_its_figures_for_other_units() {
+        let mut r = request();
+        r.limits.max_run_s = 1200.0;
+        let e = size(&r).unwrap_err();
+        assert!(e.figures.iter().any(|f| f.quantity == Quantity::MassKg), "{e:?}");
+        figures_stand_in(&e);
+        let mut r = request();
+        r.limits.max_water_per_run_kg = Some(5.0);
+        let e = size(&r).unwrap_err();
+        assert_eq!(e.figures.len(), 3, "{e:?}");
+        figures_stand_in(&e);
+        let mut r = request();
+        r.cooling.condenser = CondenserKind::TubeInTube;
+        r.cooling.max_flow_kg_per_s = Some(0.001);
+        let e = size(&r).unwrap_err();
+        assert_eq!(e.figures[1].quantity, Quantity::TemperatureC, "{e:?}");
+        figures_stand_in(&e);
+        let mut r = request();
+        r.heat = HeatSupply::Fuel {
+            fuel: crate::heat::Fuel::Propane,
+            appliance: None,
+            max_heat_input_w: Some(5000.0),
+        };
+        let e = size(&r).unwrap_err();
+        assert_eq!(e.figures[0].quantity, Quantity::HeatInputW, "{e:?}");
+        figures_stand_in(&e);
     }
 
     #[test]

@@ -182,6 +182,69 @@ pub(super) struct Needs {
 #[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
 pub struct SizingErrors {
     pub errors: Vec<FieldError>,
+    /// The numbers with units in the message of a limit the request cannot meet, in the order
+    /// they appear, so a reader in other units can restate them.
+    #[serde(default, skip_serializing_if = "Vec::is_empty")]
+    pub figures: Vec<Figure>,
+}
+
+/// A number in a sizing message as written there (`"12 kW"`), with its SI value and kind.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
+pub struct Figure {
+    pub shown: String,
+    pub si: f64,
+    pub quantity: Quantity,
+}
+
+/// What a [`Figure`] measures, and so its SI unit.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+#[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
+#[serde(rename_all = "snake_case")]
+pub enum Quantity {
+    /// A fuel's heat input, W.
+    HeatInputW,
+    /// An electric supply's power, W (kW in any units).
+    ElectricPowerW,
+    /// Plant, kg.
+    MassKg,
+    /// Steam, kg/s.
+    SteamKgPerS,
+    /// Steam per kg of charge, kg/s per kg (a ratio the same in any mass unit).
+    SteamPerChargeKgPerSPerKg,
+    /// A vessel's volume, m³.
+    VolumeM3,
+    /// Water by mass, kg.
+    WaterKg,
+    /// A water flow, kg/s.
+    WaterFlowKgPerS,
+    /// A temperature, °C.
+    TemperatureC,
+}
+
+/// Collects the figures of one message while it is written: `fig` returns the words it records.
+#[derive(Default)]
+pub(super) struct Figures(Vec<Figure>);
+
+impl Figures {
+    pub(super) fn fig(&mut self, si: f64, quantity: Quantity, shown: String) -> String {
+        self.0.push(Figure { shown: shown.clone(), si, quantity });
+        shown
+    }
+
+    /// The heat supply's figure: a fuel's heat input, or an electric supply's power.
+    pub(super) fn supply(&mut self, req: &SizingRequest, w: f64, shown: String) -> String {
+        let q = match req.heat {
+            HeatSupply::Electric { .. } => Quantity::ElectricPowerW,
+            HeatSupply::Fuel { .. } => Quantity::HeatInputW,
+        };
+        self.fig(w, q, shown)
+    }
+
+    /// One error with these figures.
+    pub(super) fn error(self, field: &str, value: String, valid: String, message: String) -> SizingErrors {
+        SizingErrors { figures: self.0, ..SizingErrors::one(field, value, valid, message) }
+    }
 }
 
 impl SizingErrors {
@@ -193,6 +256,7 @@ impl SizingErrors {
     pub(super) fn one(field: &str, value: String, valid: String, message: String) -> SizingErrors {
         SizingErrors {
             errors: vec![FieldError { field: field.into(), value, valid, message, min: None, max: None }],
+            figures: Vec::new(),
         }
     }
 }
@@ -362,7 +426,7 @@ pub(super) fn check(r: &SizingRequest) -> Result<Needs, SizingErrors> {
     }
 
     if !ck.errors.is_empty() {
-        return Err(SizingErrors { errors: ck.errors });
+        return Err(SizingErrors { errors: ck.errors, figures: Vec::new() });
     }
     let (Some(packing_kg_per_m3), Some(steam_rate)) = (packing, steam) else {
         return Err(SizingErrors::one(

@@ -5,7 +5,7 @@
 
 use super::catalogue::{self, Size, Tube};
 use super::exact::{Exact, search_equipment, shortfall_error};
-use super::request::{Needs, SizingErrors, SizingRequest, num};
+use super::request::{Figures, Needs, Quantity, SizingErrors, SizingRequest, num};
 use super::search::{bracket_up, smallest_passing};
 use super::trial::{self, Equipment, Shortfall, Trial, VesselChoice};
 use crate::plan::{Doubt, Plan, plan_with};
@@ -67,34 +67,40 @@ pub(super) fn vessel_and_heat(
     }
     if !any_vessel {
         let largest = catalogue::VESSELS_M3.last().map(|v| v.value).unwrap_or(0.0);
-        return Err(SizingErrors::one(
+        let mut f = Figures::default();
+        let message = format!(
+            "at {} charges a day the still must hold {}, more than the largest in the catalogue ({}): allow more charges a day, or more days for the harvest",
+            exact.charges,
+            f.fig(exact_v, Quantity::VolumeM3, format!("{:.0} L", exact_v * 1000.0)),
+            f.fig(largest, Quantity::VolumeM3, format!("{} L", num(largest * 1000.0))),
+        );
+        return Err(f.error(
             "limits.max_charges_per_day",
             req.limits.max_charges_per_day.to_string(),
             format!("a still of at most {} L", num(largest * 1000.0)),
-            format!(
-                "at {} charges a day the still must hold {:.0} L, more than the largest in the catalogue ({} L): allow more charges a day, or more days for the harvest",
-                exact.charges,
-                exact_v * 1000.0,
-                num(largest * 1000.0)
-            ),
+            message,
         ));
     }
     match last_miss {
         Some(s) => Err(shortfall_error(needs, req, exact.charges, s)),
-        None => Err(SizingErrors::one(
-            if matches!(req.heat, super::request::HeatSupply::Electric { .. }) {
-                "heat.supply"
-            } else {
-                "heat.max_heat_input_w"
-            },
-            num(needs.heat_cap_w),
-            format!("at least the next rating over {:.0} W", exact.heat_w),
-            format!(
-                "the design needs {:.2} kW, and no rating in the catalogue lies between that and the {} kW on offer",
-                exact.heat_w / 1000.0,
-                num(needs.heat_cap_w / 1000.0)
-            ),
-        )),
+        None => {
+            let mut f = Figures::default();
+            let message = format!(
+                "the design needs {}, and no rating in the catalogue lies between that and the {} on offer",
+                f.supply(req, exact.heat_w, format!("{:.2} kW", exact.heat_w / 1000.0)),
+                f.supply(req, needs.heat_cap_w, format!("{} kW", num(needs.heat_cap_w / 1000.0))),
+            );
+            Err(f.error(
+                if matches!(req.heat, super::request::HeatSupply::Electric { .. }) {
+                    "heat.supply"
+                } else {
+                    "heat.max_heat_input_w"
+                },
+                num(needs.heat_cap_w),
+                format!("at least the next rating over {:.0} W", exact.heat_w),
+                message,
+            ))
+        }
     }
 }
 
@@ -162,15 +168,17 @@ pub(super) fn tub(req: &SizingRequest, s: &Scenario, p: &Plan) -> Result<TubChoi
     let exact_volume_m3 = exact_water_kg / (rho * TUB_FILL_SHARE);
     let Some(tub) = catalogue::smallest_at_least(catalogue::TUBS_M3, exact_volume_m3) else {
         let largest = catalogue::TUBS_M3.last().map(|t| t.value).unwrap_or(0.0);
-        return Err(SizingErrors::one(
+        let mut f = Figures::default();
+        let message = format!(
+            "keeping the tub at or under {} takes {} of tub, more than the largest in the catalogue: allow a warmer tub or choose a fed jacket (tube_in_tube)",
+            f.fig(warmest, Quantity::TemperatureC, format!("{} °C", num(warmest))),
+            f.fig(exact_volume_m3, Quantity::VolumeM3, format!("{:.0} L", exact_volume_m3 * 1000.0)),
+        );
+        return Err(f.error(
             "limits.warmest_cooling_water_c",
             num(warmest),
             format!("a tub of at most {} L", num(largest * 1000.0)),
-            format!(
-                "keeping the tub at or under {} °C takes {:.0} L of tub, more than the largest in the catalogue: allow a warmer tub or choose a fed jacket (tube_in_tube)",
-                num(warmest),
-                exact_volume_m3 * 1000.0
-            ),
+            message,
         ));
     };
     Ok(TubChoice { exact_water_kg, exact_volume_m3, tub, water_kg: tub.value * TUB_FILL_SHARE * rho })
@@ -181,15 +189,19 @@ pub(super) fn separator(p: &Plan, residence_s: f64) -> Result<(f64, &'static Siz
     let exact = p.separator.distillate_flow_m3_per_s * residence_s;
     match catalogue::smallest_at_least(catalogue::SEPARATORS_M3, exact) {
         Some(size) => Ok((exact, size)),
-        None => Err(SizingErrors::one(
-            "base.separator.residence_time_s",
-            num(residence_s),
-            "a receiver of at most 20 L".into(),
-            format!(
-                "the distillate needs a {:.1} L receiver, more than the largest in the catalogue: use receivers in parallel or a shorter residence time",
-                exact * 1000.0
-            ),
-        )),
+        None => {
+            let mut f = Figures::default();
+            let message = format!(
+                "the distillate needs a {} receiver, more than the largest in the catalogue: use receivers in parallel or a shorter residence time",
+                f.fig(exact, Quantity::VolumeM3, format!("{:.1} L", exact * 1000.0)),
+            );
+            Err(f.error(
+                "base.separator.residence_time_s",
+                num(residence_s),
+                "a receiver of at most 20 L".into(),
+                message,
+            ))
+        }
     }
 }
 

@@ -206,5 +206,5 @@ pub(super) fn request_errors(e: ScenarioErrors, req: &SizingRequest) -> SizingEr
             f
         })
         .collect();
-    SizingErrors { errors }
+    SizingErrors { errors, figures: Vec::new() }
 }

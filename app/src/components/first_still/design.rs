@@ -378,7 +378,8 @@ fn blocked(fs: &FirstStillState) -> Option<(String, Vec<String>)> {
     }
     fs.design.with(|r| match r {
         Some(Err(e)) => {
-            let others = fs.choices.with(|c| unplaced(e, c));
+            let system = fs.units.get();
+            let others = fs.choices.with(|c| unplaced(e, c, system));
             let shown = e.errors.len() - others.len();
             let head = if shown > 0 {
                 format!("No design yet: see the {shown} marked field(s).")

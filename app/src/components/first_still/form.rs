@@ -26,7 +26,7 @@ fn message(fs: &FirstStillState, key: &str) -> Option<String> {
             let f = Some(size_field(key)).filter(|f| f.key == key && f.path == e.field);
             let system = fs.units.get();
             let si = f.and_then(|f| si_value(f, &fs.text(key).get_untracked(), system).ok().flatten());
-            Some(error_words(f, e, si, system))
+            Some(error_words(f, e, &errors.figures, si, system))
         })
     })
 }

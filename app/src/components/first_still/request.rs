@@ -9,8 +9,8 @@ use crate::units::{self, UnitSystem, sp811};
 use stillroom_core::heat::Fuel;
 use stillroom_core::scenario::{CondenserKind, FieldError};
 use stillroom_core::sizing::{
-    CoolingSupply, ElectricSupply, Harvest, HeatSupply, Limits, SiteRequest, SizingErrors, SizingRequest,
-    TubeStandard,
+    CoolingSupply, ElectricSupply, Figure, Harvest, HeatSupply, Limits, Quantity, SiteRequest, SizingErrors,
+    SizingRequest, TubeStandard,
 };
 
 /// One number field of the request.
@@ -548,9 +548,56 @@ fn bound(v: f64) -> String {
     if s.contains('.') { s.trim_end_matches('0').trim_end_matches('.').to_string() } else { s }
 }
 
+/// A sizing figure in the grower's units (the core wrote it in SI words).
+fn figure_words(f: &Figure) -> String {
+    match f.quantity {
+        Quantity::HeatInputW => units::kilowatts(f.si),
+        // Electric supplies are rated in kW in either system.
+        Quantity::ElectricPowerW => f.shown.clone(),
+        Quantity::MassKg => units::mass(f.si),
+        Quantity::SteamKgPerS => units::kg_per_hour(f.si),
+        // Per kg of charge or per lb: the same ratio, said in the system's mass unit.
+        Quantity::SteamPerChargeKgPerSPerKg if units::system() == UnitSystem::UsCustomary => {
+            format!("{} lb/h per lb", units::sig3(f.si * 3600.0))
+        }
+        Quantity::SteamPerChargeKgPerSPerKg => f.shown.clone(),
+        Quantity::VolumeM3 => units::volume(f.si),
+        // A kilogram of water taken as a litre, as the water fields are.
+        Quantity::WaterKg => units::volume(f.si / 1000.0),
+        Quantity::WaterFlowKgPerS => units::litres_per_minute(f.si),
+        Quantity::TemperatureC => units::celsius(f.si),
+    }
+}
+
+/// The core's sentence with its figures restated in US customary, each in turn where it stands;
+/// in metric, the core's own words.
+pub fn in_units(message: &str, figures: &[Figure], system: UnitSystem) -> String {
+    if system == UnitSystem::Metric {
+        return message.to_string();
+    }
+    units::with_system(system, || {
+        let (mut out, mut rest) = (String::new(), message);
+        for f in figures {
+            if let Some(at) = rest.find(&f.shown) {
+                out.push_str(&rest[..at]);
+                out.push_str(&figure_words(f));
+                rest = &rest[at + f.shown.len()..];
+            }
+        }
+        out + rest
+    })
+}
+
 /// The words beside a field for the core's error on it. A range is restated in the field's
-/// own unit (the core's bounds are SI); any other verdict is the core's own sentence.
-pub fn error_words(f: Option<&SizeField>, e: &FieldError, si: Option<f64>, system: UnitSystem) -> String {
+/// own unit (the core's bounds are SI); any other verdict is the core's own sentence, its
+/// figures in the grower's units.
+pub fn error_words(
+    f: Option<&SizeField>,
+    e: &FieldError,
+    figures: &[Figure],
+    si: Option<f64>,
+    system: UnitSystem,
+) -> String {
     if let (Some(f), Some(min), Some(max), Some(v)) = (f, e.min, e.max, si) {
         let unit = f.unit_in(system);
         let unit = if unit.is_empty() { String::new() } else { format!(" {unit}") };
@@ -563,19 +610,20 @@ pub fn error_words(f: Option<&SizeField>, e: &FieldError, si: Option<f64>, syste
             return format!("Must be at most {}{unit}.", bound(hi));
         }
     }
-    let mut c = e.message.chars();
+    let message = in_units(&e.message, figures, system);
+    let mut c = message.chars();
     let first: String = c.next().map(|f| f.to_uppercase().collect()).unwrap_or_default();
     let text = first + c.as_str();
     if text.ends_with('.') { text } else { text + "." }
 }
 
 /// Every error of a verdict that no shown field carries, in words.
-pub fn unplaced(errors: &SizingErrors, c: &Choices) -> Vec<String> {
+pub fn unplaced(errors: &SizingErrors, c: &Choices, system: UnitSystem) -> Vec<String> {
     errors
         .errors
         .iter()
         .filter(|e| shown_on(&e.field, c).is_none())
-        .map(|e| format!("{}: {}", e.field, error_words(None, e, None, UnitSystem::Metric)))
+        .map(|e| format!("{}: {}", e.field, error_words(None, e, &errors.figures, None, system)))
         .collect()
 }
 
@@ -699,6 +747,27 @@ mod tests {
     }
 
     #[wasm_bindgen_test]
+    fn a_limit_the_design_cannot_meet_is_told_in_the_growers_units() {
+        let c = Choices::default();
+        let mut r = build_request(&typed_in(&starting_text, UnitSystem::Metric), &c).unwrap();
+        r.harvest = Harvest::PerDay { kg_per_day: 30.0, days: Some(20) };
+        r.heat = HeatSupply::Fuel { fuel: Fuel::Propane, appliance: None, max_heat_input_w: Some(5000.0) };
+        let e = stillroom_core::size(&r).unwrap_err();
+        let err = e.on("heat.max_heat_input_w").unwrap_or_else(|| panic!("{e}"));
+        let metric = error_words(Some(size_field("max_heat")), err, &e.figures, None, UnitSystem::Metric);
+        assert!(metric.starts_with("5 kW cannot raise the steam"), "{metric}");
+        assert!(metric.contains("for 15.0 kg at 2 charges a day"), "{metric}");
+        let us = error_words(Some(size_field("max_heat")), err, &e.figures, None, UnitSystem::UsCustomary);
+        // 5000 W over 0.293 071 1 W per BTU/h (NIST SP 811 B.8) is 17 060.7 BTU/h, 17 100 to
+        // the page's three figures; 15.0 kg over 0.453 592 37 kg a pound is 33.07 lb.
+        let packed: String = us.chars().filter(|c| !c.is_whitespace() && *c != '\u{202f}').collect();
+        assert!(packed.starts_with("17100BTU/hcannotraisethesteam"), "{us}");
+        assert!(us.contains("for 33.1 lb at 2 charges a day"), "{us}");
+        assert!(us.contains("lb/h per lb"), "{us}");
+        assert!(!us.contains("kg") && !us.contains("kW"), "{us}");
+    }
+
+    #[wasm_bindgen_test]
     fn the_cores_bounds_are_restated_in_the_fields_unit() {
         let c = Choices::default();
         let mut r = build_request(&typed_in(&starting_text, UnitSystem::Metric), &c).unwrap();
@@ -707,7 +776,13 @@ mod tests {
         let err = e.on("limits.max_run_s").unwrap();
         assert_eq!(shown_on(&err.field, &c), Some("longest_run"));
         assert_eq!(
-            error_words(Some(size_field("longest_run")), err, Some(r.limits.max_run_s), UnitSystem::Metric),
+            error_words(
+                Some(size_field("longest_run")),
+                err,
+                &e.figures,
+                Some(r.limits.max_run_s),
+                UnitSystem::Metric
+            ),
             "Must be at most 48 h."
         );
         // The same bound in US customary, where the field is in hours too; a temperature's in °F.
@@ -720,7 +795,7 @@ mod tests {
             max: Some(100.0),
         };
         assert_eq!(
-            error_words(Some(size_field("warmest")), &err, Some(150.0), UnitSystem::UsCustomary),
+            error_words(Some(size_field("warmest")), &err, &[], Some(150.0), UnitSystem::UsCustomary),
             "Must be at most 212 °F."
         );
         assert_eq!(
