@@ -15,6 +15,12 @@ use stillroom_core::scenario::limits::MAX_MIXTURE_PARTS;
 /// The message shown beside a field: its own text first, then the core's verdict on its value,
 /// its limits restated in the field's own unit and precision.
 fn field_message(f: &NumField, state: &AppState) -> Option<String> {
+    // Without a fault there is no message. Asked first, so while the form is sound (most
+    // keystrokes) this memo follows `stale` alone, which does not change, and is not worked out
+    // again on every plan; nor does every field subscribe to the scenario and the plan.
+    if !state.stale.get() {
+        return None;
+    }
     // Read through `with`: the plan is large and every field asks on every keystroke.
     let text_error =
         state.scenario.with(|d| d.text_errors.iter().find(|(k, _)| k == f.key).map(|(_, e)| e.clone()));
@@ -265,6 +271,10 @@ pub fn OilPicker() -> impl IntoView {
     let choice = state.oil_choice;
     let msg_state = state.clone();
     let message = Memo::new(move |_| {
+        // `stale` first: while the form is sound this follows it alone, not every plan.
+        if !msg_state.stale.get() {
+            return None;
+        }
         msg_state.plan.with(|plan| {
             plan.as_ref()
                 .err()?
@@ -297,6 +307,10 @@ pub fn OilPicker() -> impl IntoView {
 
 /// The message beside one line of the oil analysis.
 fn row_message(index: usize, state: &AppState) -> Option<String> {
+    // As for a field: no fault, no message (and no subscription to the scenario or the plan).
+    if !state.stale.get() {
+        return None;
+    }
     let key = format!("mix-{index}");
     let text_error =
         state.scenario.with(|d| d.text_errors.iter().find(|(k, _)| *k == key).map(|(_, e)| e.clone()));
@@ -478,8 +492,12 @@ const APPLIANCES: &[(Option<Appliance>, &str, &str)] = &[
 
 /// The message the plan gives on one field that has no number box, if any.
 fn choice_error(state: &AppState, path: &'static str) -> Signal<String> {
-    let plan = state.plan;
+    let (plan, stale) = (state.plan, state.stale);
+    // `stale` first: while the form is sound this follows it alone, not every plan.
     Signal::derive(move || {
+        if !stale.get() {
+            return String::new();
+        }
         plan.with(|r| {
             r.as_ref()
                 .err()
@@ -753,8 +771,12 @@ fn js_sys_get(obj: &web_sys::Event, name: &str) -> Result<web_sys::js_sys::Funct
 pub fn CurrencyInput() -> impl IntoView {
     let state = expect_context::<AppState>();
     let currency = state.currency;
-    let plan = state.plan;
+    let (plan, stale) = (state.plan, state.stale);
     let message = Memo::new(move |_| {
+        // `stale` first: while the form is sound this follows it alone, not every plan.
+        if !stale.get() {
+            return None;
+        }
         plan.with(|p| {
             p.as_ref()
                 .err()?

@@ -11,6 +11,7 @@ use super::site::Site;
 use super::timeline::{self, Timeline};
 use crate::scenario::Scenario;
 use crate::water;
+use std::cell::RefCell;
 
 /// Steps across each phase: enough for the stepped and closed forms to agree within 1e-4.
 const STEPS: usize = 400;
@@ -25,18 +26,48 @@ pub(super) struct SteppedRun {
     pub heat_delivered_j: f64,
 }
 
+/// The stepped boils' heat capacities kept, by the bits of (feed °C, boil °C, pressure): the
+/// newest first, at most [`KEPT_BOILS`].
+type KeptBoils = Vec<((u64, u64, u64), Vec<f64>)>;
+
+/// A plan steps two boils (the fill and the feed, from the same temperature, and the returned
+/// distillate); a few more cover the page's alternating plans.
+const KEPT_BOILS: usize = 4;
+
+thread_local! {
+    static KEPT: RefCell<KeptBoils> = const { RefCell::new(Vec::new()) };
+}
+
+/// IF97 liquid c_p at the midpoint of each step from `feed_c` to `boil_c`. The page plans again
+/// on every keystroke and most edits (the charge, the fill, the burner) leave the temperatures
+/// and the pressure as they were, while these IF97 calls (400 a boil, three boils a plan) are
+/// about a third of a plan: the last few are kept. The same inputs (compared bit for bit) give the same numbers a fresh call
+/// gives. One store per thread, so tests on parallel threads never share one.
+fn boil_heat_capacities(feed_c: f64, boil_c: f64, pressure_pa: f64) -> Vec<f64> {
+    let key = (feed_c.to_bits(), boil_c.to_bits(), pressure_pa.to_bits());
+    if let Some(found) = KEPT.with_borrow(|k| k.iter().find(|(k, _)| *k == key).map(|(_, cp)| cp.clone())) {
+        return found;
+    }
+    let d_t = (boil_c - feed_c) / STEPS as f64;
+    let cp: Vec<f64> = (0..STEPS)
+        .map(|i| {
+            let t_k = feed_c + (i as f64 + 0.5) * d_t + 273.15;
+            water::liquid_heat_capacity_j_per_kg_k(t_k.min(boil_c + 273.15 - 0.01), pressure_pa)
+                .unwrap_or(4200.0)
+        })
+        .collect();
+    KEPT.with_borrow_mut(|k| {
+        k.insert(0, (key, cp.clone()));
+        k.truncate(KEPT_BOILS);
+    });
+    cp
+}
+
 /// Time to bring the boiler's fill from the feed temperature to the boil, by integrating
 /// dt = m c_p(T) dT / P (midpoint rule, IF97 liquid c_p) rather than by the enthalpy difference.
 fn stepped_boil_s(m_kg: f64, feed_c: f64, boil_c: f64, power_w: f64, pressure_pa: f64) -> f64 {
     let d_t = (boil_c - feed_c) / STEPS as f64;
-    (0..STEPS)
-        .map(|i| {
-            let t_k = feed_c + (i as f64 + 0.5) * d_t + 273.15;
-            let cp = water::liquid_heat_capacity_j_per_kg_k(t_k.min(boil_c + 273.15 - 0.01), pressure_pa)
-                .unwrap_or(4200.0);
-            m_kg * cp * d_t / power_w
-        })
-        .sum()
+    boil_heat_capacities(feed_c, boil_c, pressure_pa).iter().map(|cp| m_kg * cp * d_t / power_w).sum()
 }
 
 /// Steam condensing on the charge and then on the metal until both reach the co-distillation

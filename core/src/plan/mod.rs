@@ -664,3 +664,38 @@ mod doubt_tests {
         }
     }
 }
+
+#[cfg(test)]
+mod kept_tests {
+    use super::*;
+    use crate::crops::CROPS;
+
+    /// The plan keeps its last few stepped boils' heat capacities (`balance.rs`). A
+    /// plan made on a thread that has planned other scenarios just before (so kept results are
+    /// found, and others passed over) must equal the same plan made on a fresh thread, which
+    /// has nothing kept.
+    #[test]
+    fn a_plan_after_other_plans_equals_a_plan_from_nothing() {
+        let mut cases = Vec::new();
+        for crop in CROPS {
+            for (mass_kg, altitude_m, feed_c, target) in
+                [(15.0, 300.0, 15.0, 90.0), (15.5, 300.0, 15.0, 90.0), (40.0, 1450.0, 10.0, 80.0)]
+            {
+                let mut s = Scenario::default();
+                s.charge.crop = Some(crop.id.to_string());
+                s.charge.plant_mass_kg = mass_kg;
+                s.site.altitude_m = altitude_m;
+                s.boiler.feed_temperature_c = Some(feed_c);
+                s.run.target_recovery_percent = target;
+                cases.push(s);
+            }
+        }
+        // Twice through, so every case also meets results kept from a different scenario.
+        let warm: Vec<_> = cases.iter().chain(&cases).map(plan).collect();
+        for (i, s) in cases.iter().chain(&cases).enumerate() {
+            let s = s.clone();
+            let cold = std::thread::spawn(move || plan(&s)).join().unwrap();
+            assert_eq!(warm[i], cold, "case {i}");
+        }
+    }
+}
