@@ -15,6 +15,14 @@ pub const OUT_NAME: &str = "stillroom_app";
 /// only what a first plan needs: (cargo bin, output name).
 pub const LAZY_BINS: [(&str, &str); 2] =
     [("stillroom-first-still", "stillroom_first_still"), ("stillroom-workbench", "stillroom_workbench")];
+/// The bench's measuring anchor (`tests/anchor`): a minimal Leptos page as large as the plan
+/// page, without physics, built like the page into [`crate::anchor_dist_dir`].
+pub const ANCHOR_PACKAGE: &str = "stillroom-anchor";
+pub const ANCHOR_OUT_NAME: &str = "stillroom_anchor";
+/// The anchor's first load, file for file the counterpart of [`crate::sizes::FIRST_LOAD_FILES`]
+/// (the same stylesheet).
+pub const ANCHOR_FIRST_LOAD_FILES: [&str; 4] =
+    ["index.html", "stillroom_anchor.js", "stillroom_anchor_bg.wasm", "style.css"];
 /// Replaced by the build id in `dist/sw.js` and `dist/index.html`.
 pub const BUILD_ID_TOKEN: &str = "__STILLROOM_BUILD_ID__";
 /// Replaced in `dist/sw.js` by the list of files to precache.
@@ -193,6 +201,45 @@ pub fn build(root: &Path, tools: &BuildTools) -> Result<Built> {
     write_compressed_copies(&dist)?;
 
     let sizes = io_ctx(FirstLoad::measure(&dist), "measuring dist/")?;
+    Ok(Built { dist, build_id: id, sizes })
+}
+
+/// Build the bench's measuring anchor into [`crate::anchor_dist_dir`] through the page's own
+/// pipeline (the workspace release profile, wasm-bindgen, wasm-opt -Oz, the compressed copies),
+/// with the page's stylesheet, and measure its first load.
+pub fn build_anchor(root: &Path, tools: &BuildTools) -> Result<Built> {
+    run(proc::cargo_command().current_dir(root).args([
+        "build",
+        "-p",
+        ANCHOR_PACKAGE,
+        "--bins",
+        "--release",
+        "--target",
+        WASM_TARGET,
+    ]))?;
+    let dist = crate::anchor_dist_dir(root);
+    if dist.exists() {
+        io_ctx(std::fs::remove_dir_all(&dist), dist.display())?;
+    }
+    io_ctx(std::fs::create_dir_all(&dist), dist.display())?;
+    bind_and_optimise(root, tools, &dist, ANCHOR_PACKAGE, ANCHOR_OUT_NAME)?;
+    let anchor = root.join("tests").join("anchor");
+    for (from, name) in
+        [(root.join("public"), "style.css"), (anchor.clone(), "index.html"), (anchor, "start.js")]
+    {
+        io_ctx(
+            std::fs::copy(from.join(name), dist.join(name)),
+            format!("copying {}", from.join(name).display()),
+        )?;
+    }
+    let files = list_files(&dist)?;
+    let mut contents = Vec::new();
+    for f in &files {
+        contents.push((f.clone(), io_ctx(std::fs::read(dist.join(f)), f)?));
+    }
+    let id = build_id(contents.iter().map(|(n, b)| (n.as_str(), b.as_slice())));
+    write_compressed_copies(&dist)?;
+    let sizes = io_ctx(FirstLoad::measure_files(&dist, &ANCHOR_FIRST_LOAD_FILES), "measuring the anchor")?;
     Ok(Built { dist, build_id: id, sizes })
 }
 

@@ -73,6 +73,12 @@ pub fn dist_dir(root: &Path) -> PathBuf {
     root.join("dist")
 }
 
+/// Where the bench's measuring anchor (`tests/anchor`) is built: under the target directory,
+/// never in `dist/`, as it is no part of the page.
+pub fn anchor_dist_dir(root: &Path) -> PathBuf {
+    target_dir(root).join("anchor-dist")
+}
+
 /// Cargo's target directory: `CARGO_TARGET_DIR` if set, else `<root>/target`.
 pub fn target_dir(root: &Path) -> PathBuf {
     match std::env::var_os("CARGO_TARGET_DIR") {

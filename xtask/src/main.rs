@@ -18,8 +18,10 @@ commands:
   build              release build of the page into dist/, with its sizes
   serve [--port N]   build, then serve dist/ on http://127.0.0.1:N/ (default 8080)
   test               formatting, lints, build, and every test (native and in headless Chromium)
-  bench              cargo bench -p stillroom-core, then the page measured in headless
-                     Chromium into BENCHMARKS.md"
+  bench [--skip-core-benches]
+                     cargo bench -p stillroom-core (skipped with the flag), then the page and
+                     its measuring anchor (tests/anchor) measured in headless Chromium into
+                     BENCHMARKS.md"
 }
 
 fn main() -> ExitCode {
@@ -30,7 +32,7 @@ fn main() -> ExitCode {
         Some("build") => setup::ensure_build_tools(&root).and_then(|t| do_build(&root, &t)).map(|_| ()),
         Some("serve") => parse_port(&args[1..]).and_then(|port| serve(&root, port)),
         Some("test") => test(&root),
-        Some("bench") => bench(&root),
+        Some("bench") => parse_bench(&args[1..]).and_then(|core| bench(&root, core)),
         Some("help" | "--help" | "-h") => {
             println!("{}", usage());
             Ok(())
@@ -58,6 +60,15 @@ fn parse_port(args: &[String]) -> Result<u16> {
             n.parse().map_err(|_| Failure(format!("--port wants a number from 0 to 65535, not `{n}`")))
         }
         _ => Err(Failure(format!("serve takes only --port N\n\n{}", usage()))),
+    }
+}
+
+/// Whether `bench` runs the core's criterion benches first (all but `--skip-core-benches`).
+fn parse_bench(args: &[String]) -> Result<bool> {
+    match args {
+        [] => Ok(true),
+        [flag] if flag == "--skip-core-benches" => Ok(false),
+        _ => Err(Failure(format!("bench takes only --skip-core-benches\n\n{}", usage()))),
     }
 }
 
@@ -179,11 +190,14 @@ fn test(root: &Path) -> Result<()> {
     st.stage("lints, host (clippy)", |_| clippy(root, &["--workspace", "--all-targets", "--all-features"]))?;
     st.stage("lints, wasm32 (clippy)", |_| {
         clippy(root, &["-p", "stillroom-app", "--all-targets", "--target", WASM_TARGET])?;
-        clippy(root, &["-p", "stillroom-core", "--target", WASM_TARGET])
+        clippy(root, &["-p", "stillroom-core", "--target", WASM_TARGET])?;
+        clippy(root, &["-p", build::ANCHOR_PACKAGE, "--target", WASM_TARGET])
     })?;
     st.stage("release build of the page (dist/)", |_| do_build(root, &tools).map(|_| ()))?;
     st.stage("native tests (unit, doc, reference, end-to-end)", |c| {
-        cargo_tests(root, &["test", "--no-fail-fast", "--workspace", "--exclude", "stillroom-app"], c)
+        // The bench's anchor is a wasm page with no tests of its own; the bench builds it.
+        let exclude = ["--exclude", "stillroom-app", "--exclude", build::ANCHOR_PACKAGE];
+        cargo_tests(root, &[&["test", "--no-fail-fast", "--workspace"][..], &exclude].concat(), c)
     })?;
     if has_feature(&root.join("core").join("Cargo.toml"), "cli") {
         st.stage("stillroom-core with all features", |c| {
@@ -209,12 +223,22 @@ fn clippy(root: &Path, selection: &[&str]) -> Result<()> {
     run(proc::cargo_command().current_dir(root).arg("clippy").args(selection).args(["--", "-D", "warnings"]))
 }
 
-/// The core's own benchmarks, then the page's figures into BENCHMARKS.md (the page built first;
-/// the bench profile, so the native plan is timed as optimised as the command line is).
-fn bench(root: &Path) -> Result<()> {
-    run(proc::cargo_command().current_dir(root).args(["bench", "-p", "stillroom-core"]))?;
+/// The core's own benchmarks (unless `core` is false), then the page's figures and its anchor's
+/// into BENCHMARKS.md (the page and the anchor built first; the bench profile, so the native plan
+/// is timed as optimised as the command line is).
+fn bench(root: &Path, core: bool) -> Result<()> {
+    if core {
+        run(proc::cargo_command().current_dir(root).args(["bench", "-p", "stillroom-core"]))?;
+    }
     let tools = setup::setup_all(root)?;
     do_build(root, &tools)?;
+    let anchor = build::build_anchor(root, &tools)?;
+    println!(
+        "\nbuilt the measuring anchor into {}: first load {:.1} kB gzip, {:.1} kB Brotli",
+        anchor.dist.display(),
+        anchor.sizes.total_gzip() as f64 / 1000.0,
+        anchor.sizes.total_brotli() as f64 / 1000.0
+    );
     run(proc::cargo_command().current_dir(root).args([
         "run",
         "--profile",
@@ -238,6 +262,13 @@ mod tests {
         assert!(parse_port(&["--port".into(), "http".into()]).is_err());
         assert!(parse_port(&["--port".into(), "70000".into()]).is_err());
         assert!(parse_port(&["--verbose".into()]).is_err());
+    }
+
+    #[test]
+    fn bench_flags() {
+        assert!(parse_bench(&[]).unwrap());
+        assert!(!parse_bench(&["--skip-core-benches".into()]).unwrap());
+        assert!(parse_bench(&["--skip".into()]).is_err());
     }
 
     #[test]

@@ -52,8 +52,14 @@ pub struct FirstLoad {
 impl FirstLoad {
     /// Measure the first-load files in `dist`; fails if any is missing.
     pub fn measure(dist: &Path) -> std::io::Result<FirstLoad> {
+        FirstLoad::measure_files(dist, &FIRST_LOAD_FILES)
+    }
+
+    /// Measure the files `names` in `dist` (another page's first load, such as the bench's
+    /// anchor); fails if any is missing.
+    pub fn measure_files(dist: &Path, names: &[&str]) -> std::io::Result<FirstLoad> {
         let mut assets = Vec::new();
-        for name in FIRST_LOAD_FILES {
+        for &name in names {
             let bytes = std::fs::read(dist.join(name))
                 .map_err(|e| std::io::Error::new(e.kind(), format!("{}: {e}", dist.join(name).display())))?;
             assets.push(Asset::of(name, &bytes));

@@ -7,6 +7,11 @@
 //! round trip, 1.6 Mbit/s down, 750 kbit/s up, 4x CPU, cold profile; median of 5); bytes over the
 //! wire on a first visit, the service worker included, and on an offline revisit; wasm memory and
 //! JS heap after load and after 1,000 edits.
+//!
+//! The same measures (but `plan()` and the visit's bytes) are taken with the same code on the
+//! measuring anchor (`tests/anchor`, built by `cargo xtask bench` into `<target>/anchor-dist/`):
+//! a minimal Leptos page with as many inputs and formatted outputs and no physics, so each table
+//! has the framework's floor as a row and the page's figure as a ratio over it.
 
 use serde_json::json;
 use std::fmt::Write as _;
@@ -51,7 +56,13 @@ fn native_plan_us() -> Vec<f64> {
 }
 
 async fn fresh_page() -> Result<Page, BoxError> {
-    let page = browser::open().await?;
+    fresh_page_at(&browser::dist()?).await
+}
+
+/// A browser on the page served from `dir` (`dist/` or the anchor's folder), storage cleared and
+/// the watched output on screen.
+async fn fresh_page_at(dir: &std::path::Path) -> Result<Page, BoxError> {
+    let page = browser::open_at(dir).await?;
     page.goto("").await?;
     page.client.execute("localStorage.clear();", vec![]).await?;
     page.client.refresh().await?;
@@ -121,8 +132,8 @@ async fn emulate_weak_link(page: &Page) -> Result<(), BoxError> {
 }
 
 /// Time to the first plan on a cold profile over the weak link, ms.
-async fn first_plan_ms() -> Result<f64, BoxError> {
-    let page = browser::open().await?;
+async fn first_plan_ms(dir: &std::path::Path) -> Result<f64, BoxError> {
+    let page = browser::open_at(dir).await?;
     page.before_load(WATCH_FIRST_PLAN).await?;
     emulate_weak_link(&page).await?;
     page.goto("").await?;
@@ -180,6 +191,56 @@ async fn visit_bytes() -> Result<(u64, u64, usize), BoxError> {
     Ok((first, revisit, responses))
 }
 
+/// How many number inputs, pickers and formatted outputs the served page shows: what makes the
+/// anchor "of the same size".
+const COUNT_PARTS: &str = r#"return [
+  document.querySelectorAll('input[id^="f-"][inputmode=decimal]').length,
+  document.querySelectorAll('select[id^="f-"], input[id^="f-"][type=checkbox]').length,
+  document.querySelectorAll('[data-out]').length,
+];"#;
+
+async fn parts(page: &Page) -> Result<[u64; 3], BoxError> {
+    let v = page.client.execute(COUNT_PARTS, vec![]).await?;
+    Ok([0, 1, 2].map(|i| v[i].as_u64().unwrap_or(0)))
+}
+
+/// The anchor's figures, taken with the page's own measuring functions.
+struct Anchor {
+    parts: [u64; 3],
+    quick: Vec<f64>,
+    slow: Vec<f64>,
+    memory: [(f64, f64); 2],
+    first: FirstLoad,
+    cold: Vec<f64>,
+}
+
+async fn measure_anchor(dir: &std::path::Path) -> Result<Anchor, BoxError> {
+    let first = FirstLoad::measure_files(dir, &xtask::build::ANCHOR_FIRST_LOAD_FILES)
+        .map_err(|e| format!("{e}: the measuring anchor is not built (`cargo xtask bench` builds it)"))?;
+    eprintln!("bench: the anchor's keystrokes");
+    let page = fresh_page_at(dir).await?;
+    let parts = parts(&page).await?;
+    let after_load = memory(&page).await?;
+    let quick = keystrokes(&page, 200).await?;
+    page.cdp("Emulation.setCPUThrottlingRate", json!({"rate": SLOW_CPU})).await?;
+    let slow = keystrokes(&page, 200).await?;
+    page.cdp("Emulation.setCPUThrottlingRate", json!({"rate": 1})).await?;
+    keystrokes(&page, 600).await?;
+    let _ = page.cdp("HeapProfiler.collectGarbage", json!({})).await;
+    let after_edits = memory(&page).await?;
+    page.close().await?;
+    eprintln!("bench: the anchor's first output on a weak link (5 cold visits)");
+    let mut cold = Vec::new();
+    for _ in 0..5 {
+        cold.push(first_plan_ms(dir).await?);
+    }
+    Ok(Anchor { parts, quick, slow, memory: [after_load, after_edits], first, cold })
+}
+
+fn over_60hz(v: &[f64]) -> usize {
+    v.iter().filter(|t| **t > 16.7).count()
+}
+
 fn kb(b: f64) -> String {
     format!("{:.1} kB", b / 1000.0)
 }
@@ -226,7 +287,9 @@ async fn main() -> Result<(), BoxError> {
 
     eprintln!("bench: plan() natively");
     let native = native_plan_us();
+    let anchor = measure_anchor(&xtask::anchor_dist_dir(&root)).await?;
     let page = fresh_page().await?;
+    let page_parts = parts(&page).await?;
     eprintln!("bench: plan() in wasm");
     let wasm = wasm_plan_us(&page).await?;
     let (n50, n95) = stats(&native);
@@ -249,7 +312,12 @@ async fn main() -> Result<(), BoxError> {
     writeln!(md, "## One edit of the plant mass: input event to the updated answer, ms (200 edits)\n")?;
     writeln!(md, "| CPU | p50 | p95 | edits over one 60 Hz frame |\n|---|---|---|---|")?;
     writeln!(md, "| unthrottled | {q50:.1} | {q95:.1} | {} |", quick.iter().filter(|t| **t > 16.7).count())?;
-    writeln!(md, "| 4x slowdown | {s50:.1} | {s95:.1} | {missed} |\n")?;
+    writeln!(md, "| 4x slowdown | {s50:.1} | {s95:.1} | {missed} |")?;
+    let ((aq50, aq95), (as50, as95)) = (stats(&anchor.quick), stats(&anchor.slow));
+    writeln!(md, "| anchor, unthrottled | {aq50:.1} | {aq95:.1} | {} |", over_60hz(&anchor.quick))?;
+    writeln!(md, "| anchor, 4x slowdown | {as50:.1} | {as95:.1} | {} |", over_60hz(&anchor.slow))?;
+    writeln!(md, "| ratio page / anchor, unthrottled | {:.2} | {:.2} | |", q50 / aq50, q95 / aq95)?;
+    writeln!(md, "| ratio page / anchor, 4x slowdown | {:.2} | {:.2} | |\n", s50 / as50, s95 / as95)?;
 
     eprintln!("bench: memory after 1,000 edits");
     keystrokes(&page, 600).await?;
@@ -259,7 +327,10 @@ async fn main() -> Result<(), BoxError> {
     writeln!(md, "## Memory\n")?;
     writeln!(md, "| when | wasm memory | JS heap used |\n|---|---|---|")?;
     writeln!(md, "| after load | {} | {} |", kb(mem0), kb(heap0))?;
-    writeln!(md, "| after 1,000 edits | {} | {} |\n", kb(mem1), kb(heap1))?;
+    writeln!(md, "| after 1,000 edits | {} | {} |", kb(mem1), kb(heap1))?;
+    let [(am0, ah0), (am1, ah1)] = anchor.memory;
+    writeln!(md, "| anchor, after load | {} | {} |", kb(am0), kb(ah0))?;
+    writeln!(md, "| anchor, after 1,000 edits | {} | {} |\n", kb(am1), kb(ah1))?;
 
     writeln!(md, "## First load, bytes per file\n")?;
     let first = FirstLoad::measure(&xtask::dist_dir(&root))?;
@@ -269,16 +340,33 @@ async fn main() -> Result<(), BoxError> {
     }
     writeln!(
         md,
-        "| **first load** | {} | {} | {} |\n",
+        "| **first load** | {} | {} | {} |",
         first.total_raw(),
         first.total_gzip(),
         first.total_brotli()
+    )?;
+    let af = &anchor.first;
+    writeln!(
+        md,
+        "| anchor: {} | {} | {} | {} |",
+        af.assets.iter().map(|a| a.name.as_str()).collect::<Vec<_>>().join(", "),
+        af.total_raw(),
+        af.total_gzip(),
+        af.total_brotli()
+    )?;
+    let ratio = |p: u64, a: u64| p as f64 / a as f64;
+    writeln!(
+        md,
+        "| ratio page / anchor | {:.2} | {:.2} | {:.2} |\n",
+        ratio(first.total_raw(), af.total_raw()),
+        ratio(first.total_gzip(), af.total_gzip()),
+        ratio(first.total_brotli(), af.total_brotli())
     )?;
 
     eprintln!("bench: first plan on a weak link (5 cold visits)");
     let mut cold = Vec::new();
     for _ in 0..5 {
-        cold.push(first_plan_ms().await?);
+        cold.push(first_plan_ms(&browser::dist()?).await?);
     }
     let (c50, _) = stats(&cold);
     let (visit, offline, responses) = visit_bytes().await?;
@@ -301,8 +389,26 @@ async fn main() -> Result<(), BoxError> {
         "| bytes over the wire, first visit until the offline copy is complete | {} in {responses} responses |",
         kb(visit as f64)
     )?;
-    writeln!(md, "| bytes over the wire, offline revisit | {offline} B |\n")?;
-    writeln!(md, "Not measured yet: the minimal Leptos page of the same size as an anchor row.")?;
+    let (a50, _) = stats(&anchor.cold);
+    let all = |v: &[f64]| v.iter().map(|c| format!("{c:.0}")).collect::<Vec<_>>().join(", ");
+    writeln!(md, "| bytes over the wire, offline revisit | {offline} B |")?;
+    writeln!(
+        md,
+        "| anchor: first output on screen, median of 5 | {a50:.0} ms (all: {}) |",
+        all(&anchor.cold)
+    )?;
+    writeln!(md, "| ratio page / anchor, first plan on screen | {:.2} |\n", c50 / a50)?;
+    writeln!(md, "## The anchor\n")?;
+    let [pn, pp, po] = page_parts;
+    let [an, ap, ao] = anchor.parts;
+    writeln!(
+        md,
+        "The anchor rows are a measuring page, not a product page (`tests/anchor`): Leptos 0.8 client-side \
+         with the page's release profile, wasm-bindgen, wasm-opt -Oz and stylesheet, as many inputs and \
+         formatted outputs and no physics (each output a sum of products of the inputs, `{{:.3}}`), so it is \
+         the framework's floor and a ratio over it is the cost of everything else. Counted on screen in this \
+         run: the page {pn} number inputs, {pp} pickers, {po} outputs; the anchor {an}, {ap}, {ao}."
+    )?;
 
     let out = root.join("BENCHMARKS.md");
     std::fs::write(&out, &md)?;
