@@ -86,12 +86,15 @@ pub fn limit_message(
     }
 }
 
+/// The message with its first letter capitalised. ASCII only: a message that opens with a
+/// compound's name keeps its Greek prefix as chemists write it ("β-pinene", never "Β-pinene"),
+/// and the page carries no Unicode case tables for this one use.
 fn first_upper(s: &str) -> String {
-    let mut c = s.chars();
-    match c.next() {
-        Some(f) => f.to_uppercase().collect::<String>() + c.as_str(),
-        None => String::new(),
+    let mut text = s.to_string();
+    if let Some(first) = text.get_mut(..1) {
+        first.make_ascii_uppercase();
     }
+    text
 }
 
 /// What an optional field falls back to, shown as its placeholder (in the field's unit).
@@ -795,5 +798,19 @@ pub fn CurrencyInput() -> impl IntoView {
             <p class="error" id="e-currency" aria-live="polite">{move || message.get()}</p>
             <p class="hint">"Shown with every price and cost."</p>
         </div>
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::first_upper;
+    use wasm_bindgen_test::wasm_bindgen_test;
+
+    #[wasm_bindgen_test]
+    fn a_message_opens_with_a_capital_and_a_compound_keeps_its_greek_prefix() {
+        assert_eq!(first_upper("must be at least 0.1 kg"), "Must be at least 0.1 kg");
+        assert_eq!(first_upper("β-pinene needs a law"), "β-pinene needs a law");
+        assert_eq!(first_upper("(E)-anethole"), "(E)-anethole");
+        assert_eq!(first_upper(""), "");
     }
 }

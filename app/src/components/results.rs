@@ -29,7 +29,7 @@ fn charge_summary(s: &Scenario) -> String {
         .crop
         .as_deref()
         .and_then(|id| CROPS.iter().find(|c| c.id == id))
-        .map(|c| c.name.to_lowercase())
+        .map(|c| c.name.to_ascii_lowercase())
         .unwrap_or_else(|| "plant".to_string());
     // "15 kg", not "15.0 kg": the charge as the grower typed it, to three figures.
     let mass = units::mass(s.charge.plant_mass_kg);
