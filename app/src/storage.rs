@@ -125,7 +125,7 @@ pub fn kept_copies(held: &[Kind]) -> Vec<KeptCopy> {
                 "library" => Some(Kind::Library),
                 _ => None,
             };
-            let stamp = stamp.split('-').next().and_then(|s| s.parse::<f64>().ok());
+            let stamp = stamp.split('-').next().and_then(|s| s.parse::<u64>().ok()).map(|ms| ms as f64);
             let reason = match kind {
                 Some(k) => k.problem(&raw).unwrap_or_else(|| "it reads now: open it".into()),
                 None => "not a record this page knows".into(),
