@@ -919,8 +919,25 @@ pub fn text_for_in(field: &NumField, scenario: &Scenario, system: UnitSystem) ->
     }
 }
 
-/// The text for an SI value in a system's unit, to nine significant figures: what a unit switch
-/// writes into a field (the exact SI value stays pinned behind it, see `AppState::set_units`).
+/// The text a unit switch writes into a field for its exact SI value: the typed text itself
+/// when the field reads the same number in both units (a percentage, a density), otherwise the
+/// value in the new unit to four significant figures, for reading ("33.07" lb for 15 kg; the
+/// exact SI value stays pinned behind it while the text is unchanged, see
+/// `AppState::set_units`, so the plan does not move).
+pub fn switch_text(field: &NumField, si: f64, from: FieldUnits, to: FieldUnits, typed: &str) -> String {
+    let w = field.from_si_in(to, si);
+    if w.to_bits() == field.from_si_in(from, si).to_bits() {
+        return typed.to_string();
+    }
+    if w == 0.0 || !w.is_finite() {
+        return crate::units::plain(w);
+    }
+    let scale = 10f64.powi(3 - w.abs().log10().floor() as i32);
+    crate::units::plain((w * scale).round() / scale)
+}
+
+/// The text for an SI value in a system's unit, to nine significant figures: what a field shows
+/// for a value opened from a plan (exact to what was saved; the value is pinned behind it).
 pub fn text_in(field: &NumField, si: f64, units: FieldUnits) -> String {
     let w = field.from_si_in(units, si);
     let digits = if w == 0.0 { 0 } else { 8 - w.abs().log10().floor() as i32 };
@@ -1033,6 +1050,22 @@ mod tests {
     }
 
     const FUELS: [Fuel; 4] = [Fuel::Propane, Fuel::NaturalGas, Fuel::Firewood, Fuel::Electricity];
+
+    #[wasm_bindgen_test]
+    fn a_switch_writes_four_figures_in_a_new_unit_and_keeps_a_text_whose_unit_stays() {
+        let metric = FieldUnits::new(UnitSystem::Metric, Fuel::Propane);
+        let us = FieldUnits::new(UnitSystem::UsCustomary, Fuel::Propane);
+        // 1 lb = 0.453 592 37 kg, 1 ft = 0.3048 m, t/°F = 1.8 t/°C + 32 (NIST SP 811 B.8).
+        assert_eq!(switch_text(field("plant_mass"), 15.0, metric, us, "15"), "33.07");
+        assert_eq!(switch_text(field("altitude"), 300.0, metric, us, "300"), "984.3");
+        assert_eq!(switch_text(field("cooling_in"), 15.0, metric, us, "15"), "59");
+        assert_eq!(switch_text(field("heat_input"), 5000.0, metric, us, "5"), "17060");
+        // Back to metric: the four figures of the SI value.
+        assert_eq!(switch_text(field("plant_mass"), 15.0, us, metric, "33.07"), "15");
+        // A percentage reads the same in both: the text stays as typed.
+        assert_eq!(switch_text(field("oil_content"), 0.9, metric, us, "0.90"), "0.90");
+        assert_eq!(switch_text(field("plant_mass"), 0.0, metric, us, "0"), "0");
+    }
 
     #[wasm_bindgen_test]
     fn us_units_round_trip_and_keep_the_metric_text() {

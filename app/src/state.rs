@@ -6,8 +6,8 @@
 //! what is saved; the plan is always recomputed.
 
 use crate::fields::{
-    FIELDS, FieldUnits, NumField, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, text_for_in,
-    text_in,
+    FIELDS, FieldUnits, NumField, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, switch_text,
+    text_for_in,
 };
 use crate::records::{self, Kind};
 use crate::storage;
@@ -536,7 +536,7 @@ impl AppState {
                 .pinned
                 .with_value(|p| Pin::value(&p[i], f, from, &before))
                 .or_else(|| parse_number(&before).ok().flatten().map(|v| f.to_si_in(from, v)));
-            let converted = exact.map(|si| text_in(f, si, to_units)).unwrap_or(before);
+            let converted = exact.map(|si| switch_text(f, si, from, to_units, &before)).unwrap_or(before);
             self.pinned.update_value(|p| p[i] = exact.map(|v| Pin::new(f, to_units, converted.clone(), v)));
             text.set(converted);
         }
