@@ -911,29 +911,41 @@ pub fn text_for(field: &NumField, scenario: &Scenario) -> String {
     text_for_in(field, scenario, UnitSystem::Metric)
 }
 
-/// The text a field shows for a scenario value in a system of units.
+/// The text a field shows for a scenario value in a system of units: the SI value as saved
+/// (nine figures) where the field's unit is the core's, and four figures where it is converted
+/// (US customary), as a unit switch writes it.
 pub fn text_for_in(field: &NumField, scenario: &Scenario, system: UnitSystem) -> String {
+    let units = FieldUnits::of(system, scenario);
+    let metric = FieldUnits::of(UnitSystem::Metric, scenario);
     match (field.get)(scenario) {
         None => String::new(),
-        Some(si) => text_in(field, si, FieldUnits::of(system, scenario)),
+        Some(si) if converted(field, si, metric, units) => rounded_text(field, si, units),
+        Some(si) => text_in(field, si, units),
     }
 }
 
 /// The text a unit switch writes into a field for its exact SI value: the typed text itself
-/// when the field reads the same number in both units (a percentage, a density), otherwise the
-/// value in the new unit to four significant figures, for reading ("33.07" lb for 15 kg; the
-/// exact SI value stays pinned behind it while the text is unchanged, see
-/// `AppState::set_units`, so the plan does not move).
+/// when the field reads the same number in both units (a percentage, a density), otherwise
+/// [`rounded_text`] in the new unit ("33.07" lb for 15 kg). The exact SI value stays pinned
+/// behind it while the text is unchanged (see `AppState::set_units`), so the plan does not move.
 pub fn switch_text(field: &NumField, si: f64, from: FieldUnits, to: FieldUnits, typed: &str) -> String {
-    let w = field.from_si_in(to, si);
-    if w.to_bits() == field.from_si_in(from, si).to_bits() {
-        return typed.to_string();
-    }
+    if converted(field, si, from, to) { rounded_text(field, si, to) } else { typed.to_string() }
+}
+
+/// An SI value in the field's unit to four significant figures, for reading: what a field shows
+/// for a value converted from the unit it was given in.
+pub fn rounded_text(field: &NumField, si: f64, units: FieldUnits) -> String {
+    let w = field.from_si_in(units, si);
     if w == 0.0 || !w.is_finite() {
         return crate::units::plain(w);
     }
     let scale = 10f64.powi(3 - w.abs().log10().floor() as i32);
     crate::units::plain((w * scale).round() / scale)
+}
+
+/// Whether the field shows `si` as another number in `to` than in `from`.
+fn converted(field: &NumField, si: f64, from: FieldUnits, to: FieldUnits) -> bool {
+    field.from_si_in(to, si).to_bits() != field.from_si_in(from, si).to_bits()
 }
 
 /// The text for an SI value in a system's unit, to nine significant figures: what a field shows
@@ -1080,7 +1092,7 @@ mod tests {
                     let us = f.from_si_in(us_units, si);
                     let back = f.to_si_in(us_units, us);
                     assert!((back - si).abs() <= 1e-9 * si.abs().max(1.0), "{} {fuel:?}", f.key);
-                    // What a switch writes, from the exact SI value, and back.
+                    // The nine-figure text (a saved value shown in a unit), from the exact SI value, and back.
                     let metric = text_for(f, &s);
                     let there = text_in(f, si, us_units);
                     assert_eq!(text_in(f, si, metric_units), metric, "{}", f.key);

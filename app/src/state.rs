@@ -6,8 +6,8 @@
 //! what is saved; the plan is always recomputed.
 
 use crate::fields::{
-    FIELDS, FieldUnits, NumField, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, switch_text,
-    text_for_in,
+    FIELDS, FieldUnits, NumField, OWN_COMPOUND_ID, OWN_COMPOUND_KEYS, TextError, parse_number, rounded_text,
+    switch_text, text_for_in,
 };
 use crate::records::{self, Kind};
 use crate::storage;
@@ -428,10 +428,24 @@ impl AppState {
         // What was typed last time, valid or not, goes back over the saved scenario.
         for (key, text) in load_draft(units.get_untracked()) {
             if let Some(i) = FIELDS.iter().position(|f| f.key == key) {
+                state.keep_pin_if_rounded(i, &text);
                 state.texts[i].set(text);
             }
         }
         state
+    }
+
+    /// A draft text that is the saved value rounded as a unit switch writes it ("33.07" lb for
+    /// 15 kg) still stands for that exact value: the pin moves to the text, so a reload after a
+    /// switch leaves the scenario exactly as it was.
+    fn keep_pin_if_rounded(&self, i: usize, text: &str) {
+        let f = &FIELDS[i];
+        let units = self.base.with_untracked(|s| FieldUnits::of(self.units.get_untracked(), s));
+        self.pinned.update_value(|p| {
+            if let Some(pin) = p[i].as_ref().filter(|pin| rounded_text(f, pin.si, units) == text) {
+                p[i] = Some(Pin::new(f, units, text.to_string(), pin.si));
+            }
+        });
     }
 
     /// Shows a scenario in the form: every field, choice and list, and the fields the form does
