@@ -225,32 +225,72 @@ pub fn CropPicker() -> impl IntoView {
     }
 }
 
-/// Where the crop preset's numbers come from, row by row.
+/// The state of the page's copy of the tables' source texts (`crate::sources`).
+enum Fetched {
+    NotYet,
+    Loading,
+    Failed(String),
+    Ready(serde_json::Value),
+}
+
+/// Where the crop preset's numbers come from, row by row: the texts are fetched from the build's
+/// `sources.json` the first time the list is opened (and again on "Try again" after a failure).
 #[component]
 fn CropSources() -> impl IntoView {
     let state = expect_context::<AppState>();
     let crop = state.crop;
     let preset = move || crop.get().and_then(|id| CROPS.iter().find(|c| c.id == id));
+    let fetched = RwSignal::new(Fetched::NotYet);
+    let load = move || {
+        fetched.set(Fetched::Loading);
+        leptos::task::spawn_local(async move {
+            fetched.set(match crate::sources::fetch().await {
+                Ok(file) => Fetched::Ready(file),
+                Err(why) => Fetched::Failed(why),
+            });
+        });
+    };
+    let on_toggle = move |ev: leptos::ev::Event| {
+        let open = event_target::<web_sys::HtmlDetailsElement>(&ev).open();
+        if open && fetched.with_untracked(|f| matches!(f, Fetched::NotYet | Fetched::Failed(_))) {
+            load();
+        }
+    };
+    let shown = move || {
+        let c = preset()?;
+        Some(fetched.with(|f| match f {
+            Fetched::NotYet | Fetched::Loading => {
+                view! { <p class="sources-status">"Loading the sources…"</p> }.into_any()
+            }
+            Fetched::Failed(why) => failed(why.clone(), load),
+            Fetched::Ready(file) => match crate::sources::rows(file, c) {
+                Ok(rows) => view! {
+                    <dl class="source-list">
+                        {rows.into_iter().map(|(label, text)| view! { <dt>{label}</dt><dd>{text}</dd> }).collect_view()}
+                    </dl>
+                }
+                .into_any(),
+                Err(why) => view! { <p class="sources-status" role="alert">{why}</p> }.into_any(),
+            },
+        }))
+    };
     view! {
         <Show when=move || preset().is_some()>
-            <details class="sources">
+            <details class="sources" on:toggle=on_toggle>
                 <summary>"Where the crop's numbers come from"</summary>
-                {move || preset().map(|c| view! {
-                    <dl class="source-list">
-                        <dt>"Oil content"</dt><dd>{c.oil_content_source}</dd>
-                        <dt>"Composition"</dt><dd>{c.composition_source}</dd>
-                        <dt>"Oil density"</dt><dd>{c.oil_density_source}</dd>
-                        <dt>"Recovery rate"</dt><dd>{c.rate_constant_source}</dd>
-                        <dt>"Run time"</dt><dd>{c.typical_run_source}</dd>
-                        <dt>"Steam rate"</dt><dd>{c.steam_rate_source}</dd>
-                        <dt>"Packing"</dt><dd>{c.charge_density_source}</dd>
-                        <dt>"Moisture and heat capacity"</dt><dd>{c.thermal_source}</dd>
-                        <dt>"Distillate temperature"</dt><dd>{c.distillate_temperature_source}</dd>
-                    </dl>
-                })}
+                {shown}
             </details>
         </Show>
     }
+}
+
+/// Why the sources did not come, and a way to ask again.
+fn failed(why: String, retry: impl Fn() + Copy + 'static) -> AnyView {
+    view! {
+        <p class="sources-status" role="alert">{why}</p>
+        <button type="button" class="sources-retry" on:click=move |_| retry()>"Try again"</button>
+    }
+    .into_any()
 }
 
 /// The compounds a picker offers: the library's, then the grower's own if named.
