@@ -18,8 +18,8 @@ pub const SOURCES_URL: &str = "./sources.json";
 /// The format this page reads (`xtask::sources::SOURCES_FORMAT`).
 pub const SOURCES_FORMAT: u64 = 1;
 
-/// Fetches and reads the file; the error is a sentence for the grower.
-pub async fn fetch() -> Result<Value, String> {
+/// Fetches the file and checks its format; the error is a sentence for the grower.
+pub async fn fetch() -> Result<String, String> {
     const UNREACHABLE: &str = "The sources could not be fetched: no connection. They open without one once the page has been saved for offline use.";
     let window = web_sys::window().ok_or(UNREACHABLE)?;
     let response = JsFuture::from(window.fetch_with_str(SOURCES_URL)).await.map_err(|_| UNREACHABLE)?;
@@ -35,28 +35,35 @@ pub async fn fetch() -> Result<Value, String> {
     let file: Value =
         serde_json::from_str(&text).map_err(|e| format!("The sources file could not be read ({e})."))?;
     match file.get("format").and_then(Value::as_u64) {
-        Some(SOURCES_FORMAT) => Ok(file),
+        Some(SOURCES_FORMAT) => Ok(text),
         _ => Err("The sources file is of another version than this page; reload the page.".to_string()),
     }
 }
 
 /// `[[label, text], ...]` as pairs, or `None` if the list is not of that shape.
-fn labelled(list: &Value) -> Option<Vec<(String, String)>> {
-    list.as_array()?
+fn labelled(list: Option<&Value>) -> Option<Vec<(String, String)>> {
+    list?
+        .as_array()?
         .iter()
         .map(|pair| Some((pair.get(0)?.as_str()?.to_string(), pair.get(1)?.as_str()?.to_string())))
         .collect()
 }
 
 /// What the crop's sources list shows, in order: the crop's own texts, then those of each
-/// compound of its typical oil ("Linalool: vapour pressure"). An error names what the file lacks.
-pub fn rows(file: &Value, crop: &Crop) -> Result<Vec<(String, String)>, String> {
-    let missing = |what: &str| format!("The sources file has no entry for {what}; reload the page.");
-    let mut rows = labelled(&file["crops"][crop.id]).ok_or_else(|| missing(crop.name))?;
+/// compound of its typical oil ("Linalool: vapour pressure"), from the file's text (checked by
+/// [`fetch`]). A part the file lacks (a file from another build) is one row saying so.
+pub fn rows(text: &str, crop: &Crop) -> Vec<(String, String)> {
+    let file: Value = serde_json::from_str(text).unwrap_or(Value::Null);
+    let missing =
+        |name: &str| (name.to_string(), "Not in this build's sources file; reload the page.".to_string());
+    let mut rows =
+        labelled(file.get("crops").and_then(|m| m.get(crop.id))).unwrap_or_else(|| vec![missing(crop.name)]);
     for &(id, _) in crop.composition {
         let name = compounds::find(id).map_or(id, |c| c.name);
-        let own = labelled(&file["compounds"][id]).ok_or_else(|| missing(name))?;
-        rows.extend(own.into_iter().map(|(label, text)| (format!("{name}: {label}"), text)));
+        match labelled(file.get("compounds").and_then(|m| m.get(id))) {
+            Some(own) => rows.extend(own.into_iter().map(|(label, text)| (format!("{name}: {label}"), text))),
+            None => rows.push(missing(name)),
+        }
     }
-    Ok(rows)
+    rows
 }

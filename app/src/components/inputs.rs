@@ -225,72 +225,59 @@ pub fn CropPicker() -> impl IntoView {
     }
 }
 
-/// The state of the page's copy of the tables' source texts (`crate::sources`).
-enum Fetched {
-    NotYet,
-    Loading,
-    Failed(String),
-    Ready(serde_json::Value),
-}
-
 /// Where the crop preset's numbers come from, row by row: the texts are fetched from the build's
-/// `sources.json` the first time the list is opened (and again on "Try again" after a failure).
+/// `sources.json` (`crate::sources`) the first time the list is opened, and again on "Try again"
+/// after a failure. One view with parts hidden, not swapped subtrees (smaller wasm), and signals
+/// of types the page already has.
 #[component]
 fn CropSources() -> impl IntoView {
     let state = expect_context::<AppState>();
     let crop = state.crop;
     let preset = move || crop.get().and_then(|id| CROPS.iter().find(|c| c.id == id));
-    let fetched = RwSignal::new(Fetched::NotYet);
+    // The file's text once fetched; the line under the summary (loading, or why it failed).
+    let file = RwSignal::new(None::<String>);
+    let status = RwSignal::new(None::<String>);
+    let failed = RwSignal::new(false);
     let load = move || {
-        fetched.set(Fetched::Loading);
+        status.set(Some("Loading the sources…".to_string()));
+        failed.set(false);
         leptos::task::spawn_local(async move {
-            fetched.set(match crate::sources::fetch().await {
-                Ok(file) => Fetched::Ready(file),
-                Err(why) => Fetched::Failed(why),
-            });
+            match crate::sources::fetch().await {
+                Ok(text) => {
+                    file.set(Some(text));
+                    status.set(None);
+                }
+                Err(why) => {
+                    status.set(Some(why));
+                    failed.set(true);
+                }
+            }
         });
     };
     let on_toggle = move |ev: leptos::ev::Event| {
         let open = event_target::<web_sys::HtmlDetailsElement>(&ev).open();
-        if open && fetched.with_untracked(|f| matches!(f, Fetched::NotYet | Fetched::Failed(_))) {
+        // Not fetched yet, and not on its way (idle, or failed and waiting for another try).
+        let idle = status.with_untracked(Option::is_none) || failed.get_untracked();
+        if open && file.with_untracked(Option::is_none) && idle {
             load();
         }
     };
-    let shown = move || {
+    let rows = move || {
         let c = preset()?;
-        Some(fetched.with(|f| match f {
-            Fetched::NotYet | Fetched::Loading => {
-                view! { <p class="sources-status">"Loading the sources…"</p> }.into_any()
-            }
-            Fetched::Failed(why) => failed(why.clone(), load),
-            Fetched::Ready(file) => match crate::sources::rows(file, c) {
-                Ok(rows) => view! {
-                    <dl class="source-list">
-                        {rows.into_iter().map(|(label, text)| view! { <dt>{label}</dt><dd>{text}</dd> }).collect_view()}
-                    </dl>
-                }
-                .into_any(),
-                Err(why) => view! { <p class="sources-status" role="alert">{why}</p> }.into_any(),
-            },
-        }))
+        file.with(|f| f.as_deref().map(|text| crate::sources::rows(text, c)))
     };
     view! {
         <Show when=move || preset().is_some()>
             <details class="sources" on:toggle=on_toggle>
                 <summary>"Where the crop's numbers come from"</summary>
-                {shown}
+                <p class="sources-status" role="status" hidden=move || status.with(Option::is_none)>{move || status.get()}</p>
+                <button type="button" class="sources-retry" hidden=move || !failed.get() on:click=move |_| load()>"Try again"</button>
+                <dl class="source-list">
+                    {move || rows().into_iter().flatten().map(|(label, text)| view! { <dt>{label}</dt><dd>{text}</dd> }).collect_view()}
+                </dl>
             </details>
         </Show>
     }
-}
-
-/// Why the sources did not come, and a way to ask again.
-fn failed(why: String, retry: impl Fn() + Copy + 'static) -> AnyView {
-    view! {
-        <p class="sources-status" role="alert">{why}</p>
-        <button type="button" class="sources-retry" on:click=move |_| retry()>"Try again"</button>
-    }
-    .into_any()
 }
 
 /// The compounds a picker offers: the library's, then the grower's own if named.
