@@ -1,7 +1,7 @@
 //! The crop and compound tables' source texts, fetched from the build's `sources.json`.
 //!
 //! The page's modules are built from the core without its feature `source-texts` (every
-//! `*_source` is ""), which keeps some 80 kB of text (20 kB gzip) out of the first load. The
+//! `*_source` is ""), which keeps 67 kB of text (18.7 kB gzip) out of the first load. The
 //! build writes the texts natively from the same tables (`xtask::sources`); the page fetches the
 //! file the first time a crop's sources are opened, and the service worker precaches it with the
 //! rest of the build, so they open offline too. Read with serde_json's `Value`, which the page

@@ -7,8 +7,8 @@
 /// A source text in a data table (`crops/table.rs`, `compounds/table.rs`): the text itself with
 /// the feature `source-texts` (on by default), `""` without it. Every row keeps its source beside
 /// its number in the Rust source; a binary that never shows the texts (the page's wasm modules,
-/// which fetch them from the build's `sources.json` when asked) leaves them out and is smaller
-/// by their 80-odd kB.
+/// which fetch them from the build's `sources.json` when asked) leaves them out: 67 kB of the
+/// plan module after wasm-opt, 18.7 kB gzip.
 #[cfg(feature = "source-texts")]
 macro_rules! source {
     ($text:literal) => {
