@@ -5,6 +5,7 @@ pub mod bridge;
 pub mod components;
 pub mod fields;
 pub mod records;
+pub mod sources;
 pub mod state;
 pub mod storage;
 pub mod store;

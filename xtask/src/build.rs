@@ -178,6 +178,10 @@ pub fn build(root: &Path, tools: &BuildTools) -> Result<Built> {
         return Err(Failure::new(format!("{} does not load {script}", template_path.display())));
     }
     io_ctx(std::fs::write(dist.join("index.html"), &template), "writing dist/index.html")?;
+    // The tables' source texts, which the page's modules leave out and fetch when asked; before
+    // the file list is taken, so the offline copy holds it and the build id covers it.
+    let sources = crate::sources::sources_json()?;
+    io_ctx(std::fs::write(dist.join(crate::sources::SOURCES_FILE), sources), "writing dist/sources.json")?;
 
     // The id covers every file as built, placeholders still in, so any change to any of them
     // renames the offline cache.

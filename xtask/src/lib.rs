@@ -12,6 +12,7 @@ pub mod proc;
 pub mod serve;
 pub mod setup;
 pub mod sizes;
+pub mod sources;
 pub mod testrun;
 
 use std::fmt;

@@ -95,6 +95,20 @@ pub struct Compound {
     pub property_source: &'static str,
 }
 
+impl Compound {
+    /// Each source text of the row with what it supports (lower case: the page writes the
+    /// compound's name before it). The texts are "" in a build without the feature
+    /// `source-texts` (the page's): the build writes them natively into `sources.json`.
+    pub fn sources(&self) -> [(&'static str, &'static str); 4] {
+        [
+            ("boiling point", self.boiling_point_source),
+            ("vapour pressure", self.vapour_pressure_source),
+            ("water solubility", self.water_solubility_source),
+            ("molar mass and density", self.property_source),
+        ]
+    }
+}
+
 const LN_10: f64 = std::f64::consts::LN_10;
 const PA_PER_BAR: f64 = 1e5;
 const PA_PER_MMHG: f64 = 101_325.0 / 760.0;

@@ -139,3 +139,23 @@ pub struct Crop {
     pub distillate_temperature_c: f64,
     pub distillate_temperature_source: &'static str,
 }
+
+impl Crop {
+    /// Each source text of the row with what it supports, in the order the page lists them.
+    /// The texts are "" in a build without the feature `source-texts` (the page's): the build
+    /// writes them natively into `sources.json`, which the page fetches.
+    pub fn sources(&self) -> [(&'static str, &'static str); 10] {
+        [
+            ("Oil content", self.oil_content_source),
+            ("Composition", self.composition_source),
+            ("Oil density", self.oil_density_source),
+            ("Recovery rate", self.rate_constant_source),
+            ("Run time", self.typical_run_source),
+            ("Distillate water per kg of oil", self.water_to_oil_source),
+            ("Steam rate", self.steam_rate_source),
+            ("Packing", self.charge_density_source),
+            ("Moisture and heat capacity", self.thermal_source),
+            ("Distillate temperature", self.distillate_temperature_source),
+        ]
+    }
+}
