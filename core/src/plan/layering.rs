@@ -26,9 +26,12 @@ fn density_at(r: &Resolved, relative: f64, t_c: f64) -> f64 {
     oil_density_at_kg_per_m3(r.oil_density_kg_per_m3, t_c) * relative
 }
 
+/// Water's density by temperature, (°C, kg/m³), 1 K apart.
+type Grid = Rc<[(f64, f64)]>;
+
 thread_local! {
     /// The last grid made, by the bits of (pressure, boiling point).
-    static KEPT_GRID: RefCell<Option<((u64, u64), Rc<[(f64, f64)]>)>> = const { RefCell::new(None) };
+    static KEPT_GRID: RefCell<Option<((u64, u64), Grid)>> = const { RefCell::new(None) };
 }
 
 /// Water's density on a 1 K grid from 1 °C to the boiling point (or 99 °C): computed once,
@@ -36,14 +39,14 @@ thread_local! {
 /// most of the page's edits leave as it was, so the last grid is kept and reused for the same
 /// pressure and boiling point (bit for bit): the same numbers a fresh grid gives. One per
 /// thread.
-fn water_density_grid(pressure_pa: f64, boiling_c: f64) -> Rc<[(f64, f64)]> {
+fn water_density_grid(pressure_pa: f64, boiling_c: f64) -> Grid {
     let key = (pressure_pa.to_bits(), boiling_c.to_bits());
     if let Some(grid) =
         KEPT_GRID.with_borrow(|k| k.as_ref().filter(|(k, _)| *k == key).map(|(_, g)| g.clone()))
     {
         return grid;
     }
-    let grid: Rc<[(f64, f64)]> = fresh_water_density_grid(pressure_pa, boiling_c).into();
+    let grid: Grid = fresh_water_density_grid(pressure_pa, boiling_c).into();
     KEPT_GRID.with_borrow_mut(|k| *k = Some((key, grid.clone())));
     grid
 }
