@@ -22,6 +22,22 @@ fn from_plan(plan: PlanMemo, f: impl Fn(&Plan) -> String + Send + Sync + 'static
     })
 }
 
+/// Rows of a list or table, three texts each, as the view shows them.
+pub(crate) type Lines = Vec<(String, String, String)>;
+
+/// A list's rows from the plan, in the grower's units, kept as a memo: a list closure that read
+/// the plan itself would rebuild every row and set every attribute again on each keystroke,
+/// while most edits (the charge's mass among them) leave the cuts, the composition, the doubts
+/// and the warnings as they were. One memo type, and a plain function rather than a closure
+/// type, for every list: one copy of its code in the wasm.
+pub(crate) fn lines_from(plan: PlanMemo, f: fn(&Plan) -> Lines) -> Memo<Lines> {
+    let system = expect_context::<AppState>().units;
+    Memo::new(move |_| {
+        let system = system.get();
+        plan.with(|r| units::with_system(system, || r.as_ref().map(f).unwrap_or_default()))
+    })
+}
+
 /// "15 kg lavender at 300 m": the charge the answers on screen are for.
 fn charge_summary(s: &Scenario) -> String {
     let crop = s
@@ -258,44 +274,32 @@ const DATA_NOTES: [&str; 5] = [
 fn HowSure() -> impl IntoView {
     let state = expect_context::<AppState>();
     let plan = state.shown;
-    let lines = move || {
-        plan.with(|r| {
-            r.as_ref()
-                .map(|p| {
-                    let mut out = vec![
-                        (
-                            "doubt_run",
-                            format!("Run length: mostly {}.", doubt_words(p.ranges.run_time_s.mostly_from)),
-                        ),
-                        ("doubt_oil", format!("Oil: mostly {}.", doubt_words(p.ranges.oil_kg.mostly_from))),
-                        (
-                            "doubt_fuel",
-                            format!("Fuel: mostly {}.", doubt_words(p.ranges.fuel_amount.mostly_from)),
-                        ),
-                    ];
-                    if p.ranges.failed_ends > 0 {
-                        out.push((
-                            "doubt_left_out",
-                            "Some likely cases could not be planned at all (for example the burner at its weakest cannot keep the still going), so the ranges leave them out: the real spread is wider.".to_string(),
-                        ));
-                    }
-                    out.extend(
-                        p.warnings
-                            .iter()
-                            .filter(|w| DATA_NOTES.contains(&w.code.as_str()))
-                            .map(|w| ("data_note", w.message.clone())),
-                    );
-                    out
-                })
-                .unwrap_or_default()
-        })
-    };
+    let lines = lines_from(plan, |p| {
+        let mut out = vec![
+            ("doubt_run", format!("Run length: mostly {}.", doubt_words(p.ranges.run_time_s.mostly_from))),
+            ("doubt_oil", format!("Oil: mostly {}.", doubt_words(p.ranges.oil_kg.mostly_from))),
+            ("doubt_fuel", format!("Fuel: mostly {}.", doubt_words(p.ranges.fuel_amount.mostly_from))),
+        ];
+        if p.ranges.failed_ends > 0 {
+            out.push((
+                "doubt_left_out",
+                "Some likely cases could not be planned at all (for example the burner at its weakest cannot keep the still going), so the ranges leave them out: the real spread is wider.".to_string(),
+            ));
+        }
+        out.extend(
+            p.warnings
+                .iter()
+                .filter(|w| DATA_NOTES.contains(&w.code.as_str()))
+                .map(|w| ("data_note", w.message.clone())),
+        );
+        out.into_iter().map(|(k, t)| (k.to_string(), t, String::new())).collect()
+    });
     view! {
-        <Show when=move || !lines().is_empty()>
+        <Show when=move || lines.with(|l| !l.is_empty())>
             <details class="how-sure" data-out="how_sure">
                 <summary>"How sure is this? " <span data-out="how_sure_line">{move || plan.with(|r| r.as_ref().ok().map(|p| format!("Mostly {}.", doubt_words(p.ranges.run_time_s.mostly_from))))}</span></summary>
                 <p>"Ranges are likely lows and highs (about 1 in 10 either side) from the uncertainty of the published data and of your entries."</p>
-                <ul>{move || lines().into_iter().map(|(k, t)| view! { <li data-note=k>{t}</li> }).collect_view()}</ul>
+                <ul>{move || lines.get().into_iter().map(|(k, t, _)| view! { <li data-note=k>{t}</li> }).collect_view()}</ul>
             </details>
         </Show>
     }
@@ -306,25 +310,19 @@ fn HowSure() -> impl IntoView {
 pub fn Warnings() -> impl IntoView {
     let state = expect_context::<AppState>();
     let plan = state.shown;
-    let list = move || {
-        plan.with(|r| {
-            r.as_ref()
-                .map(|p| {
-                    p.warnings
-                        .iter()
-                        .filter(|w| !DATA_NOTES.contains(&w.code.as_str()))
-                        .cloned()
-                        .collect::<Vec<_>>()
-                })
-                .unwrap_or_default()
-        })
-    };
+    let list = lines_from(plan, |p| {
+        p.warnings
+            .iter()
+            .filter(|w| !DATA_NOTES.contains(&w.code.as_str()))
+            .map(|w| (w.code.clone(), w.message.clone(), String::new()))
+            .collect()
+    });
     view! {
-        <Show when=move || !list().is_empty()>
+        <Show when=move || list.with(|l| !l.is_empty())>
             <section class="warnings" aria-labelledby="h-warnings">
                 <h2 id="h-warnings">"Watch out"</h2>
                 <ul>
-                    {move || list().into_iter().map(|w| view! { <li data-warning=w.code>{w.message}</li> }).collect_view()}
+                    {move || list.get().into_iter().map(|(code, message, _)| view! { <li data-warning=code>{message}</li> }).collect_view()}
                 </ul>
             </section>
         </Show>
@@ -385,6 +383,38 @@ pub fn Details() -> impl IntoView {
     let fuel_of =
         move || good.with(|g| g.as_ref().map(|(s, _)| s.boiler.fuel)).unwrap_or_else(|| fuel_now.get());
     let p = move |f: fn(&Plan) -> String| from_plan(plan, f);
+    let composition = lines_from(plan, |p| {
+        p.oil
+            .components
+            .iter()
+            .map(|c| {
+                let name = format!("{}{}", c.name, if c.correlation_in_range { "" } else { " *" });
+                (name, units::percent(c.mass_fraction), units::percent(c.first_vapour_mass_fraction))
+            })
+            .collect()
+    });
+    let cuts = lines_from(plan, |p| {
+        p.codistillation
+            .cuts
+            .iter()
+            .map(|cut| {
+                let mut ranked: Vec<(usize, f64)> = cut.mass_fractions.iter().cloned().enumerate().collect();
+                ranked.sort_by(|a, b| b.1.total_cmp(&a.1));
+                let mostly = ranked
+                    .iter()
+                    .take(2)
+                    .map(|(i, w)| format!("{} {}", p.oil.components[*i].name, units::percent(*w)))
+                    .collect::<Vec<_>>()
+                    .join(", ");
+                let share = format!(
+                    "{}–{} %",
+                    units::fixed(cut.from_fraction * 100.0, 0),
+                    units::fixed(cut.to_fraction * 100.0, 0)
+                );
+                (share, units::sig3(cut.steam_kg_per_kg_oil), mostly)
+            })
+            .collect()
+    });
     view! {
         <section class="details" class:stale=move || state.stale.get() aria-labelledby="h-details">
             <h2 id="h-details">"The plan in full"</h2>
@@ -491,13 +521,9 @@ pub fn Details() -> impl IntoView {
                 <caption>"Oil composition and the first vapour"</caption>
                 <thead><tr><th scope="col">"Compound"</th><th scope="col">"In the oil"</th><th scope="col">"In the first vapour"</th></tr></thead>
                 <tbody>
-                    {move || plan.with(|r| r.as_ref().map(|p| p.oil.components.iter().map(|c| view! {
-                        <tr>
-                            <th scope="row">{c.name.clone()}{if c.correlation_in_range { "" } else { " *" }}</th>
-                            <td>{units::percent(c.mass_fraction)}</td>
-                            <td>{units::percent(c.first_vapour_mass_fraction)}</td>
-                        </tr>
-                    }).collect_view()).ok())}
+                    {move || composition.get().into_iter().map(|(name, in_oil, in_vapour)| view! {
+                        <tr><th scope="row">{name}</th><td>{in_oil}</td><td>{in_vapour}</td></tr>
+                    }).collect_view()}
                 </tbody>
             </table>
 
@@ -505,20 +531,9 @@ pub fn Details() -> impl IntoView {
                 <caption>"The distillate, cut by cut (ideal run: the light compounds come first)"</caption>
                 <thead><tr><th scope="col">"Share of the oil"</th><th scope="col">"Least steam, kg per kg of oil"</th><th scope="col">"Mostly"</th></tr></thead>
                 <tbody>
-                    {move || plan.with(|r| r.as_ref().map(|p| p.codistillation.cuts.iter().map(|cut| {
-                        let mut ranked: Vec<(usize, f64)> = cut.mass_fractions.iter().cloned().enumerate().collect();
-                        ranked.sort_by(|a, b| b.1.total_cmp(&a.1));
-                        let mostly = ranked.iter().take(2)
-                            .map(|(i, w)| format!("{} {}", p.oil.components[*i].name, units::percent(*w)))
-                            .collect::<Vec<_>>().join(", ");
-                        view! {
-                            <tr>
-                                <th scope="row">{format!("{}–{} %", units::fixed(cut.from_fraction * 100.0, 0), units::fixed(cut.to_fraction * 100.0, 0))}</th>
-                                <td>{units::sig3(cut.steam_kg_per_kg_oil)}</td>
-                                <td>{mostly}</td>
-                            </tr>
-                        }
-                    }).collect_view()).ok())}
+                    {move || cuts.get().into_iter().map(|(share, steam, mostly)| view! {
+                        <tr><th scope="row">{share}</th><td>{steam}</td><td>{mostly}</td></tr>
+                    }).collect_view()}
                 </tbody>
             </table>
 

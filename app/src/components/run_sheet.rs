@@ -4,6 +4,7 @@
 //! cautions, and blank lines for the run's actual figures.
 
 use crate::components::inputs::{CONDENSERS, FUELS, METALS};
+use crate::components::results::Lines;
 use crate::state::AppState;
 use crate::units;
 use leptos::prelude::*;
@@ -104,19 +105,43 @@ pub fn RunSheet() -> impl IntoView {
     let state = expect_context::<AppState>();
     let good = state.good;
     let system = state.units;
-    let body = move || {
+    // A memo of the sheet's texts, so the sheet is rebuilt only when one of them changes (most
+    // edits change a few values; the sections and labels stay).
+    let sheet = Memo::new(move |_| {
         let system = system.get();
         good.with(|g| {
             g.as_ref().map(|(s, p)| units::with_system(system, || sections(s, p))).unwrap_or_default()
         })
+        .into_iter()
+        .flat_map(|(h, rows)| rows.into_iter().map(move |(l, v)| (h.to_string(), l.to_string(), v)))
+        .collect::<Lines>()
+    });
+    // The sheet's shape (headings and labels, no values) changes only when a first plan comes
+    // or goes: the parts are built then, and each value follows its own line.
+    let shape = Memo::new(move |_| {
+        sheet.with(|lines| {
+            lines.iter().map(|(h, l, _)| (h.clone(), l.clone(), String::new())).collect::<Lines>()
+        })
+    });
+    let body = move || {
+        let mut parts: Vec<(String, Vec<(usize, String)>)> = Vec::new();
+        for (i, (h, l, _)) in shape.get().into_iter().enumerate() {
+            match parts.last_mut() {
+                Some((last, rows)) if *last == h => rows.push((i, l)),
+                _ => parts.push((h, vec![(i, l)])),
+            }
+        }
+        parts
     };
+    let value =
+        move |i: usize| sheet.with(|lines| lines.get(i).map(|(_, _, v)| v.clone()).unwrap_or_default());
     view! {
         <section class="run-sheet print-only" aria-hidden="true">
             <div class="sheet-grid">
                 {move || body().into_iter().map(|(h, rows)| view! {
                     <div class="sheet-part">
                         <h3>{h}</h3>
-                        <dl>{rows.into_iter().map(|(l, v)| view! { <dt>{l}</dt><dd>{v}</dd> }).collect_view()}</dl>
+                        <dl>{rows.into_iter().map(|(i, l)| view! { <dt>{l}</dt><dd>{move || value(i)}</dd> }).collect_view()}</dl>
                     </div>
                 }).collect_view()}
             </div>

@@ -5,6 +5,8 @@ use super::equilibrium::Equilibrium;
 use super::{FieldError, OilLayer, OilPlan, Resolved, compute_error};
 use crate::oil::{ideal_density_kg_per_m3, oil_density_at_kg_per_m3};
 use crate::water;
+use std::cell::RefCell;
+use std::rc::Rc;
 
 /// How near the separator temperature a density crossing counts as a risk, K. A receiver drifts
 /// by this much over a run and between day and night (common practice, no source).
@@ -24,9 +26,32 @@ fn density_at(r: &Resolved, relative: f64, t_c: f64) -> f64 {
     oil_density_at_kg_per_m3(r.oil_density_kg_per_m3, t_c) * relative
 }
 
+/// Water's density by temperature, (°C, kg/m³), 1 K apart.
+type Grid = Rc<[(f64, f64)]>;
+
+thread_local! {
+    /// The last grid made, by the bits of (pressure, boiling point).
+    static KEPT_GRID: RefCell<Option<((u64, u64), Grid)>> = const { RefCell::new(None) };
+}
+
 /// Water's density on a 1 K grid from 1 °C to the boiling point (or 99 °C): computed once,
-/// shared by every crossing search.
-fn water_density_grid(pressure_pa: f64, boiling_c: f64) -> Vec<(f64, f64)> {
+/// shared by every crossing search. Its ~100 IF97 calls depend on the pressure alone, which
+/// most of the page's edits leave as it was, so the last grid is kept and reused for the same
+/// pressure and boiling point (bit for bit): the same numbers a fresh grid gives. One per
+/// thread.
+fn water_density_grid(pressure_pa: f64, boiling_c: f64) -> Grid {
+    let key = (pressure_pa.to_bits(), boiling_c.to_bits());
+    if let Some(grid) =
+        KEPT_GRID.with_borrow(|k| k.as_ref().filter(|(k, _)| *k == key).map(|(_, g)| g.clone()))
+    {
+        return grid;
+    }
+    let grid: Grid = fresh_water_density_grid(pressure_pa, boiling_c).into();
+    KEPT_GRID.with_borrow_mut(|k| *k = Some((key, grid.clone())));
+    grid
+}
+
+fn fresh_water_density_grid(pressure_pa: f64, boiling_c: f64) -> Vec<(f64, f64)> {
     let top = (boiling_c - 0.5).min(SEARCH_TO_C);
     let mut grid = Vec::new();
     let mut t = SEARCH_FROM_C;
@@ -80,7 +105,7 @@ pub(super) fn layering(
     let cut_densities: Vec<f64> = relatives.iter().map(|q| density_at(r, *q, t_c)).collect();
     let floats = cut_densities.iter().any(|d| *d < rho_w);
     let sinks = cut_densities.iter().any(|d| *d >= rho_w);
-    let grid = if look_for_inversion { water_density_grid(pressure_pa, boiling_c) } else { Vec::new() };
+    let grid = if look_for_inversion { water_density_grid(pressure_pa, boiling_c) } else { Rc::from([]) };
     let inversion_temperature_c = crossing_c(r, 1.0, &grid, t_c);
     let near = |t: f64| (t - t_c).abs() <= INVERSION_WINDOW_K;
     let inversion_risk = inversion_temperature_c.is_some_and(near)

@@ -670,7 +670,8 @@ mod kept_tests {
     use super::*;
     use crate::crops::CROPS;
 
-    /// The plan keeps its last few stepped boils' heat capacities (`balance.rs`). A
+    /// The plan keeps its last few stepped boils' heat capacities (`balance.rs`) and
+    /// depletions (`equilibrium.rs`). A
     /// plan made on a thread that has planned other scenarios just before (so kept results are
     /// found, and others passed over) must equal the same plan made on a fresh thread, which
     /// has nothing kept.
@@ -696,6 +697,42 @@ mod kept_tests {
             let s = s.clone();
             let cold = std::thread::spawn(move || plan(&s)).join().unwrap();
             assert_eq!(warm[i], cold, "case {i}");
+        }
+    }
+
+    /// The kept depletion is reused when only what it does not depend on changes (the charge,
+    /// the boiler water, the heat, the condenser) and never when the oil, the pressure or the
+    /// target changes: every crop preset through a run of such edits, each plan made after the
+    /// one before it, equals the same plan made on a fresh thread.
+    #[test]
+    fn a_depletion_kept_from_the_last_edit_gives_the_fresh_plan() {
+        type Edit = fn(&mut Scenario);
+        let edits: [(&str, Edit); 10] = [
+            ("plant mass", |s| s.charge.plant_mass_kg = 15.5),
+            ("plant mass again", |s| s.charge.plant_mass_kg = 16.0),
+            ("boiler water", |s| s.boiler.usable_water_kg = 30.0),
+            ("heat input", |s| s.boiler.heat_input_w = 9_000.0),
+            ("cooling water", |s| s.condenser.cooling_water_inlet_c = 18.0),
+            ("target", |s| s.run.target_recovery_percent = 80.0),
+            ("altitude", |s| s.site.altitude_m = 1_200.0),
+            ("non-ideal oil", |s| s.oil.non_ideal = true),
+            ("one compound", |s| s.oil.composition = OilComposition::Compound { id: "linalool".into() }),
+            ("back to the first", |s| *s = Scenario::default()),
+        ];
+        for crop in CROPS {
+            let mut s = Scenario::default();
+            s.charge.crop = Some(crop.id.to_string());
+            let mut steps = vec![("start", s.clone())];
+            for (name, edit) in edits {
+                edit(&mut s);
+                s.charge.crop = Some(crop.id.to_string());
+                steps.push((name, s.clone()));
+            }
+            for (name, s) in steps {
+                let warm = plan(&s);
+                let cold = std::thread::spawn(move || plan(&s)).join().unwrap();
+                assert_eq!(warm, cold, "{} after the {name} edit", crop.id);
+            }
         }
     }
 }
