@@ -299,6 +299,13 @@ async fn main() -> Result<(), BoxError> {
     writeln!(md, "| native (release, opt-level 3) | {n50:.0} | {n95:.0} |")?;
     writeln!(md, "| wasm in headless Chromium (release, opt-level z) | {w50:.0} | {w95:.0} |")?;
     writeln!(md, "| ratio wasm / native | {:.2} | {:.2} |\n", w50 / n50, w95 / n95)?;
+    writeln!(
+        md,
+        "The same scenario each time, so the plan reuses what it keeps from the last plans (the \
+         depletion, the water-density grid, the boils' heat capacities; `core/src/plan/`), as an \
+         edit of the plant mass does. An edit of the oil, the site's pressure or the target pays \
+         for them again.\n"
+    )?;
 
     eprintln!("bench: keystrokes");
     let (mem0, heap0) = memory(&page).await?;
