@@ -165,8 +165,8 @@ pub(super) fn tub(req: &SizingRequest, s: &Scenario, p: &Plan) -> Result<TubChoi
         ));
     };
     let rho = water::liquid_density_kg_per_m3(req.cooling.inlet_c + 273.15, 101_325.0).unwrap_or(999.0);
-    let exact_volume_m3 = exact_water_kg / (rho * TUB_FILL_SHARE);
-    let Some(tub) = catalogue::smallest_at_least(catalogue::TUBS_M3, exact_volume_m3) else {
+    let mut exact_volume_m3 = exact_water_kg / (rho * TUB_FILL_SHARE);
+    let Some(mut tub) = catalogue::smallest_at_least(catalogue::TUBS_M3, exact_volume_m3) else {
         let largest = catalogue::TUBS_M3.last().map(|t| t.value).unwrap_or(0.0);
         let mut f = Figures::default();
         let message = format!(
@@ -181,6 +181,15 @@ pub(super) fn tub(req: &SizingRequest, s: &Scenario, p: &Plan) -> Result<TubChoi
             message,
         ));
     };
+    // The bisection stops within its tolerance above the least water, so a catalogue tub just
+    // under that figure may still hold: the plan decides, as for every other bought part.
+    while let Some(smaller) = catalogue::next_smaller(catalogue::TUBS_M3, tub.value)
+        && holds(smaller.value * TUB_FILL_SHARE * rho)
+    {
+        tub = smaller;
+        exact_volume_m3 = exact_volume_m3.min(smaller.value);
+    }
+    let exact_water_kg = exact_water_kg.min(exact_volume_m3 * rho * TUB_FILL_SHARE);
     Ok(TubChoice { exact_water_kg, exact_volume_m3, tub, water_kg: tub.value * TUB_FILL_SHARE * rho })
 }
 
