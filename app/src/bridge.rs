@@ -22,6 +22,9 @@ pub const INBOX_EVENT: &str = "stillroom-inbox";
 pub const SHOWN_EVENT: &str = "stillroom-workbench-shown";
 /// The grower switched units (detail: the units' key).
 pub const UNITS_EVENT: &str = "stillroom-units";
+/// A module copied an unreadable record aside (detail: the record's slug): the plan page's
+/// list of kept copies, read at start, is read again.
+pub const KEPT_EVENT: &str = "stillroom-kept";
 /// What an inbox item holds.
 pub const INBOX_LINK: &str = "link";
 pub const INBOX_PLAN: &str = "plan";

@@ -64,15 +64,38 @@ impl Kind {
         }
     }
 
-    /// Why `raw` is not a readable record of this kind, or `None` if it reads.
-    pub fn problem(self, raw: &str) -> Option<String> {
+    /// Whether `raw` reads as a record of this kind, every field read by the module that owns
+    /// it (the workbench's reading): what it can say of a record that reads, or why not.
+    pub fn problem(self, raw: &str) -> Result<&'static str, String> {
         match self {
-            Kind::Plan => read_scenario(raw).err(),
-            Kind::RunLog => read_runs(raw).err(),
-            Kind::Library => crate::workbench::library::read_library(raw).err(),
+            Kind::Plan => read_scenario(raw).map(|_| READS),
+            Kind::RunLog => read_runs(raw).map(|_| READS),
+            Kind::Library => crate::workbench::library::read_library(raw).map(|_| READS),
+        }
+    }
+
+    /// The plan module's reading at start: the plan read whole; the run log and the saved
+    /// plans and stills read in outline only (JSON, their version, every list item an object
+    /// with the fields it must have). Their field-by-field readers belong to the workbench
+    /// module, which reads them again when it opens and keeps aside what it cannot read: in
+    /// the plan module they would cost 15 kB gzip of the first load (DEVELOPERS.md).
+    pub fn first_look(self, raw: &str) -> Result<&'static str, String> {
+        match self {
+            Kind::Plan => self.problem(raw),
+            Kind::RunLog => runs_outline(raw).map(|_| LOOKS_WHOLE),
+            Kind::Library => crate::workbench::library::library_outline(raw).map(|_| LOOKS_WHOLE),
         }
     }
 }
+
+/// How a module reads a record before it says whether it reads: [`Kind::problem`] or
+/// [`Kind::first_look`], chosen by the module (so the other's readers stay out of its wasm).
+pub type Reading = fn(Kind, &str) -> Result<&'static str, String>;
+
+/// What [`Kind::problem`] says of a record that reads.
+pub const READS: &str = "it reads now";
+/// What [`Kind::first_look`] says of a record whose outline reads: the workbench reads the rest.
+pub const LOOKS_WHOLE: &str = "nothing wrong in its outline; the workbench reads every field";
 
 /// The scenario record. Strict: a misspelt or unknown envelope field makes it unreadable.
 #[derive(Serialize, Deserialize)]
@@ -242,23 +265,46 @@ pub fn read_strict<T: serde::de::DeserializeOwned + Serialize>(
     what: &str,
     newest: u32,
 ) -> Result<T, String> {
-    let value: Value = serde_json::from_str(raw).map_err(|e| format!("not JSON text ({e})"))?;
-    object(&value, what)?;
-    match value.get("record_version").and_then(Value::as_u64) {
-        None => return Err(format!("a saved {what} record has a whole-number record_version")),
-        Some(v) if v > u64::from(newest) => {
-            return Err(format!(
-                "it was written by a newer version of the page (record version {v}; this page reads up to {newest})"
-            ));
-        }
-        Some(_) => {}
-    }
+    let value = outline(raw, what, newest)?;
     let record: T = typed(raw)?;
     let back = serde_json::to_value(&record).map_err(|e| e.to_string())?;
     match lost_part(&value, &back, "") {
         Some(p) => Err(p),
         None => Ok(record),
     }
+}
+
+/// A record's envelope: JSON, an object, and a `record_version` this page reads (at most
+/// `newest`); the parsed text.
+pub fn outline(raw: &str, what: &str, newest: u32) -> Result<Value, String> {
+    let value: Value = serde_json::from_str(raw).map_err(|e| format!("not JSON text ({e})"))?;
+    object(&value, what)?;
+    match value.get("record_version").and_then(Value::as_u64) {
+        None => Err(format!("a saved {what} record has a whole-number record_version")),
+        Some(v) if v > u64::from(newest) => Err(format!(
+            "it was written by a newer version of the page (record version {v}; this page reads up to {newest})"
+        )),
+        Some(_) => Ok(value),
+    }
+}
+
+/// Every item of the list `name` in `record` (absent or not a list: refused) an object with
+/// exactly the fields `fields`, as `what` (the library's lists, read in outline).
+pub fn items_with_fields(record: &Value, name: &str, fields: &[&str], what: &str) -> Result<(), String> {
+    let Some(list) = record.get(name).and_then(Value::as_array) else {
+        return Err(format!("a saved {what} record has a list of {name}"));
+    };
+    for (i, item) in list.iter().enumerate() {
+        object(item, what).map_err(|e| format!("{name}[{i}]: {e}"))?;
+        if let Some(missing) = fields.iter().find(|f| item.get(**f).is_none()) {
+            return Err(format!("{name}[{i}]: missing field `{missing}`"));
+        }
+        if let Some(unknown) = item.as_object().and_then(|o| o.keys().find(|k| !fields.contains(&k.as_str())))
+        {
+            return Err(format!("{name}[{i}]: unknown field `{unknown}`"));
+        }
+    }
+    Ok(())
 }
 
 /// Refuses, in the core's own words, what the core would refuse before the form is built from
@@ -315,6 +361,27 @@ pub fn read_scenario(raw: &str) -> Result<Scenario, String> {
 /// at least the plant mass, the time distilled and the oil collected. A version-1 log is
 /// migrated (its runs get no lot; the log numbers them).
 pub fn read_runs(raw: &str) -> Result<RunsRecord, String> {
+    let (value, v) = runs_outline(raw)?;
+    if v <= 1 {
+        let old: RunsRecordV1 = typed(raw)?;
+        let back = serde_json::to_value(&old.runs).map_err(|e| e.to_string())?;
+        if let Some(p) = lost_part(&value["runs"], &back, "runs") {
+            return Err(p);
+        }
+        let runs = old.runs.into_iter().map(RunV1::migrated).collect();
+        return Ok(RunsRecord { record_version: RUNS_RECORD_VERSION, runs, lot_pattern: String::new() });
+    }
+    let record: RunsRecord = typed(raw)?;
+    let back = serde_json::to_value(&record).map_err(|e| e.to_string())?;
+    match lost_part(&value, &back, "") {
+        Some(p) => Err(p),
+        None => Ok(record),
+    }
+}
+
+/// A run log's outline ([`read_runs`] without the typed fields): its size, JSON, its version,
+/// and every run an object with the fields a run must have; the parsed text and its version.
+pub fn runs_outline(raw: &str) -> Result<(Value, u64), String> {
     if raw.len() > MAX_RUNS_TEXT_BYTES {
         return Err(format!(
             "the run log is {} kB, more than the {} kB this page reads",
@@ -341,27 +408,46 @@ pub fn read_runs(raw: &str) -> Result<RunsRecord, String> {
             }
         }
     }
-    if v <= 1 {
-        let old: RunsRecordV1 = typed(raw)?;
-        let back = serde_json::to_value(&old.runs).map_err(|e| e.to_string())?;
-        if let Some(p) = lost_part(&value["runs"], &back, "runs") {
-            return Err(p);
-        }
-        let runs = old.runs.into_iter().map(RunV1::migrated).collect();
-        return Ok(RunsRecord { record_version: RUNS_RECORD_VERSION, runs, lot_pattern: String::new() });
-    }
-    let record: RunsRecord = typed(raw)?;
-    let back = serde_json::to_value(&record).map_err(|e| e.to_string())?;
-    match lost_part(&value, &back, "") {
-        Some(p) => Err(p),
-        None => Ok(record),
-    }
+    Ok((value, v))
 }
 
 #[cfg(test)]
 mod tests {
     use super::*;
     use wasm_bindgen_test::wasm_bindgen_test;
+
+    #[wasm_bindgen_test]
+    fn the_first_look_reads_an_outline_and_leaves_the_fields_to_the_workbench() {
+        use crate::workbench::library::{LIBRARY_VERSION, library_text};
+        let run = r#"{"plant_mass_kg":20,"distilling_time_s":3600,"oil_volume_m3":1e-5}"#;
+        let log = |run: &str| format!(r#"{{"record_version":2,"runs":[{run}]}}"#);
+        assert_eq!(Kind::RunLog.problem(&log(run)), Ok(READS));
+        assert_eq!(Kind::RunLog.first_look(&log(run)), Ok(LOOKS_WHOLE));
+        // A field of the wrong type: only the workbench's reading finds it.
+        let typo = run.replace("20", r#""twenty""#);
+        assert!(Kind::RunLog.problem(&log(&typo)).unwrap_err().contains("plant_mass_kg"));
+        assert_eq!(Kind::RunLog.first_look(&log(&typo)), Ok(LOOKS_WHOLE));
+        // What the outline refuses, the workbench refuses too, in the same words.
+        for bad in [log("{}"), log(r#"[1]"#), "{\"record_version\":3,\"runs\":[]}".to_string(), "{".into()] {
+            let look = Kind::RunLog.first_look(&bad).unwrap_err();
+            assert_eq!(Kind::RunLog.problem(&bad).unwrap_err(), look, "{bad}");
+        }
+
+        let empty = library_text(&[], &[]);
+        assert_eq!(Kind::Library.first_look(&empty), Ok(LOOKS_WHOLE));
+        let v = LIBRARY_VERSION;
+        let plan = |fields: &str| format!(r#"{{"record_version":{v},"plans":[{{{fields}}}],"stills":[]}}"#);
+        let whole = r#""id":1,"name":"A","saved_ms":0,"scenario":{}"#;
+        assert_eq!(Kind::Library.first_look(&plan(whole)), Ok(LOOKS_WHOLE));
+        let extra = format!(r#"{whole},"x":1"#);
+        assert_eq!(Kind::Library.first_look(&plan(&extra)).unwrap_err(), "plans[0]: unknown field `x`");
+        assert!(Kind::Library.problem(&plan(&extra)).unwrap_err().contains("plans[0]"));
+        let short = r#""id":1,"name":"A","saved_ms":0"#;
+        assert_eq!(Kind::Library.first_look(&plan(short)).unwrap_err(), "plans[0]: missing field `scenario`");
+        let no_stills = format!(r#"{{"record_version":{v},"plans":[]}}"#);
+        assert!(Kind::Library.first_look(&no_stills).unwrap_err().contains("stills"));
+        assert!(Kind::Library.problem(&no_stills).is_err());
+    }
 
     #[wasm_bindgen_test]
     fn a_bare_scenario_from_before_the_envelope_still_loads() {

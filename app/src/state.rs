@@ -172,11 +172,12 @@ fn save_draft(units: UnitSystem, texts: &[RwSignal<String>]) {
 impl AppState {
     /// Builds the state from saved data and wires the memos and the storage sync.
     pub fn new() -> AppState {
-        let store = Store::new();
+        let store = Store::new(Kind::first_look);
         let base = store.load(Kind::Plan, records::read_scenario).unwrap_or_default();
         // The run log and the saved plans and stills belong to the workbench; checked here too,
-        // so an unreadable one is kept aside (or held, and listed) and reported on the first
-        // screen, not only when the workbench opens.
+        // in outline (`Kind::first_look`), so one that is not JSON, of a newer version or with
+        // a malformed entry is kept aside (or held, and listed) and reported on the first
+        // screen; the workbench reads every field when it opens.
         store.check(Kind::RunLog);
         store.check(Kind::Library);
         store.report_found();

@@ -96,8 +96,9 @@ pub struct KeptCopy {
     pub held: bool,
 }
 
-/// The kept-aside copies, oldest first, after the records `held` in place.
-pub fn kept_copies(held: &[Kind]) -> Vec<KeptCopy> {
+/// The kept-aside copies, oldest first, after the records `held` in place, each read by the
+/// module's `reading`.
+pub fn kept_copies(held: &[Kind], reading: crate::records::Reading) -> Vec<KeptCopy> {
     let mut list: Vec<KeptCopy> = held
         .iter()
         .filter_map(|k| {
@@ -107,7 +108,7 @@ pub fn kept_copies(held: &[Kind]) -> Vec<KeptCopy> {
                 kind: Some(*k),
                 kept_ms: None,
                 chars: raw.chars().count(),
-                reason: k.problem(&raw).unwrap_or_else(|| "it reads now".into()),
+                reason: reading(*k, &raw).map_or_else(|why| why, str::to_string),
                 held: true,
             })
         })
@@ -127,7 +128,7 @@ pub fn kept_copies(held: &[Kind]) -> Vec<KeptCopy> {
             };
             let stamp = stamp.split('-').next().and_then(|s| s.parse::<u64>().ok()).map(|ms| ms as f64);
             let reason = match kind {
-                Some(k) => k.problem(&raw).unwrap_or_else(|| "it reads now: open it".into()),
+                Some(k) => reading(k, &raw).map_or_else(|why| why, |says| format!("{says}: open it")),
                 None => "not a record this page knows".into(),
             };
             Some(KeptCopy { key, kind, kept_ms: stamp, chars: raw.chars().count(), reason, held: false })

@@ -2,7 +2,7 @@
 //! aside or held in place, and reported), and on every change (a failure kept for the notice,
 //! with the text, to try again). The page's state holds one [`Store`].
 
-use crate::records::Kind;
+use crate::records::{Kind, Reading};
 use crate::storage::{self, KeptCopy};
 use leptos::prelude::*;
 
@@ -25,11 +25,15 @@ pub struct Store {
     pending: StoredValue<Vec<(Kind, String)>>,
     /// Records found unreadable at start: (which, held in place).
     found: StoredValue<Vec<(Kind, bool)>>,
+    /// How closely this module reads a record it does not own ([`Kind::first_look`] in the
+    /// plan module, [`Kind::problem`] in the workbench).
+    reading: Reading,
 }
 
 impl Store {
-    pub fn new() -> Store {
+    pub fn new(reading: Reading) -> Store {
         Store {
+            reading,
             notice: RwSignal::new(None),
             errors: RwSignal::new(Vec::new()),
             held: RwSignal::new(Vec::new()),
@@ -70,10 +74,11 @@ impl Store {
         out
     }
 
-    /// Checks a record another module reads ([`Kind::problem`]), so an unreadable one is kept
-    /// aside (or held) and reported on the first screen.
+    /// Checks a record another module reads (by this module's [`Reading`]), so an unreadable
+    /// one is kept aside (or held) and reported on the first screen.
     pub fn check(&self, kind: Kind) {
-        self.take(kind, &mut |raw| kind.problem(raw).is_none());
+        let reading = self.reading;
+        self.take(kind, &mut |raw| reading(kind, raw).is_ok());
     }
 
     /// [`Store::load`]'s work, once for every type: `read` says whether the text reads.
@@ -98,6 +103,7 @@ impl Store {
         let held = match storage::keep_aside(kind, &raw) {
             Ok(_) => {
                 storage::remove(kind.key());
+                crate::bridge::send(crate::bridge::KEPT_EVENT, kind.slug());
                 false
             }
             Err(_) => true,
@@ -136,7 +142,7 @@ impl Store {
     /// Lists the kept-aside copies again.
     pub fn refresh_kept(&self) {
         let held = self.held.get_untracked();
-        self.kept.set(storage::kept_copies(&held));
+        self.kept.set(storage::kept_copies(&held, self.reading));
     }
 
     /// Whether a record is held in place (unreadable, not yet copied aside).
@@ -147,7 +153,7 @@ impl Store {
     /// Tries again to copy a held record aside, so the page may save under its key.
     fn release(&self, kind: Kind) -> Result<(), String> {
         let raw = match storage::get(kind.key()) {
-            Ok(Some(raw)) if kind.problem(&raw).is_some() => raw,
+            Ok(Some(raw)) if (self.reading)(kind, &raw).is_err() => raw,
             _ => {
                 self.held.update(|h| h.retain(|k| *k != kind));
                 return Ok(());
@@ -237,11 +243,5 @@ impl Store {
         }
         self.refresh_kept();
         gone
-    }
-}
-
-impl Default for Store {
-    fn default() -> Self {
-        Self::new()
     }
 }

@@ -149,6 +149,34 @@ async fn every_unreadable_record_is_kept_aside_reported_and_left_alone() -> Resu
 }
 
 #[tokio::test]
+async fn a_fault_inside_a_logged_run_is_kept_aside_when_the_workbench_reads_it() -> Result<(), BoxError> {
+    let page = browser::open().await?;
+    start(&page).await?;
+    let c = &page.client;
+    // Whole in outline (JSON, its version, a run with the fields a run must have), but a
+    // number typed as a word: only the workbench's field-by-field reading finds it.
+    let raw = r#"{"record_version":2,"runs":[{"plant_mass_kg":"twenty","distilling_time_s":3600,"oil_volume_m3":1e-5}]}"#;
+    c.execute(
+        "localStorage.clear(); localStorage.setItem('stillroom.runs', arguments[0]);",
+        vec![json!(raw)],
+    )
+    .await?;
+    reload(&page).await?;
+    plans(c).await?;
+    assert!(c.find(Locator::Css("[data-out=storage_notice]")).await.is_err(), "nothing to tell yet");
+    assert_eq!(kept(c).await?, Vec::<String>::new());
+    c.find(Locator::Id("mode-workbench")).await?.click().await?;
+    wait_text(c, "[data-out=workbench_notice]", &["saved run log could not be read", "kept below"]).await?;
+    assert_eq!(kept(c).await?, vec![raw.to_string()], "the copy is the stored text, unchanged");
+    // The plan page's list, read at start, now shows it with the workbench's reason.
+    wait_text(c, "[data-kept='0']", &["Saved run log", "nothing wrong in its outline", "open it"]).await?;
+    // Opened from there, the workbench says what it still cannot read.
+    c.find(Locator::Css("[data-kept='0'] .kept-open")).await?.click().await?;
+    wait_text(c, "[data-out=run_merged]", &["could not be read", "runs[0]", "plant_mass_kg"]).await?;
+    page.close().await
+}
+
+#[tokio::test]
 async fn a_record_too_large_to_copy_aside_is_never_saved_over() -> Result<(), BoxError> {
     let page = browser::open().await?;
     start(&page).await?;

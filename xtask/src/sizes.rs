@@ -9,11 +9,10 @@ use std::path::Path;
 pub const FIRST_LOAD_FILES: [&str; 4] =
     ["index.html", "stillroom_app.js", "stillroom_app_bg.wasm", "style.css"];
 
-/// The first-load budget, gzipped, in bytes: 341 kB, just above the 340.7 kB reached on
-/// 2026-12-03 once the tables' source texts moved out of the page's module into the fetched
-/// `sources.json`, typed numbers were read by serde_json and the Unicode case tables left
-/// (lowered from 400, 395, 380 and 366 kB; only ever lowered).
-pub const FIRST_LOAD_BUDGET_GZIP: u64 = 341_000;
+/// The first-load budget, gzipped, in bytes: 329 kB, just above the 328.8 kB reached on
+/// 2026-12-04 once the plan module read the run log and the library in outline only (lowered
+/// from 400, 395, 380, 366 and 341 kB; only ever lowered).
+pub const FIRST_LOAD_BUDGET_GZIP: u64 = 329_000;
 
 /// The length of `bytes` gzipped at the highest level.
 pub fn gzip_len(bytes: &[u8]) -> u64 {

@@ -82,11 +82,11 @@ fn KeptLine(copy: KeptCopy, index: usize) -> impl IntoView {
     // merged into the runs.
     let open = move |_| {
         let text = storage::get(&open_key).ok().flatten().unwrap_or_default();
+        // Read as the plan module reads at start: a run log or library in outline, the
+        // workbench telling what it still cannot read of the rest.
         let result = match kind {
-            Some(Kind::RunLog) => records::read_runs(&text).map(|_| bridge::INBOX_RUNLOG),
-            Some(Kind::Library) => {
-                crate::workbench::library::read_library(&text).map(|_| bridge::INBOX_LIBRARY)
-            }
+            Some(k @ Kind::RunLog) => k.first_look(&text).map(|_| bridge::INBOX_RUNLOG),
+            Some(k @ Kind::Library) => k.first_look(&text).map(|_| bridge::INBOX_LIBRARY),
             _ => records::read_scenario(&text).map(|_| bridge::INBOX_PLAN),
         };
         match result {
@@ -136,6 +136,10 @@ fn KeptLine(copy: KeptCopy, index: usize) -> impl IntoView {
 pub fn KeptAside() -> impl IntoView {
     let state = expect_context::<AppState>();
     let kept = state.store.kept;
+    // The workbench reads its records field by field when it opens, and may copy one aside.
+    let store = state.store;
+    let listener = window_event_listener_untyped(bridge::KEPT_EVENT, move |_| store.refresh_kept());
+    on_cleanup(move || listener.remove());
     view! {
         <Show when=move || kept.with(|k| !k.is_empty())>
             <section class="kept-aside" aria-labelledby="h-kept" id="kept-aside">

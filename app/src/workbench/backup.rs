@@ -86,7 +86,7 @@ pub fn export_text(wb: Workbench, lib: Library, runs: Runs) -> String {
     let library =
         lib.plans.with_untracked(|p| lib.stills.with_untracked(|s| super::library::library_text(p, s)));
     let log = runs.lot_pattern.with_untracked(|p| runs.runs.with_untracked(|r| records::runs_text(r, p)));
-    let kept: Vec<Value> = storage::kept_copies(&[])
+    let kept: Vec<Value> = storage::kept_copies(&[], Kind::problem)
         .iter()
         .map(|k| {
             serde_json::json!({
@@ -140,7 +140,7 @@ fn take_kept(shelf: Shelf, runs: Runs, key: &str, text: &str) -> Result<Merged, 
     if let Ok(m) = read {
         return Ok(m);
     }
-    let here = storage::kept_copies(&[])
+    let here = storage::kept_copies(&[], Kind::problem)
         .iter()
         .any(|k| storage::get(&k.key).ok().flatten().as_deref() == Some(text));
     if here {

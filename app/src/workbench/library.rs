@@ -83,6 +83,14 @@ pub fn library_text(plans: &[SavedPlan], stills: &[SavedStill]) -> String {
     serde_json::to_string(&record).unwrap_or_default()
 }
 
+/// A library record's outline ([`read_library`] without the typed fields): its envelope, and
+/// every saved plan and still an object with exactly the fields it must have.
+pub fn library_outline(raw: &str) -> Result<(), String> {
+    let value = records::outline(raw, "saved plans", LIBRARY_VERSION)?;
+    records::items_with_fields(&value, "plans", &["id", "name", "saved_ms", "scenario"], "saved plan")?;
+    records::items_with_fields(&value, "stills", &["id", "name", "saved_ms", "equipment"], "saved still")
+}
+
 /// Reads a stored library record, as strictly as every record (see [`crate::records`]).
 pub fn read_library(raw: &str) -> Result<LibraryRecord, String> {
     records::read_strict::<LibraryRecord>(raw, "saved plans", LIBRARY_VERSION)

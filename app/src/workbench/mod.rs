@@ -37,7 +37,7 @@ impl Workbench {
         let wb = Workbench {
             units: RwSignal::new(bridge::units()),
             current: RwSignal::new(None),
-            store: Store::new(),
+            store: Store::new(records::Kind::problem),
         };
         wb.refresh();
         wb
