@@ -43,6 +43,7 @@ pub mod separator;
 pub mod sizing;
 #[cfg(feature = "json")]
 pub mod sweep;
+mod tagged_sections;
 pub mod water;
 
 pub use plan::{Plan, plan};

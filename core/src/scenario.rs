@@ -210,7 +210,8 @@ pub enum BarometerReference {
 }
 
 /// The oil's composition.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+// Read by `tagged_sections` (not serde's derive, which buffers tagged sections), written by serde.
+#[derive(Debug, Clone, PartialEq, Serialize)]
 #[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
 #[derive(Default)]
 #[serde(deny_unknown_fields, tag = "kind", rename_all = "snake_case")]
@@ -250,7 +251,8 @@ pub struct CustomCompound {
 }
 
 /// A vapour-pressure law given by the user.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+// Read by `tagged_sections` (not serde's derive, which buffers tagged sections), written by serde.
+#[derive(Debug, Clone, PartialEq, Serialize)]
 #[cfg_attr(feature = "cli", derive(schemars::JsonSchema))]
 #[serde(deny_unknown_fields, tag = "kind", rename_all = "snake_case")]
 pub enum CustomVapourPressure {
