@@ -95,7 +95,7 @@ pub type Reading = fn(Kind, &str) -> Result<&'static str, String>;
 /// What [`Kind::problem`] says of a record that reads.
 pub const READS: &str = "it reads now";
 /// What [`Kind::first_look`] says of a record whose outline reads: the workbench reads the rest.
-pub const LOOKS_WHOLE: &str = "nothing wrong in its outline; the workbench reads every field";
+pub const LOOKS_WHOLE: &str = "its outline reads; open it and the workbench checks each field";
 
 /// The scenario record. Strict: a misspelt or unknown envelope field makes it unreadable.
 #[derive(Serialize, Deserialize)]

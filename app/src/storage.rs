@@ -128,7 +128,12 @@ pub fn kept_copies(held: &[Kind], reading: crate::records::Reading) -> Vec<KeptC
             };
             let stamp = stamp.split('-').next().and_then(|s| s.parse::<u64>().ok()).map(|ms| ms as f64);
             let reason = match kind {
-                Some(k) => reading(k, &raw).map_or_else(|why| why, |says| format!("{says}: open it")),
+                Some(k) => reading(k, &raw).map_or_else(
+                    |why| why,
+                    |says| {
+                        if says.contains("open it") { says.to_string() } else { format!("{says}: open it") }
+                    },
+                ),
                 None => "not a record this page knows".into(),
             };
             Some(KeptCopy { key, kind, kept_ms: stamp, chars: raw.chars().count(), reason, held: false })

@@ -126,13 +126,13 @@ impl Store {
         let (aside, _, is) = names(false);
         if !aside.is_empty() {
             self.say(format!(
-                "Your saved {aside} could not be read, so the page starts afresh. Nothing is lost: {is} kept below, under “Saved data the page could not read”."
+                "Your saved {aside} could not be read, so the page starts afresh. Nothing is lost: {is} kept under “Saved data the page could not read” at the top of the page."
             ));
         }
         let (held, them, is) = names(true);
         if !held.is_empty() {
             self.say(format!(
-                "Your saved {held} could not be read, and there is no room to copy {them} aside. {} where {} and the page will not save over {them}: download or delete {them} below, under “Saved data the page could not read”.",
+                "Your saved {held} could not be read, and there is no room to copy {them} aside. {} where {} and the page will not save over {them}: download or delete {them} under “Saved data the page could not read” at the top of the page.",
                 if is == "it is" { "It stays" } else { "They stay" },
                 if is == "it is" { "it is" } else { "they are" },
             ));

@@ -127,7 +127,7 @@ async fn every_unreadable_record_is_kept_aside_reported_and_left_alone() -> Resu
             "stillroom.library" => "saved plans and stills",
             _ => "saved plan",
         };
-        wait_text(c, "[data-out=storage_notice]", &[which, "could not be read", "kept below"])
+        wait_text(c, "[data-out=storage_notice]", &[which, "could not be read", "kept under"])
             .await
             .map_err(|e| format!("{raw}: {e}"))?;
         assert_eq!(
@@ -166,10 +166,20 @@ async fn a_fault_inside_a_logged_run_is_kept_aside_when_the_workbench_reads_it()
     assert!(c.find(Locator::Css("[data-out=storage_notice]")).await.is_err(), "nothing to tell yet");
     assert_eq!(kept(c).await?, Vec::<String>::new());
     c.find(Locator::Id("mode-workbench")).await?.click().await?;
-    wait_text(c, "[data-out=workbench_notice]", &["saved run log could not be read", "kept below"]).await?;
+    wait_text(
+        c,
+        "[data-out=workbench_notice]",
+        &["saved run log could not be read", "kept under", "top of the page"],
+    )
+    .await?;
     assert_eq!(kept(c).await?, vec![raw.to_string()], "the copy is the stored text, unchanged");
-    // The plan page's list, read at start, now shows it with the workbench's reason.
-    wait_text(c, "[data-kept='0']", &["Saved run log", "nothing wrong in its outline", "open it"]).await?;
+    // The plan page's list, read at start, lists it now too.
+    wait_text(
+        c,
+        "[data-kept='0']",
+        &["Saved run log", "its outline reads", "the workbench checks each field"],
+    )
+    .await?;
     // Opened from there, the workbench says what it still cannot read.
     c.find(Locator::Css("[data-kept='0'] .kept-open")).await?.click().await?;
     wait_text(c, "[data-out=run_merged]", &["could not be read", "runs[0]", "plant_mass_kg"]).await?;
