@@ -78,7 +78,7 @@ impl Kind {
     /// plans and stills read in outline only (JSON, their version, every list item an object
     /// with the fields it must have). Their field-by-field readers belong to the workbench
     /// module, which reads them again when it opens and keeps aside what it cannot read: in
-    /// the plan module they would cost 15 kB gzip of the first load (DEVELOPERS.md).
+    /// the plan module they would cost 13 kB gzip of the first load (DEVELOPERS.md).
     pub fn first_look(self, raw: &str) -> Result<&'static str, String> {
         match self {
             Kind::Plan => self.problem(raw),
