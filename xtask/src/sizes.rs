@@ -9,11 +9,11 @@ use std::path::Path;
 pub const FIRST_LOAD_FILES: [&str; 4] =
     ["index.html", "stillroom_app.js", "stillroom_app_bg.wasm", "style.css"];
 
-/// The first-load budget, gzipped, in bytes: 321 kB, just above the 320.9 kB reached on
-/// 2026-12-04 once the plan module read the run log and the library in outline only and the
-/// scenario's tagged sections by hand (lowered from 400, 395, 380, 366, 341 and 329 kB; only
-/// ever lowered).
-pub const FIRST_LOAD_BUDGET_GZIP: u64 = 321_000;
+/// The first-load budget, gzipped, in bytes: 319 kB, just above the 318.2 kB reached on
+/// 2026-12-04 once the plan module read the run log and the library in outline only, the
+/// scenario's tagged sections by hand and the full plan's rows from tables (lowered from 400,
+/// 395, 380, 366, 341, 329 and 321 kB; only ever lowered).
+pub const FIRST_LOAD_BUDGET_GZIP: u64 = 319_000;
 
 /// The length of `bytes` gzipped at the highest level.
 pub fn gzip_len(bytes: &[u8]) -> u64 {

@@ -1,12 +1,14 @@
 //! The plan, shown. Every number here comes from the core's plan through [`crate::units`].
 
+use crate::components::plan_rows::{
+    CONDENSER_ROWS, HEAT_ROWS, OIL_ROWS, Out, SEASON_ROWS, SEPARATOR_ROWS, STEAM_ROWS,
+};
 use crate::fields::{FIELDS, field};
 use crate::state::{AppState, PressureMode};
 use crate::units;
 use leptos::prelude::*;
 use stillroom_core::crops::CROPS;
-use stillroom_core::plan::{Answer, OilLayer, RunLimit, Uncertainty};
-use stillroom_core::scenario::CondenserKind;
+use stillroom_core::plan::{Answer, OilLayer, Uncertainty};
 use stillroom_core::scenario::Scenario;
 use stillroom_core::{Plan, ScenarioErrors};
 use wasm_bindgen::JsCast;
@@ -368,9 +370,12 @@ fn RecoveryChart() -> impl IntoView {
     }
 }
 
-/// A short height (mm, or inches).
-fn mm(m: f64) -> String {
-    units::millimetres(m)
+/// A table's rows, each a [`Row`] of the plan on screen.
+fn rows(plan: PlanMemo, table: &'static [Out]) -> impl IntoView + use<> {
+    table
+        .iter()
+        .map(|o| view! { <Row label=o.label out=o.out value=from_plan(plan, o.text) /> })
+        .collect_view()
 }
 
 /// The full plan, panel by panel.
@@ -378,11 +383,6 @@ fn mm(m: f64) -> String {
 pub fn Details() -> impl IntoView {
     let state = expect_context::<AppState>();
     let plan = state.shown;
-    let good = state.good;
-    let fuel_now = state.fuel;
-    let fuel_of =
-        move || good.with(|g| g.as_ref().map(|(s, _)| s.boiler.fuel)).unwrap_or_else(|| fuel_now.get());
-    let p = move |f: fn(&Plan) -> String| from_plan(plan, f);
     let composition = lines_from(plan, |p| {
         p.oil
             .components
@@ -421,101 +421,28 @@ pub fn Details() -> impl IntoView {
 
             <h3>"Steam and time"</h3>
             <dl>
-                <Row label="Air pressure at the still" out="pressure" value=p(|p| units::kpa(p.site.pressure_pa)) />
-                <Row label="Oil and water boil together at" out="codistillation_temperature" value=p(|p| units::celsius(p.codistillation.temperature_c)) />
-                <Row label="below water's own boiling point by" out="codistillation_lowering" value=p(|p| units::kelvin(p.codistillation.lowering_k, 1)) />
-                <Row label="Least steam per kg of oil (a lower bound, at the start)" out="steam_per_kg_oil" value=p(|p| format!("{} kg", units::sig3(p.codistillation.min_steam_per_kg_oil))) />
-                <Row label="Least steam for this charge (a lower bound)" out="min_steam_charge" value=p(|p| format!("{} to the target, {} for all of it", units::mass(p.codistillation.min_steam_to_target_kg), units::mass(p.codistillation.min_steam_whole_charge_kg))) />
-                <Row label="Steam raised" out="steam_rate" value=p(|p| units::kg_per_hour(p.run.steam_rate_kg_per_s)) />
-                <Row label="Steam through the plant" out="specific_steam" value=p(|p| format!("{} kg/h per kg of charge", units::sig3(p.run.specific_steam_rate_kg_per_h_per_kg))) />
-                <Row label="Steam condensed warming the charge and still" out="startup_condensate" value=p(|p| units::mass(p.run.startup_condensate_kg)) />
-                <Row label="Steam after the first drop" out="distillate_steam" value=p(|p| units::mass(p.run.distillate_steam_kg)) />
-                <Row label="Planned steam over the least steam" out="steam_ratio" value=p(|p| format!("{}×", units::sig3(p.run.steam_to_minimum_ratio))) />
-                <Row label="What sets the run's length" out="limited_by" value=p(|p| match p.run.limited_by {
-                    RunLimit::Release => "oil leaving the plant".to_string(),
-                    RunLimit::Steam => "the steam's carrying power".to_string(),
-                }) />
-                <Row label="Release rate at this steam rate" out="rate_constant" value=p(|p| format!("{} per min (crop: {} per min at its usual steam)", units::sig3(p.run.rate_constant_per_min), units::sig3(p.run.reference_rate_constant_per_min))) />
-                <Row label="Steam's share of a full load of oil" out="vaporisation_efficiency" value=p(|p| units::percent(p.run.vaporisation_efficiency)) />
-                <Row label="Boiler water turned to steam" out="evaporated" value=p(|p| units::mass(p.run.boiler_water_evaporated_kg)) />
-                <Row label="Top up the boiler" out="refill" value=p(|p| match p.run.boiler_dry_after_s {
-                    Some(t) => format!("before {} after lighting ({} refill(s))", units::duration(t), p.run.refills),
-                    None => "not needed for this run".to_string(),
-                }) />
+                {rows(plan, STEAM_ROWS)}
             </dl>
             <RecoveryChart />
 
             <h3>"Heat and fuel"</h3>
             <dl>
-                <Row label="Heat reaching the water" out="useful_heat" value=p(|p| units::kilowatts(p.run.useful_heat_w)) />
-                <Row label="Fuel for the run" out="fuel" value=from_plan(plan, move |p| units::fuel(p.energy.fuel_amount, fuel_of())) />
-                <Row label="Heat: boiler water / charge / still" out="heat_split" value=p(|p| format!("{} / {} / {}",
-                    units::megajoules(p.energy.boiler_water_heating_j), units::megajoules(p.energy.charge_heating_j), units::megajoules(p.energy.still_heating_j))) />
-                <Row label="Still volume the wall loss is reckoned on" out="still_volume_used" value=p(|p| format!("{}{}", units::volume(p.run.still_volume_used_m3),
-                    if p.run.still_volume_estimated { " (estimated from the charge)" } else { "" })) />
-                <Row label="Heat: lost through the wall / carried to the condenser" out="heat_out" value=p(|p| format!("{} / {}",
-                    units::megajoules(p.energy.wall_loss_j), units::megajoules(p.energy.steam_to_condenser_j))) />
-                <Row label="Cost of the run" out="cost" value=p(|p| match &p.energy.cost {
-                    None => "add prices under “Run, season and costs”".to_string(),
-                    Some(c) => format!("{} {}{}", units::sig3(c.total), c.currency,
-                        c.per_millilitre_oil.map(units::per_oil).unwrap_or_default()),
-                }) />
+                {rows(plan, HEAT_ROWS)}
             </dl>
 
             <h3>"Condenser and water"</h3>
             <dl>
-                <Row label="Heat to take out" out="condenser_duty" value=p(|p| units::kilowatts(p.condenser.duty_w)) />
-                <Row label="Cooling water" out="cooling_flow" value=p(|p| match p.condenser.tub_feed_from_s {
-                    None if p.condenser.kind == CondenserKind::CoilInTub => "no feed: the tub's own water lasts the run".to_string(),
-                    Some(t) => format!("{}, from {} after the first drop", units::litres_per_minute(p.condenser.cooling_water_flow_kg_per_s), units::duration(t)),
-                    None => units::litres_per_minute(p.condenser.cooling_water_flow_kg_per_s),
-                }) />
-                <Row label="Cooling water per run" out="cooling_per_run" value=p(|p| units::volume(p.condenser.cooling_water_per_run_kg / 1000.0)) />
-                <Row label="Tub water lasts" out="tub_lasts" value=p(|p| match (p.condenser.kind, p.condenser.tub_lasts_s) {
-                    (CondenserKind::CoilInTub, Some(t)) => format!("{} without a cold feed", units::duration(t)),
-                    _ => "– (jacketed condenser)".to_string(),
-                }) />
-                <Row label="Tub warms over the run, without a feed" out="tub_rise" value=p(|p| p.condenser.tub_rise_over_run_k
-                    .map(|k| units::kelvin(k, 0)).unwrap_or_else(|| "– (jacketed condenser)".into())) />
-                <Row label="Tub at the end of the run" out="tub_end" value=p(|p| p.condenser.tub_end_c
-                    .map(units::celsius).unwrap_or_else(|| "– (jacketed condenser)".into())) />
-                <Row label="Distillate leaves at" out="distillate_outlet" value=p(|p| units::celsius(p.condenser.distillate_outlet_c)) />
-                <Row label="Cooling area needed" out="condenser_area" value=p(|p| units::area(p.condenser.area_m2)) />
-                <Row label="Tube length" out="tube_length" value=p(|p| units::length(p.condenser.tube_length_m)) />
-                <Row label="Water for the run, boiler and cooling" out="total_water" value=p(|p| units::volume(p.water_use.total_kg / 1000.0)) />
-                <Row label="Hydrosol (distillate water)" out="hydrosol" value=p(|p| units::volume(p.run.hydrosol_volume_m3)) />
+                {rows(plan, CONDENSER_ROWS)}
             </dl>
 
             <h3>"Separator"</h3>
             <dl>
-                <Row label="Distillate flow" out="distillate_flow" value=p(|p| units::litres_per_hour(p.separator.distillate_flow_m3_per_s)) />
-                <Row label="Oil gathers at the" out="oil_layer" value=p(|p| match p.separator.oil_outlet {
-                    OilLayer::Top => "top: water leaves from the bottom".to_string(),
-                    OilLayer::Bottom => "bottom: water leaves from the top".to_string(),
-                }) />
-                <Row label="Design droplet moves" out="droplet_velocity" value=p(|p| format!("{} {}", units::mm_per_s(p.separator.droplet_velocity_m_per_s.abs()),
-                    if p.separator.droplet_velocity_m_per_s >= 0.0 { "up" } else { "down" })) />
-                <Row label="Least surface area" out="separator_area" value=p(|p| p.separator.plan_area_m2.map(units::area).unwrap_or_else(|| "no gravity separation".into())) />
-                <Row label="A vessel that works: diameter" out="separator_diameter" value=p(|p| p.separator.diameter_m.map(units::length).unwrap_or_else(|| "–".into())) />
-                <Row label="Volume for the standing time" out="separator_volume" value=p(|p| units::volume(p.separator.volume_m3)) />
-                <Row label="and liquid height (top outlet)" out="separator_height" value=p(|p| p.separator.height_m.map(units::length).unwrap_or_else(|| "–".into())) />
-                <Row label="Gooseneck outlet height" out="gooseneck_height" value=p(|p| p.separator.gooseneck_height_m.map(mm).unwrap_or_else(|| "–".into())) />
-                <Row label="Oil-water interface at" out="interface_height" value=p(|p| p.separator.interface_height_m.map(|h| format!("{} ({} to {} over the cuts)", mm(h),
-                    mm(p.separator.interface_low_m.unwrap_or(h)), mm(p.separator.interface_high_m.unwrap_or(h)))).unwrap_or_else(|| "–".into())) />
-                <Row label="Interface moves per mm of gooseneck" out="interface_sensitivity" value=p(|p| p.separator.interface_per_gooseneck.map(|k| format!("{} mm", units::sig3(k))).unwrap_or_else(|| "–".into())) />
-                <Row label="Oil density at the separator" out="oil_density_separator" value=p(|p| format!("{} g/mL{}", units::fixed(p.oil.density_at_separator_kg_per_m3 / 1000.0, 3),
-                    p.oil.inversion_temperature_c.map(|t| format!("; as dense as water at {}", units::celsius(t))).unwrap_or_default())) />
+                {rows(plan, SEPARATOR_ROWS)}
             </dl>
 
             <h3>"Oil and hydrosol"</h3>
             <dl>
-                <Row label="Oil in the charge" out="oil_in_charge" value=p(|p| units::mass(p.yield_estimate.oil_in_charge_kg)) />
-                <Row label="Oil carried over" out="oil_carried" value=p(|p| units::mass(p.yield_estimate.carried_over_kg)) />
-                <Row label="Oil that separates" out="oil_mass" value=p(|p| units::range(units::mass(p.yield_estimate.oil_kg.central), units::mass(p.yield_estimate.oil_kg.low), units::mass(p.yield_estimate.oil_kg.high))) />
-                <Row label="As share of the plant" out="oil_share" value=p(|p| format!("{} %", units::sig3(p.yield_estimate.recovery_percent_of_plant.central))) />
-                <Row label="Water to oil" out="water_to_oil" value=p(|p| format!("{} : 1", units::sig3(p.run.water_to_oil_ratio))) />
-                <Row label="Oil dissolved in the hydrosol" out="dissolved" value=p(|p| format!("{} ({})", units::mass(p.yield_estimate.dissolved_in_hydrosol_kg), units::percent(p.yield_estimate.dissolved_share))) />
-                <Row label="Oil density used" out="oil_density" value=p(|p| format!("{} g/mL", units::fixed(p.oil.density_kg_per_m3 / 1000.0, 3))) />
+                {rows(plan, OIL_ROWS)}
             </dl>
             <table class="composition">
                 <caption>"Oil composition and the first vapour"</caption>
@@ -540,13 +467,7 @@ pub fn Details() -> impl IntoView {
             <Show when=move || plan.with(|r| r.as_ref().map(|p| p.season.is_some()).unwrap_or(false))>
                 <h3>"Season"</h3>
                 <dl>
-                    <Row label="The still holds, at usual packing" out="still_capacity" value=p(|p| p.season.as_ref().and_then(|s| s.still_capacity_kg).map(units::mass).unwrap_or_else(|| "give the still volume".into())) />
-                    <Row label="Charges" out="season_charges" value=p(|p| p.season.as_ref().map(|s| s.charges.to_string()).unwrap_or_default()) />
-                    <Row label="First charge, from cold / each later one, hot" out="season_charge_times" value=p(|p| p.season.as_ref().map(|s| format!("{} / {}", units::duration(s.first_charge_time_s), units::duration(s.later_charge_time_s))).unwrap_or_default()) />
-                    <Row label="Still time, with turnarounds" out="season_time" value=p(|p| p.season.as_ref().map(|s| format!("{} h", units::sig3(s.total_time_s / 3600.0))).unwrap_or_default()) />
-                    <Row label="Fuel" out="season_fuel" value=from_plan(plan, move |p| p.season.as_ref().map(|s| units::fuel(s.fuel_amount, fuel_of())).unwrap_or_default()) />
-                    <Row label="Water" out="season_water" value=p(|p| p.season.as_ref().map(|s| units::volume(s.water_kg / 1000.0)).unwrap_or_default()) />
-                    <Row label="Oil" out="season_oil" value=p(|p| p.season.as_ref().map(|s| units::mass(s.oil_kg)).unwrap_or_default()) />
+                    {rows(plan, SEASON_ROWS)}
                 </dl>
             </Show>
         </section>
