@@ -130,8 +130,13 @@ pub fn kept_copies(held: &[Kind], reading: crate::records::Reading) -> Vec<KeptC
             let reason = match kind {
                 Some(k) => reading(k, &raw).map_or_else(
                     |why| why,
+                    // The outline's verdict already says to open it.
                     |says| {
-                        if says.contains("open it") { says.to_string() } else { format!("{says}: open it") }
+                        if says == crate::records::READS {
+                            format!("{says}: open it")
+                        } else {
+                            says.to_string()
+                        }
                     },
                 ),
                 None => "not a record this page knows".into(),

@@ -172,9 +172,6 @@ pub fn Headline() -> impl IntoView {
         let system = units_signal.get();
         good.with(|g| g.as_ref().map(|(s, _)| units::with_system(system, || charge_summary(s))))
     };
-    let fuel_now = state.fuel;
-    let fuel_of =
-        move || good.with(|g| g.as_ref().map(|(s, _)| s.boiler.fuel)).unwrap_or_else(|| fuel_now.get());
     view! {
         <section class="headline" class:stale=move || stale.get() aria-labelledby="h-headline" aria-live="polite">
             <h2 id="h-headline">"The run at a glance"</h2>
@@ -212,8 +209,8 @@ pub fn Headline() -> impl IntoView {
                     value=from_plan(plan, |p| units::duration(p.run.total_time_s))
                     note=from_plan(plan, |p| format!("{} in all; distilling {} ({} to {})", likely(&p.ranges.total_time_s, units::duration), units::duration(p.run.time_after_first_drop_s), units::duration(p.ranges.run_time_s.low), units::duration(p.ranges.run_time_s.high))) />
                 <Card label="Fuel for the run" out="fuel_total"
-                    value=from_plan(plan, move |p| units::fuel(p.energy.fuel_amount, fuel_of()))
-                    note=from_plan(plan, move |p| likely(&p.ranges.fuel_amount, |v| units::fuel(v, fuel_of()))) />
+                    value=from_plan(plan, |p| units::fuel(p.energy.fuel_amount, p.energy.fuel))
+                    note=from_plan(plan, |p| likely(&p.ranges.fuel_amount, |v| units::fuel(v, p.energy.fuel))) />
                 <Card label="Oil to expect" out="oil_volume"
                     value=from_plan(plan, |p| if p.yield_estimate.hydrosol_is_the_product {
                         "almost none".to_string()
